@@ -1,0 +1,34 @@
+import { z } from 'zod'
+
+/**
+ * Stable error codes of the API. Clients branch on `code`, never on `message`,
+ * which is for people.
+ */
+export const errorCodeSchema = z.enum([
+  'validation_failed', // 400: `fields` says which field and why
+  'malformed_json', // 400: the body is not JSON
+  'unauthenticated', // 401: no or an expired access token
+  'invalid_credentials', // 401: sign-in failed (never says which half was wrong)
+  'invalid_token', // 400: a reset/invitation/refresh token that is unknown, used or expired
+  'forbidden', // 403: signed in, but the role does not allow it
+  'not_found', // 404
+  'conflict', // 409: e.g. the e-mail is taken, the last owner would leave
+  'payload_too_large', // 413
+  'rate_limited', // 429
+  'internal', // 500: nothing internal is leaked
+])
+export type ErrorCode = z.infer<typeof errorCodeSchema>
+
+/** The one error body of the API: `{ error: { code, message, fields? } }`. */
+export const errorBodySchema = z.object({
+  error: z.object({
+    code: errorCodeSchema,
+    message: z.string(),
+    /** Field path (dot-joined, e.g. `password` or `members.0.role`) -> message. */
+    fields: z.record(z.string(), z.string()).optional(),
+  }),
+})
+export type ErrorBody = z.infer<typeof errorBodySchema>
+
+/** The largest JSON body the API accepts. */
+export const JSON_BODY_LIMIT_BYTES = 1024 * 1024
