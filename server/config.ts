@@ -1,0 +1,79 @@
+/**
+ * Everything the server reads from the environment, in one typed object.
+ * The README's Configuration table lists the same names.
+ */
+import crypto from 'node:crypto'
+import fs from 'node:fs'
+import path from 'node:path'
+import { dataDir, databaseUrl, mainCluster } from './db/cluster'
+
+export interface ServerConfig {
+  host: string
+  port: number
+  /** Base of the links in e-mails (reset, invitation). */
+  publicUrl: string
+  databaseUrl: string
+  jwtSecret: string
+  /** null: no real SMTP server, so the in-process sink receives every message. */
+  smtpUrl: string | null
+  /** Port of the in-process SMTP sink; 0 picks a free one. */
+  smtpSinkPort: number
+  mailFrom: string
+  /** Attempts per client address and window on sign-in, sign-up, forgot and reset. */
+  authRateLimit: { max: number; windowMs: number }
+  logLevel: string
+  /** Folder of the built client (vite build); null serves no client (dev, tests). */
+  clientDir: string | null
+  /** Set the Secure flag on the refresh cookie (behind HTTPS). */
+  secureCookies: boolean
+  seedDemo: boolean
+}
+
+function intEnv(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
+  const raw = env[name]
+  if (raw === undefined || raw === '') return fallback
+  const n = Number(raw)
+  if (!Number.isInteger(n) || n < 0) throw new Error(`${name} must be a non-negative integer, got "${raw}"`)
+  return n
+}
+
+/**
+ * JWT_SECRET wins; otherwise a random secret generated once into the data
+ * folder (mode 600), so sign-ins survive restarts and nothing is committed.
+ */
+export function loadJwtSecret(env: NodeJS.ProcessEnv = process.env): string {
+  if (env.JWT_SECRET) {
+    if (env.JWT_SECRET.length < 32) throw new Error('JWT_SECRET must have at least 32 characters')
+    return env.JWT_SECRET
+  }
+  const file = path.join(dataDir, 'jwt-secret')
+  if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim()
+  fs.mkdirSync(dataDir, { recursive: true })
+  const secret = crypto.randomBytes(48).toString('base64url')
+  fs.writeFileSync(file, `${secret}\n`, { mode: 0o600, flag: 'wx' })
+  return secret
+}
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
+  const host = env.HOST ?? '127.0.0.1'
+  const port = intEnv(env, 'PORT', 3000)
+  const production = env.NODE_ENV === 'production'
+  return {
+    host,
+    port,
+    publicUrl: (env.PUBLIC_URL ?? `http://${host}:${port}`).replace(/\/$/, ''),
+    databaseUrl: env.DATABASE_URL ?? databaseUrl(mainCluster),
+    jwtSecret: loadJwtSecret(env),
+    smtpUrl: env.SMTP_URL || null,
+    smtpSinkPort: intEnv(env, 'SMTP_SINK_PORT', 2525),
+    mailFrom: env.MAIL_FROM ?? 'Chimeline <no-reply@chimeline.localhost>',
+    authRateLimit: {
+      max: intEnv(env, 'AUTH_RATE_LIMIT_MAX', 10),
+      windowMs: intEnv(env, 'AUTH_RATE_LIMIT_WINDOW_MS', 15 * 60 * 1000),
+    },
+    logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
+    clientDir: env.CLIENT_DIR === '' ? null : path.resolve(env.CLIENT_DIR ?? 'dist'),
+    secureCookies: (env.PUBLIC_URL ?? '').startsWith('https:'),
+    seedDemo: !production || env.CHIMELINE_SEED_DEMO === '1',
+  }
+}

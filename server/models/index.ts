@@ -1,0 +1,22 @@
+import type { Sequelize } from 'sequelize'
+import { Invitation } from './invitation'
+import { Membership } from './membership'
+import { OutboxMessage } from './outbox-message'
+import { PasswordReset } from './password-reset'
+import { RefreshToken } from './refresh-token'
+import { User } from './user'
+import { Workspace } from './workspace'
+
+export { Invitation, Membership, OutboxMessage, PasswordReset, RefreshToken, User, Workspace }
+
+/** Binds every model to the connection and declares the associations. */
+export function initModels(sequelize: Sequelize): void {
+  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage]) {
+    model.initModel(sequelize)
+  }
+  Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' })
+  Membership.belongsTo(Workspace, { as: 'workspace', foreignKey: 'workspaceId' })
+  Workspace.hasMany(Membership, { as: 'memberships', foreignKey: 'workspaceId' })
+  User.hasMany(Membership, { as: 'memberships', foreignKey: 'userId' })
+  Invitation.belongsTo(User, { as: 'invitedBy', foreignKey: 'invitedById' })
+}
