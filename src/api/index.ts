@@ -1,0 +1,19 @@
+import { createAdminApi } from './admin'
+import { createAuthApi } from './auth'
+import { createHttp, type HttpOptions } from './http'
+import { createWorkspaceApi } from './workspaces'
+
+export { ApiError, type ApiErrorCode } from './errors'
+export type { AuthHooks } from './http'
+
+/** The typed API: one namespace per resource, every answer checked against shared/schemas. */
+export function createApi(options: HttpOptions = {}) {
+  const http = createHttp(options)
+  return {
+    auth: createAuthApi(http),
+    workspaces: createWorkspaceApi(http),
+    admin: createAdminApi(http),
+  }
+}
+
+export type Api = ReturnType<typeof createApi>
