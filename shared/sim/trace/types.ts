@@ -1,0 +1,205 @@
+/**
+ * The trace a timing run returns. It is compact by construction: per-lane
+ * phase times and all spans live in typed arrays (transferable to and from a
+ * Worker as they are), per-instruction metadata in plain objects. Nothing is
+ * stored per cycle and lane; any cycle's state is derived from the phase times,
+ * the stall spans and the resource-use spans (see `laneTiming`, `laneStallAt`).
+ */
+import type { Machine } from '../../schemas/machine'
+import type { Lmul, Sew, UnitClass, VectorShape } from '../isa/types'
+
+export const STALL_REASONS = ['raw', 'bank', 'queue', 'slot', 'barrier', 'rename', 'memory', 'ring', 'frontend'] as const
+export type StallReason = (typeof STALL_REASONS)[number]
+/** Stall cycles by reason. */
+export type StallCounts = Record<StallReason, number>
+
+/** Fields of one (instruction, lane) record in `TimingTrace.laneTimes`, in this order. */
+export const LANE_FIELDS = ['elements', 'beats', 'readStart', 'readEnd', 'execStart', 'execEnd', 'writeStart', 'writeEnd'] as const
+export type LaneField = (typeof LANE_FIELDS)[number]
+export const LANE_FIELD_COUNT = LANE_FIELDS.length
+/** Stored in `laneTimes` where the JSON form has null (a lane with no active element). */
+export const NO_CYCLE = -1
+
+/** One instruction in one lane, as the JSON/summary forms show it. */
+export interface LaneTiming {
+  lane: number
+  elements: number
+  beats: number
+  readStart: number | null
+  readEnd: number | null
+  execStart: number | null
+  execEnd: number | null
+  writeStart: number | null
+  writeEnd: number | null
+}
+
+export interface InstructionTrace {
+  /** Index in the dynamic stream of vector ops (VectorOp.seq). */
+  index: number
+  staticIndex: number
+  op: string
+  text: string
+  vl: number
+  sew: Sew
+  lmul: Lmul
+  unit: UnitClass
+  shape: VectorShape
+  masked: boolean
+  isConfig: boolean
+  /** Cycle the instruction was dispatched (for vset*: executed in the front end); null if never reached. */
+  dispatch: number | null
+  /** Last cycle of the instruction's activity in any lane (last write, last element sent); null if unfinished. */
+  complete: number | null
+  /** complete - dispatch + 1, or null if unfinished. */
+  latency: number | null
+  /** Flops of the active elements. */
+  flops: number
+  /** Stall cycles attributed to this instruction, summed over lanes. */
+  stalls: StallCounts
+}
+
+/** Run-length-encoded stall spans, one per (lane, consecutive cycles, one reason, one instruction). */
+export interface StallSpans {
+  count: number
+  lane: Uint16Array
+  start: Int32Array
+  length: Int32Array
+  /** Index into STALL_REASONS. */
+  reason: Uint8Array
+  /** The instruction the lane waits to advance (InstructionTrace.index). */
+  instruction: Int32Array
+}
+
+export type ResourceKind = 'unit' | 'bank' | 'bus' | 'ring'
+
+export interface ResourceInfo {
+  id: number
+  kind: ResourceKind
+  /** e.g. 'lane 3 fpu', 'lane 3 bank 2', 'load bus 0', 'ring 3->4'. */
+  name: string
+  lane: number | null
+  /** Uses per cycle the resource allows (ports of a bank, elements of a bus, words of a link, beats of a unit). */
+  capacity: number
+}
+
+/**
+ * Run-length-encoded resource use: over `length` cycles from `start`, the
+ * instruction used `amount` of the resource each cycle. Several spans of
+ * different instructions may overlap on one resource; their amounts add up.
+ */
+export interface UsageSpans {
+  count: number
+  resource: Uint32Array
+  start: Int32Array
+  length: Int32Array
+  amount: Uint16Array
+  instruction: Int32Array
+}
+
+export interface Metrics {
+  cycles: number
+  flops: number
+  flopsPerCycle: number
+  peakFlopsPerCycle: number
+  /** Per lane: fraction of cycles in which the lane read, executed (a unit busy) or wrote. */
+  laneBusy: number[]
+  /** Per unit: beats issued / (cycles x lanes); the divider counts each cycle it is occupied. */
+  unitUtilization: Record<'alu' | 'mul' | 'fpu' | 'div', number>
+  /** Per bank index: port uses / (cycles x lanes x ports per bank). */
+  bankUtilization: number[]
+  /** Elements moved / (cycles x bus capacity x memory ports). */
+  busUtilization: { load: number; store: number }
+  /** Words moved / (cycles x links x 2 directions). */
+  ringUtilization: number
+  stallCycles: StallCounts
+}
+
+export type TimingErrorCode = 'cycle-limit' | 'trace-limit' | 'cancelled' | 'invalid-stream'
+
+export interface TimingError {
+  code: TimingErrorCode
+  message: string
+}
+
+export interface TimingTrace {
+  formatVersion: 1
+  machine: Machine
+  laneCount: number
+  /** Cycles counted from 0 to the last busy cycle, inclusive. */
+  cycles: number
+  instructions: InstructionTrace[]
+  /** instructions.length x laneCount x LANE_FIELD_COUNT, NO_CYCLE for null. */
+  laneTimes: Int32Array
+  stalls: StallSpans
+  resources: ResourceInfo[]
+  usage: UsageSpans
+  metrics: Metrics
+}
+
+/** A run always returns its trace; when it was cut short, `error` says why and the trace is partial. */
+export interface TimingResult {
+  trace: TimingTrace
+  error?: TimingError
+}
+
+export interface SimulateOptions {
+  /** Stop with a 'cycle-limit' error after this many cycles (default 5,000,000). */
+  cycleLimit?: number
+  /** Stop with a 'trace-limit' error once stall + usage spans exceed this (default 8,000,000). */
+  traceLimit?: number
+  /** Record resource-use spans (default true); totals in the metrics are kept either way. */
+  recordUsage?: boolean
+}
+
+export const DEFAULT_CYCLE_LIMIT = 5_000_000
+export const DEFAULT_TRACE_LIMIT = 8_000_000
+
+/** The record of instruction `index` in `lane`, with nulls where the lane has no active element. */
+export function laneTiming(trace: TimingTrace, index: number, lane: number): LaneTiming {
+  const base = (index * trace.laneCount + lane) * LANE_FIELD_COUNT
+  const t = trace.laneTimes
+  const cyc = (k: number) => {
+    const v = t[base + k] ?? NO_CYCLE
+    return v === NO_CYCLE ? null : v
+  }
+  return {
+    lane,
+    elements: t[base] ?? 0,
+    beats: t[base + 1] ?? 0,
+    readStart: cyc(2),
+    readEnd: cyc(3),
+    execStart: cyc(4),
+    execEnd: cyc(5),
+    writeStart: cyc(6),
+    writeEnd: cyc(7),
+  }
+}
+
+/** The stall reason of `lane` in `cycle`, or null when the lane is not stalled. Binary search over the spans. */
+export function laneStallAt(trace: TimingTrace, lane: number, cycle: number): { reason: StallReason; instruction: number } | null {
+  const s = trace.stalls
+  // Spans are stored in order of start cycle; find the last span starting at or before `cycle`.
+  let lo = 0
+  let hi = s.count - 1
+  let last = -1
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1
+    if ((s.start[mid] ?? 0) <= cycle) {
+      last = mid
+      lo = mid + 1
+    } else hi = mid - 1
+  }
+  // Spans of different lanes interleave; walk back over the few that start near `cycle`.
+  for (let i = last; i >= 0; i--) {
+    const st = s.start[i] ?? 0
+    if (s.lane[i] === lane && st + (s.length[i] ?? 0) > cycle) {
+      return { reason: STALL_REASONS[s.reason[i] ?? 0] as StallReason, instruction: s.instruction[i] ?? 0 }
+    }
+    if (s.lane[i] === lane && st + (s.length[i] ?? 0) <= cycle) return null
+  }
+  return null
+}
+
+export function emptyStallCounts(): StallCounts {
+  return { raw: 0, bank: 0, queue: 0, slot: 0, barrier: 0, rename: 0, memory: 0, ring: 0, frontend: 0 }
+}
