@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { textFieldError } from './text'
 import { emailSchema, userNameSchema, userSchema } from './user'
 
 export const PASSWORD_MIN_LENGTH = 10
@@ -6,7 +7,7 @@ export const PASSWORD_MIN_LENGTH = 10
 export const PASSWORD_MAX_LENGTH = 128
 
 export const passwordSchema = z
-  .string({ error: 'A password is required' })
+  .string({ error: textFieldError('A password') })
   .min(PASSWORD_MIN_LENGTH, `A password has at least ${PASSWORD_MIN_LENGTH} characters`)
   .max(PASSWORD_MAX_LENGTH, `A password has at most ${PASSWORD_MAX_LENGTH} characters`)
 
@@ -35,7 +36,7 @@ export type SignUpBody = z.infer<typeof signUpBodySchema>
 export const signInBodySchema = z.object({
   email: emailSchema,
   password: z
-    .string({ error: 'A password is required' })
+    .string({ error: textFieldError('A password') })
     .min(1, 'A password is required')
     .max(PASSWORD_MAX_LENGTH, `A password has at most ${PASSWORD_MAX_LENGTH} characters`),
 })
@@ -46,7 +47,7 @@ export type ForgotBody = z.infer<typeof forgotBodySchema>
 
 /** One-time tokens (reset, invitation) are base64url strings of 32 random bytes. */
 export const oneTimeTokenSchema = z
-  .string({ error: 'A token is required' })
+  .string({ error: textFieldError('A token') })
   .min(1, 'A token is required')
   .max(200, 'The token is too long')
 

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { textFieldError } from './text'
 
 /** Site-wide roles: an admin may read the Outbox and administer the site. */
 export const siteRoleSchema = z.enum(['admin', 'member'])
@@ -9,7 +10,7 @@ export const EMAIL_MAX_LENGTH = 254
 
 /** An e-mail address as users type it: trimmed and compared in lower case. */
 export const emailSchema = z
-  .string({ error: 'An e-mail address is required' })
+  .string({ error: textFieldError('An e-mail address') })
   .trim()
   .toLowerCase()
   .max(EMAIL_MAX_LENGTH, `An e-mail address has at most ${EMAIL_MAX_LENGTH} characters`)
@@ -18,7 +19,7 @@ export const emailSchema = z
 export const USER_NAME_MAX_LENGTH = 100
 
 export const userNameSchema = z
-  .string({ error: 'A name is required' })
+  .string({ error: textFieldError('A name') })
   .trim()
   .min(1, 'A name is required')
   .max(USER_NAME_MAX_LENGTH, `A name has at most ${USER_NAME_MAX_LENGTH} characters`)

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { textFieldError } from './text'
 import { emailSchema, userSchema } from './user'
 import { oneTimeTokenSchema } from './auth'
 
@@ -9,7 +10,7 @@ export type WorkspaceRole = z.infer<typeof workspaceRoleSchema>
 export const WORKSPACE_NAME_MAX_LENGTH = 80
 
 export const workspaceNameSchema = z
-  .string({ error: 'A workspace name is required' })
+  .string({ error: textFieldError('A workspace name') })
   .trim()
   .min(1, 'A workspace name is required')
   .max(WORKSPACE_NAME_MAX_LENGTH, `A workspace name has at most ${WORKSPACE_NAME_MAX_LENGTH} characters`)

@@ -1,0 +1,60 @@
+import fs from 'node:fs'
+import path from 'node:path'
+import cookieParser from 'cookie-parser'
+import express, { type Express } from 'express'
+import helmet from 'helmet'
+import { pinoHttp } from 'pino-http'
+import { JSON_BODY_LIMIT_BYTES } from '../shared/schemas/errors'
+import { createAuthenticator } from './auth/passport'
+import type { AppContext } from './context'
+import { apiNotFound, errorHandler } from './http/error-handler'
+import { secureRouter } from './http/secure-router'
+import { adminRoutes } from './routes/admin'
+import { authRoutes } from './routes/auth'
+import { healthRoutes } from './routes/health'
+import { invitationRoutes } from './routes/invitations'
+import { meRoutes } from './routes/me'
+import { workspaceRoutes } from './routes/workspaces'
+
+/** Builds the Express app: API under /api, and the built client (if any) with history fallback. */
+export function buildApp(ctx: AppContext): Express {
+  const app = express()
+  app.disable('x-powered-by')
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Served over plain HTTP on loopback: upgrading would break every asset.
+          upgradeInsecureRequests: null,
+          // Chart exports and the Worker use blob: URLs.
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          workerSrc: ["'self'", 'blob:'],
+        },
+      },
+    }),
+  )
+  app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }))
+
+  const api = secureRouter(createAuthenticator(ctx.config.jwtSecret))
+  healthRoutes(ctx, api)
+  authRoutes(ctx, api)
+  meRoutes(api)
+  workspaceRoutes(ctx, api)
+  invitationRoutes(ctx, api)
+  adminRoutes(api)
+
+  app.use('/api', express.json({ limit: JSON_BODY_LIMIT_BYTES }), cookieParser(), api.router, apiNotFound)
+
+  const clientDir = ctx.config.clientDir
+  if (clientDir && fs.existsSync(path.join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
+    // History fallback: every other GET is a client route.
+    app.get(/^(?!\/api\/).*/, (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache')
+      res.sendFile(path.join(clientDir, 'index.html'))
+    })
+  }
+
+  app.use(errorHandler)
+  return app
+}

@@ -1,0 +1,110 @@
+/**
+ * Command-line arguments of `npm run -s sim`: parsing and the `--set` overrides.
+ * Kept apart from sim.ts so that the tests can drive it without a process.
+ */
+import { parseArgs } from 'node:util'
+
+export const FORMATS = ['summary', 'json', 'csv', 'vcd'] as const
+export type Format = (typeof FORMATS)[number]
+
+export const USAGE =
+  'usage: npm run -s sim -- FILE.s [--preset NAME] [--config FILE.json] [--set path=value]... [--format summary|json|csv|vcd] [--out FILE]'
+
+/** A mistake in the command line itself: exit code 2. */
+export class UsageError extends Error {
+  override name = 'UsageError'
+}
+
+export interface SimArgs {
+  file: string
+  preset?: string
+  config?: string
+  sets: { path: string[]; raw: string; text: string }[]
+  format: Format
+  out?: string
+}
+
+export function parseSimArgs(argv: string[]): SimArgs {
+  let parsed
+  try {
+    parsed = parseArgs({
+      args: argv,
+      allowPositionals: true,
+      strict: true,
+      options: {
+        preset: { type: 'string' },
+        config: { type: 'string' },
+        set: { type: 'string', multiple: true },
+        format: { type: 'string' },
+        out: { type: 'string' },
+        help: { type: 'boolean', short: 'h' },
+      },
+    })
+  } catch (e) {
+    // node:util's messages name the option; drop its hint about '--' which does not apply here.
+    throw new UsageError(`${(e as Error).message.split('\n')[0]}; ${USAGE}`)
+  }
+  const { values, positionals } = parsed
+  if (values.help) throw new UsageError(USAGE)
+  if (positionals.length !== 1) {
+    throw new UsageError(`${positionals.length === 0 ? 'no program file given' : `one program file expected, got ${positionals.length}`}; ${USAGE}`)
+  }
+  const format = values.format ?? 'summary'
+  if (!(FORMATS as readonly string[]).includes(format)) {
+    throw new UsageError(`--format must be one of ${FORMATS.join(', ')} (got "${format}")`)
+  }
+  const sets = (values.set ?? []).map((text) => {
+    const eq = text.indexOf('=')
+    const path = eq > 0 ? text.slice(0, eq).split('.') : []
+    if (eq <= 0 || path.some((p) => p === '')) throw new UsageError(`--set expects path=value with a dotted machine field name, e.g. units.fpu.latency=6 (got "${text}")`)
+    return { path, raw: text.slice(eq + 1), text }
+  })
+  return { file: positionals[0] as string, preset: values.preset, config: values.config, sets, format: format as Format, out: values.out }
+}
+
+/** "4" -> 4, "true" -> true, "serial" -> "serial": the schema then judges the value. */
+export function coerceValue(raw: string): unknown {
+  if (raw === 'true') return true
+  if (raw === 'false') return false
+  if (raw.trim() !== '' && Number.isFinite(Number(raw))) return Number(raw)
+  return raw
+}
+
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v)
+
+/**
+ * Returns a copy of `base` with each `--set` applied. A path must name an
+ * existing leaf field of `base` (the fully defaulted machine), so that a typo
+ * is reported instead of silently ignored.
+ */
+export function applySets<T extends Record<string, unknown>>(base: T, sets: SimArgs['sets']): T {
+  const out = structuredClone(base)
+  for (const { path, raw, text } of sets) {
+    let node: Record<string, unknown> = out
+    for (const [i, key] of path.entries()) {
+      const known = Object.keys(node)
+      if (!Object.hasOwn(node, key)) {
+        const where = path.slice(0, i).join('.')
+        throw new UsageError(`--set ${text}: unknown machine field "${path.slice(0, i + 1).join('.')}"${where ? ` (fields of ${where}: ${known.join(', ')})` : ` (fields: ${known.join(', ')})`}`)
+      }
+      if (i === path.length - 1) {
+        if (isRecord(node[key])) throw new UsageError(`--set ${text}: "${path.join('.')}" is a group of fields (${Object.keys(node[key] as object).join(', ')}); set one of them`)
+        node[key] = coerceValue(raw)
+      } else {
+        const next = node[key]
+        if (!isRecord(next)) throw new UsageError(`--set ${text}: "${path.slice(0, i + 1).join('.')}" is a single field, not a group`)
+        node = next
+      }
+    }
+  }
+  return out
+}
+
+/** Deep-merges a partial machine (from --config) onto a full one; arrays and scalars replace. */
+export function mergeMachine<T extends Record<string, unknown>>(base: T, partial: Record<string, unknown>): T {
+  const out: Record<string, unknown> = structuredClone(base)
+  for (const [key, value] of Object.entries(partial)) {
+    out[key] = isRecord(value) && isRecord(out[key]) ? mergeMachine(out[key] as Record<string, unknown>, value) : value
+  }
+  return out as T
+}

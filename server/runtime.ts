@@ -1,0 +1,48 @@
+import type { Server } from 'node:http'
+import type { AddressInfo } from 'node:net'
+import { pino } from 'pino'
+import { buildApp } from './app'
+import type { ServerConfig } from './config'
+import type { AppContext } from './context'
+import { connect } from './db/connection'
+import { createMailer, sinkSmtpUrl } from './services/mailer'
+import { startSmtpSink, type SmtpSink } from './services/smtp-sink'
+
+export interface Runtime {
+  ctx: AppContext
+  app: ReturnType<typeof buildApp>
+  /** Set when SMTP_URL is unset: the in-process sink that feeds the Outbox. */
+  sink: SmtpSink | null
+  close(): Promise<void>
+}
+
+/** Connects to PostgreSQL, starts the SMTP sink when needed, builds the app. */
+export async function createRuntime(config: ServerConfig): Promise<Runtime> {
+  const logger = pino({ level: config.logLevel })
+  const sequelize = connect(config.databaseUrl)
+  const sink = config.smtpUrl ? null : await startSmtpSink(config.smtpSinkPort, logger)
+  const mailer = createMailer(config.smtpUrl ?? sinkSmtpUrl((sink as SmtpSink).port), config.mailFrom)
+  const ctx: AppContext = { config, sequelize, mailer, logger }
+  const app = buildApp(ctx)
+  return {
+    ctx,
+    app,
+    sink,
+    async close() {
+      mailer.close()
+      await sink?.close()
+      await sequelize.close()
+    },
+  }
+}
+
+/** Listens on config.host:config.port; resolves with the server and its URL. */
+export async function listen(runtime: Runtime): Promise<{ server: Server; url: string }> {
+  const { host, port } = runtime.ctx.config
+  const server = await new Promise<Server>((resolve, reject) => {
+    const s = runtime.app.listen(port, host, (err?: Error) => (err ? reject(err) : resolve(s)))
+  })
+  const address = server.address() as AddressInfo
+  return { server, url: `http://${host}:${address.port}` }
+}
+

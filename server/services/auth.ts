@@ -1,0 +1,120 @@
+import crypto from 'node:crypto'
+import { Op, UniqueConstraintError } from 'sequelize'
+import { passwordEmailProblem, REFRESH_TOKEN_TTL_SECONDS, type ResetBody, type SignInBody, type SignUpBody } from '../../shared/schemas/auth'
+import type { User as UserDto } from '../../shared/schemas/user'
+import { hashPassword, verifyPassword } from '../auth/passwords'
+import { hashToken, randomToken, signAccessToken } from '../auth/tokens'
+import type { AppContext } from '../context'
+import { errors } from '../http/errors'
+import { PasswordReset, RefreshToken, User } from '../models'
+import { passwordResetMail } from './emails'
+
+export const RESET_TOKEN_TTL_MINUTES = 30
+
+export interface Session {
+  user: UserDto
+  accessToken: string
+  /** Goes into the httpOnly cookie, never into a body. */
+  refreshToken: string
+}
+
+async function issueSession(ctx: AppContext, user: User, familyId: string = crypto.randomUUID()): Promise<Session> {
+  const refreshToken = randomToken()
+  await RefreshToken.create({
+    userId: user.id,
+    familyId,
+    tokenHash: hashToken(refreshToken),
+    expiresAt: new Date(Date.now() + REFRESH_TOKEN_TTL_SECONDS * 1000),
+  })
+  return { user: user.toDto(), accessToken: signAccessToken(user.id, ctx.config.jwtSecret), refreshToken }
+}
+
+export async function signUp(ctx: AppContext, body: SignUpBody): Promise<Session> {
+  const passwordHash = await hashPassword(body.password)
+  try {
+    const user = await User.create({ email: body.email, name: body.name, passwordHash })
+    return await issueSession(ctx, user)
+  } catch (err) {
+    // Saying so reveals that the address has an account; sign-up cannot avoid it
+    // without e-mail confirmation, and the rate limit bounds the probing.
+    if (err instanceof UniqueConstraintError) {
+      throw errors.conflict('An account with this e-mail address exists already; sign in instead', { email: 'This e-mail address is taken' })
+    }
+    throw err
+  }
+}
+
+export async function signIn(ctx: AppContext, body: SignInBody): Promise<Session> {
+  const user = await User.findOne({ where: { email: body.email } })
+  const ok = await verifyPassword(user?.passwordHash ?? null, body.password)
+  if (!user || !ok) throw errors.invalidCredentials()
+  return issueSession(ctx, user)
+}
+
+/**
+ * Rotates a refresh token: the presented one is revoked and the next one of
+ * its family issued. A revoked token presented again was stolen or replayed,
+ * so the whole family is revoked and the caller must sign in again.
+ */
+export async function refresh(ctx: AppContext, token: string | undefined): Promise<Session> {
+  if (!token) throw errors.unauthenticated('Your session has ended; sign in again')
+  const row = await RefreshToken.findOne({ where: { tokenHash: hashToken(token) } })
+  if (!row || row.expiresAt < new Date()) throw errors.unauthenticated('Your session has ended; sign in again')
+  if (row.revokedAt) {
+    await RefreshToken.update({ revokedAt: new Date() }, { where: { familyId: row.familyId, revokedAt: null } })
+    throw errors.unauthenticated('Your session has ended; sign in again')
+  }
+  // Conditional update: of two concurrent refreshes with one token, one wins.
+  const [claimed] = await RefreshToken.update({ revokedAt: new Date() }, { where: { id: row.id, revokedAt: null } })
+  if (claimed === 0) throw errors.unauthenticated('Your session has ended; sign in again')
+  const user = await User.findByPk(row.userId)
+  if (!user) throw errors.unauthenticated('Your session has ended; sign in again')
+  return issueSession(ctx, user, row.familyId)
+}
+
+export async function signOut(token: string | undefined): Promise<void> {
+  if (!token) return
+  const row = await RefreshToken.findOne({ where: { tokenHash: hashToken(token) } })
+  if (row) await RefreshToken.update({ revokedAt: new Date() }, { where: { familyId: row.familyId, revokedAt: null } })
+}
+
+/**
+ * Starts a reset. The caller answers 202 at once, whether or not the address
+ * has an account: the work below runs detached so timing does not tell either.
+ */
+export function requestPasswordReset(ctx: AppContext, email: string): void {
+  const work = async () => {
+    const user = await User.findOne({ where: { email } })
+    if (!user) return
+    const token = randomToken()
+    await PasswordReset.create({
+      userId: user.id,
+      tokenHash: hashToken(token),
+      expiresAt: new Date(Date.now() + RESET_TOKEN_TTL_MINUTES * 60 * 1000),
+    })
+    const link = `${ctx.config.publicUrl}/reset?token=${encodeURIComponent(token)}`
+    await ctx.mailer.send(passwordResetMail(user.email, user.name, link, RESET_TOKEN_TTL_MINUTES))
+  }
+  work().catch((err: unknown) => ctx.logger.error({ err }, 'password reset e-mail failed'))
+}
+
+/** Uses a reset token once: sets the password, ends every other session, signs in. */
+export async function resetPassword(ctx: AppContext, body: ResetBody): Promise<Session> {
+  const user = await ctx.sequelize.transaction(async (transaction) => {
+    const reset = await PasswordReset.findOne({
+      where: { tokenHash: hashToken(body.token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    })
+    if (!reset) throw errors.invalidToken('password reset')
+    const found = await User.findByPk(reset.userId, { transaction })
+    if (!found) throw errors.invalidToken('password reset')
+    const problem = passwordEmailProblem(body.password, found.email)
+    if (problem) throw errors.validation({ password: problem })
+    await reset.update({ usedAt: new Date() }, { transaction })
+    await found.update({ passwordHash: await hashPassword(body.password) }, { transaction })
+    await RefreshToken.update({ revokedAt: new Date() }, { where: { userId: found.id, revokedAt: null }, transaction })
+    return found
+  })
+  return issueSession(ctx, user)
+}
