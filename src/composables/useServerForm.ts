@@ -5,13 +5,14 @@ import { ApiError } from '@/api'
 
 /**
  * An NForm rule from a shared zod schema, so that the form and the server
- * reject the same values with the same words.
+ * reject the same values with the same words. An empty input counts as a
+ * missing value, so the schema's "is required" message shows for it.
  */
 export function zodRule(schema: ZodType, trigger: string[] = ['blur', 'input']): FormItemRule {
   return {
     trigger,
     validator: (_rule: FormItemRule, value: unknown) => {
-      const result = schema.safeParse(value ?? '')
+      const result = schema.safeParse(value === '' ? undefined : value)
       return result.success ? true : new Error(result.error.issues[0]?.message ?? 'Not valid')
     },
   }
