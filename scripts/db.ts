@@ -21,7 +21,8 @@ import {
   type ClusterSpec,
 } from '../server/db/cluster'
 
-async function migrate(url: string, direction: 'up' | 'down' = 'up'): Promise<string[]> {
+/** Applies pending migrations (or reverts the last one); returns their names. */
+export async function migrateDatabase(url: string, direction: 'up' | 'down' = 'up'): Promise<string[]> {
   const sequelize = connect(url)
   try {
     const migrator = createMigrator(sequelize)
@@ -38,7 +39,7 @@ export async function prepareCluster(spec: ClusterSpec, options: { recreate?: bo
   if (options.recreate) await recreateDatabase(spec)
   else await ensureDatabase(spec)
   const url = databaseUrl(spec)
-  await migrate(url)
+  await migrateDatabase(url)
   return url
 }
 
@@ -56,13 +57,13 @@ async function main(command: string | undefined): Promise<void> {
       break
     case 'migrate': {
       const url = process.env.DATABASE_URL ?? (await prepareCluster(mainCluster))
-      const names = await migrate(url)
+      const names = await migrateDatabase(url)
       console.log(names.length ? `Applied: ${names.join(', ')}` : 'No pending migrations.')
       break
     }
     case 'migrate:down': {
       const url = process.env.DATABASE_URL ?? databaseUrl(mainCluster)
-      const names = await migrate(url, 'down')
+      const names = await migrateDatabase(url, 'down')
       console.log(names.length ? `Reverted: ${names.join(', ')}` : 'Nothing to revert.')
       break
     }
