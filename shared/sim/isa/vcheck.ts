@@ -1,0 +1,135 @@
+/**
+ * Static register-group checks (RISC-V V 1.0, sections 3.4.2 "Vector Register
+ * Grouping", 5.2/5.3 on operand overlap and masking, 7.3 on EMUL).
+ *
+ * The rule: the vtype in force at each instruction is known when every path
+ * reaching it passes through a vsetvli/vsetivli with the same immediate vtype
+ * (a forward data-flow over branches and jumps; vsetvl, a call's return point
+ * and the program start make it unknown). Where it is known, each vector operand
+ * group must be aligned to its EMUL and EMUL must lie in 1/8..8. Overlap rules
+ * that need no vtype (v0 under a mask, sources of slides up, gathers, compress,
+ * mask scans and viota) are checked by register number always, and by whole
+ * groups where the vtype is known.
+ */
+import type { OpInfo, VGroup } from './table'
+import type { Operands, SimDiagnostic, SourceLoc } from './types'
+import { diag } from './diagnostics'
+import { decodeVtype, formatVtype, lmulName, type Vtype } from './vtype'
+
+export interface CheckedInstruction {
+  info: OpInfo
+  operands: Operands
+  address: number
+  loc: SourceLoc
+  /** Column of the operand that filled each key, for pointing at the culprit. */
+  columns: Partial<Record<keyof Operands, number>>
+}
+
+type State = { vtype: Vtype; line: number } | 'unknown'
+
+const same = (a: State | undefined, b: State): boolean =>
+  a !== undefined && (a === 'unknown' ? b === 'unknown' : b !== 'unknown' && formatVtype(a.vtype) === formatVtype(b.vtype))
+
+function join(a: State | undefined, b: State): State {
+  if (a === undefined) return b
+  return same(a, b) ? a : 'unknown'
+}
+
+/** The vtype known to be in force before each instruction (undefined: unreachable). */
+export function knownVtypes(code: readonly CheckedInstruction[], textBase: number): (State | undefined)[] {
+  const before: (State | undefined)[] = new Array(code.length)
+  const indexOf = (address: number): number => (address - textBase) / 4
+  const work: number[] = []
+  const flow = (i: number, s: State): void => {
+    if (i < 0 || i >= code.length || !Number.isInteger(i)) return
+    const j = join(before[i], s)
+    if (!same(before[i], j)) {
+      before[i] = j
+      work.push(i)
+    }
+  }
+  flow(0, 'unknown')
+  while (work.length) {
+    const i = work.pop() as number
+    const c = code[i] as CheckedInstruction
+    const s = before[i] as State
+    let out: State = s
+    if (c.info.op === 'vsetvli' || c.info.op === 'vsetivli') {
+      const v = decodeVtype(c.operands.vtypei ?? 0)
+      out = v ? { vtype: v, line: c.loc.line } : 'unknown'
+    } else if (c.info.op === 'vsetvl') out = 'unknown'
+    const op = c.info.op
+    const isBranch = c.info.syntax.includes('branch')
+    if (op === 'jal') {
+      flow(indexOf(c.address + (c.operands.imm ?? 0)), out)
+      if (c.operands.rd !== 0) flow(i + 1, 'unknown') // returns from a call with any vtype
+    } else if (op === 'jalr') {
+      if (c.operands.rd !== 0) flow(i + 1, 'unknown')
+    } else {
+      if (isBranch) flow(indexOf(c.address + (c.operands.imm ?? 0)), out)
+      flow(i + 1, out)
+    }
+  }
+  return before
+}
+
+function emul(group: VGroup, vt: Vtype, eew: number | undefined): number {
+  if (group === 'single') return 1
+  if (group === 'lmul') return vt.lmul
+  return ((eew ?? vt.sew) / vt.sew) * vt.lmul
+}
+
+const KEYS = ['vd', 'vs2', 'vs1'] as const
+const OVERLAP_SECTION: Record<string, string> = {
+  'vector permutation': '16.3 to 16.5',
+  'vector mask': '15',
+}
+
+/** Diagnostics for register groups and overlaps, in program order. */
+export function checkVectorOperands(code: readonly CheckedInstruction[], textBase: number): SimDiagnostic[] {
+  const out: SimDiagnostic[] = []
+  const states = knownVtypes(code, textBase)
+  code.forEach((c, i) => {
+    const { info, operands: o } = c
+    if (!info.vector || info.config) return
+    const st = states[i]
+    const known = st !== undefined && st !== 'unknown' ? st : undefined
+    const at = (key: keyof Operands): SourceLoc => ({ line: c.loc.line, column: c.columns[key] ?? c.loc.column })
+    const span: Partial<Record<(typeof KEYS)[number], [number, number]>> = {}
+    for (const key of KEYS) {
+      const g = info.groups[key]
+      const reg = o[key]
+      if (g === undefined || reg === undefined) continue
+      let size = 1
+      if (known) {
+        const e = emul(g, known.vtype, info.eew)
+        const why = `vtype ${formatVtype(known.vtype)} set on line ${known.line}`
+        if (e > 8 || e < 0.125) {
+          out.push(diag(at(key), 'emul-range', `${info.op}: ${key} needs EMUL = ${e} with ${why}, outside 1/8..8 (spec 7.3)`))
+          continue
+        }
+        size = Math.max(1, e)
+        if (reg % size !== 0) {
+          const what = g === 'eew' ? `EMUL ${lmulName(size as Vtype['lmul'])}` : `LMUL ${lmulName(known.vtype.lmul)}`
+          out.push(diag(at(key), 'lmul-align', `${info.op}: v${reg} is not a valid ${key} register group for ${what} (${why}): use a multiple of ${size} (spec 3.4.2)`))
+        }
+      }
+      span[key] = [reg, reg + size - 1]
+    }
+    const dst = span.vd
+    const destWritten = dst !== undefined && !info.memory?.isStore && info.shape !== 'reduction' && info.shape !== 'ordered-reduction'
+    if (o.vm === false && destWritten && !info.maskDest && dst[0] === 0) {
+      out.push(diag(at('vd'), 'mask-overlap', `${info.op}: the destination v${o.vd} overlaps the mask register v0 of a masked instruction (spec 5.3)`))
+    }
+    if (dst) {
+      for (const src of info.noOverlap) {
+        const s = span[src]
+        if (s && s[0] <= dst[1] && dst[0] <= s[1]) {
+          const section = OVERLAP_SECTION[info.category] ?? '5.2'
+          out.push(diag(at('vd'), 'overlap', `${info.op}: the destination v${o.vd} may not overlap the source ${src} v${o[src]} (spec ${section})`))
+        }
+      }
+    }
+  })
+  return out
+}
