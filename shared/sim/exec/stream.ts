@@ -20,11 +20,13 @@ export interface VectorOp {
   scalarBefore: number
   /** true for vsetvli/vsetivli/vsetvl: they only occupy the front end. */
   isConfig: boolean
+  /** Elements processed: vl, except vlm.v/vsm.v, which move ceil(vl / 8) bytes (eew 8). */
   vl: number
   sew: Sew
   lmul: Lmul
-  /** Effective element width of the data moved (memory ops use the EEW in the mnemonic). */
+  /** Effective element width of the data moved: SEW, or the EEW in the mnemonic of unit-stride and strided memory ops (indexed ops move SEW-wide data, see memory.indexEew). */
   eew: Sew
+  /** true when the instruction reads v0 (vm = 0): as a mask, or as the selector of vmerge/vfmerge (then every element is active). */
   masked: boolean
   unit: UnitClass
   shape: VectorShape
@@ -40,6 +42,8 @@ export interface VectorOp {
     isStore: boolean
     /** Byte address of each element 0..vl-1 (masked-off elements included, see `active`). */
     addresses: Float64Array
+    /** Indexed ops: the width of the index elements (the data moved is SEW wide). */
+    indexEew?: Sew
   }
   /** Active elements: active[i] is 1 when element i (0..vl-1) is processed, 0 when masked off; absent means all active. */
   active?: Uint8Array

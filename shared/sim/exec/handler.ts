@@ -1,0 +1,62 @@
+/**
+ * What every instruction handler gets: the machine, the static instruction and
+ * a recorder for the dynamic stream. Shared checks of vector instructions live
+ * here too.
+ */
+import type { Instruction, Sew } from '../isa/types'
+import type { MemoryPattern } from './stream'
+import { ExecFault, type Machine } from './machine'
+
+export interface VectorEvent {
+  /** Element width of the data moved; defaults to SEW. */
+  eew?: Sew
+  /** Elements processed when it differs from vl (vlm.v/vsm.v move ceil(vl / 8) bytes). */
+  vl?: number
+  dstRegs: number[]
+  srcRegs: number[][]
+  /** true when v0 selects data (vmerge, vfmerge) rather than masking elements off. */
+  v0IsSelector?: boolean
+  memory?: { pattern: MemoryPattern; isStore: boolean; addresses: Float64Array; indexEew?: Sew }
+  sourceIndex?: Int32Array
+}
+
+export interface Recorder {
+  /** false when no stream is recorded: handlers then skip building addresses and indices. */
+  readonly on: boolean
+  vector(ins: Instruction, event: VectorEvent): void
+}
+
+export type Handler = (m: Machine, ins: Instruction, rec: Recorder) => void
+
+/** A vector instruction needs a legal vtype (V 1.0 section 3.4.4: vill makes them illegal). */
+export function requireVtype(m: Machine, ins: Instruction): void {
+  if (m.vtype.vill) {
+    throw new ExecFault(
+      'illegal-vtype',
+      `illegal vtype use: ${ins.op} executed while vtype is invalid (vill); set a supported SEW/LMUL with vsetvli first`,
+    )
+  }
+}
+
+/** FP vector instructions need SEW 32 or 64 (no half precision). */
+export function requireFpSew(m: Machine, ins: Instruction): 32 | 64 {
+  requireVtype(m, ins)
+  const sew = m.vtype.sew
+  if (sew !== 32 && sew !== 64) {
+    throw new ExecFault('illegal-sew', `${ins.op} needs SEW 32 or 64 (FP32/FP64), but vtype has SEW=${sew}`)
+  }
+  return sew
+}
+
+/** V 1.0 section 5.3: a masked instruction's destination may not overlap v0 unless it writes a mask. */
+export function checkMaskOverlap(ins: Instruction, vd: number): void {
+  if (ins.operands.vm === false && vd === 0) {
+    throw new ExecFault('mask-overlap', `${ins.op}: the destination v0 of a masked instruction overlaps the mask register v0`)
+  }
+}
+
+export function operand(ins: Instruction, name: keyof Instruction['operands']): number {
+  const v = ins.operands[name]
+  if (typeof v !== 'number') throw new ExecFault('internal', `${ins.op}: missing operand ${name}`)
+  return v
+}

@@ -1,0 +1,24 @@
+/** Every executable mnemonic and its handler. */
+import type { Handler } from './handler'
+import type { Syscalls } from './scalar'
+import { scalarHandlers } from './scalar'
+import { configHandlers, type ConfigListener } from './vconfig'
+import { fpHandlers } from './vfp'
+import { intHandlers } from './vint'
+import { maskHandlers } from './vmask'
+import { memoryHandlers } from './vmem'
+import { permHandlers } from './vperm'
+import { reductionHandlers } from './vred'
+
+export function handlerTable(textBase: number, sys: Syscalls, onConfig: ConfigListener): Record<string, Handler> {
+  return {
+    ...scalarHandlers(textBase, sys),
+    ...configHandlers(onConfig),
+    ...memoryHandlers,
+    ...intHandlers,
+    ...fpHandlers,
+    ...maskHandlers,
+    ...reductionHandlers,
+    ...permHandlers,
+  }
+}

@@ -1,0 +1,139 @@
+/**
+ * Vector loads and stores (RISC-V V 1.0 section 7): unit-stride, strided,
+ * indexed (ordered and unordered alike: one hart, element order) and the mask
+ * forms vlm.v/vsm.v. Masked-off elements are not accessed.
+ */
+import type { Instruction, Lmul, Sew } from '../isa/types'
+import type { Handler } from './handler'
+import { checkMaskOverlap, operand, requireVtype } from './handler'
+import { checkGroup, ExecFault, Machine, regGroup } from './machine'
+import type { MemoryPattern } from './stream'
+
+type Pattern = Exclude<MemoryPattern, 'mask'>
+
+/** EMUL = (EEW / SEW) x LMUL must lie in [1/8, 8] (V 1.0 section 7.3). */
+function emulOf(ins: Instruction, eew: Sew, sew: Sew, lmul: Lmul): number {
+  const emul = (eew / sew) * lmul
+  if (emul < 0.125 || emul > 8) {
+    throw new ExecFault('illegal-emul', `${ins.op}: EEW=${eew} with SEW=${sew} and LMUL=${lmul} gives EMUL=${emul}, outside 1/8..8`)
+  }
+  return emul
+}
+
+function readMem(m: Machine, address: number, width: Sew): bigint | number {
+  const off = m.offset(address, width >> 3)
+  switch (width) {
+    case 8:
+      return m.mem.getUint8(off)
+    case 16:
+      return m.mem.getUint16(off, true)
+    case 32:
+      return m.mem.getUint32(off, true)
+    default:
+      return m.mem.getBigUint64(off, true)
+  }
+}
+
+function writeMem(m: Machine, address: number, width: Sew, value: bigint | number): void {
+  const off = m.offset(address, width >> 3)
+  switch (width) {
+    case 8:
+      return m.mem.setUint8(off, Number(value))
+    case 16:
+      return m.mem.setUint16(off, Number(value), true)
+    case 32:
+      return m.mem.setUint32(off, Number(value), true)
+    default:
+      return m.mem.setBigUint64(off, BigInt(value), true)
+  }
+}
+
+function readReg(m: Machine, index: number, width: Sew): bigint | number {
+  return width === 64 ? m.u64[index]! : m.ints(width, false)[index]!
+}
+
+function writeReg(m: Machine, index: number, width: Sew, value: bigint | number): void {
+  if (width === 64) m.u64[index] = BigInt(value)
+  else m.ints(width, false)[index] = Number(value)
+}
+
+function memoryOp(pattern: Pattern, eew: Sew, isStore: boolean): Handler {
+  return (m, ins, rec) => {
+    requireVtype(m, ins)
+    const { sew, lmul } = m.vtype
+    const indexed = pattern === 'indexed'
+    // Indexed accesses move SEW-wide data with EEW-wide indices.
+    const dataWidth = indexed ? sew : eew
+    const dataEmul = indexed ? lmul : emulOf(ins, eew, sew, lmul)
+    const indexEmul = indexed ? emulOf(ins, eew, sew, lmul) : 0
+    const vd = checkGroup(ins.operands.vd, dataEmul, isStore ? 'vs3' : 'vd', ins)
+    const vs2 = indexed ? checkGroup(ins.operands.vs2, indexEmul, 'vs2', ins) : 0
+    if (!isStore) checkMaskOverlap(ins, vd)
+    const vl = m.vl
+    const base = Number(m.xu[operand(ins, 'rs1')]!)
+    const stride = pattern === 'strided' ? Number(m.x[operand(ins, 'rs2')]!) : dataWidth >> 3
+    const d = m.base(vd, dataWidth)
+    const ix = m.base(vs2, eew)
+    const addresses = rec.on ? new Float64Array(vl) : undefined
+    for (let i = 0; i < vl; i++) {
+      const address = indexed ? Machine.address(BigInt(m.xu[operand(ins, 'rs1')]!), BigInt(readReg(m, ix + i, eew))) : base + i * stride
+      if (addresses) addresses[i] = address
+      if (!m.active(ins.operands.vm, i)) continue
+      if (isStore) writeMem(m, address, dataWidth, readReg(m, d + i, dataWidth))
+      else writeReg(m, d + i, dataWidth, readMem(m, address, dataWidth))
+    }
+    if (rec.on) {
+      const data = regGroup(vd, dataEmul)
+      const srcRegs = isStore ? [data] : []
+      if (indexed) srcRegs.push(regGroup(vs2, indexEmul))
+      rec.vector(ins, {
+        eew: dataWidth,
+        dstRegs: isStore ? [] : data,
+        srcRegs,
+        memory: { pattern, isStore, addresses: addresses!, ...(indexed ? { indexEew: eew } : {}) },
+      })
+    }
+  }
+}
+
+/** vlm.v / vsm.v: ceil(vl / 8) bytes, unmasked (V 1.0 section 7.4). */
+function maskMemoryOp(isStore: boolean): Handler {
+  return (m, ins, rec) => {
+    requireVtype(m, ins)
+    const vd = operand(ins, 'vd')
+    const evl = Math.ceil(m.vl / 8)
+    const base = Number(m.xu[operand(ins, 'rs1')]!)
+    const addresses = rec.on ? new Float64Array(evl) : undefined
+    for (let i = 0; i < evl; i++) {
+      const at = vd * m.vlenb + i
+      if (addresses) addresses[i] = base + i
+      if (isStore) m.mem.setUint8(m.offset(base + i, 1), m.u8[at]!)
+      else m.u8[at] = m.mem.getUint8(m.offset(base + i, 1))
+    }
+    if (rec.on) {
+      const reg = regGroup(vd, 1)
+      rec.vector(ins, {
+        eew: 8,
+        vl: evl,
+        dstRegs: isStore ? [] : reg,
+        srcRegs: isStore ? [reg] : [],
+        memory: { pattern: 'mask', isStore, addresses: addresses! },
+      })
+    }
+  }
+}
+
+export const memoryHandlers: Record<string, Handler> = {
+  'vlm.v': maskMemoryOp(false),
+  'vsm.v': maskMemoryOp(true),
+}
+for (const eew of [8, 16, 32, 64] as const) {
+  memoryHandlers[`vle${eew}.v`] = memoryOp('unit', eew, false)
+  memoryHandlers[`vse${eew}.v`] = memoryOp('unit', eew, true)
+  memoryHandlers[`vlse${eew}.v`] = memoryOp('strided', eew, false)
+  memoryHandlers[`vsse${eew}.v`] = memoryOp('strided', eew, true)
+  for (const order of ['u', 'o']) {
+    memoryHandlers[`vl${order}xei${eew}.v`] = memoryOp('indexed', eew, false)
+    memoryHandlers[`vs${order}xei${eew}.v`] = memoryOp('indexed', eew, true)
+  }
+}
