@@ -1,0 +1,47 @@
+import { expect, type Page } from '@playwright/test'
+
+/** The demo seed of issue 2 (server/services/demo-seed.ts): one password for every demo user. */
+export const DEMO_PASSWORD = 'chimeline-demo-2026'
+export const DEMO = {
+  owner: 'owner@vector-lab.test',
+  editor: 'editor@vector-lab.test',
+  viewer: 'viewer@vector-lab.test',
+  admin: 'admin@vector-lab.test',
+} as const
+
+/** Fills and sends the sign-in form on the current page (which must be /signin). */
+export async function fillSignIn(page: Page, email: string, password: string) {
+  await page.getByLabel('E-mail').fill(email)
+  await page.getByLabel('Password', { exact: true }).fill(password)
+  await page.getByRole('button', { name: 'Sign in' }).click()
+}
+
+/** Opens /signin, signs in and waits for the signed-in shell. */
+export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
+  await page.goto('/signin')
+  await fillSignIn(page, email, password)
+  await expect(page.getByTestId('user-menu')).toBeVisible()
+}
+
+/** Picks an entry of the user menu (a Naive UI dropdown) by its label. */
+export async function userMenu(page: Page, item: string) {
+  await page.getByTestId('user-menu').click()
+  await page.getByRole('menuitem', { name: item }).or(page.locator('.n-dropdown-option', { hasText: item })).first().click()
+}
+
+/**
+ * Collects console errors and uncaught exceptions, so a test can assert the page
+ * stayed clean. One error is expected and left out: a signed-out page load asks
+ * POST /api/auth/refresh whether a session cookie exists, and the answer "no"
+ * is a 401 that Chromium logs.
+ */
+export function watchConsole(page: Page): string[] {
+  const problems: string[] = []
+  page.on('console', (msg) => {
+    if (msg.type() !== 'error') return
+    if (msg.location().url.endsWith('/api/auth/refresh') && msg.text().includes('401')) return
+    problems.push(`console: ${msg.text()} (${msg.location().url})`)
+  })
+  page.on('pageerror', (err) => problems.push(`page error: ${err.message}`))
+  return problems
+}

@@ -1,0 +1,82 @@
+/**
+ * What the simulator Worker exposes through Comlink, kept apart from the
+ * Worker entry so that tests can call it directly. It drives the pure pipeline
+ * (shared/sim/run.ts) step by step, and between steps gives the event loop a
+ * turn once a time budget is spent: that is where progress is reported and a
+ * cancel call gets through. The trace goes back in its compact form, its
+ * buffers transferred, not copied.
+ */
+import * as Comlink from 'comlink'
+import { runPipelineSteps, type FunctionalResult, type RunError, type RunInput, type RunOptions, type RunProgress } from '@shared/sim/run'
+import { encodeTrace, transferablesOf, type CompactTrace } from '@shared/sim/trace/compact'
+
+export type WorkerRunResult =
+  | { ok: true; trace: CompactTrace; functional: FunctionalResult; error?: undefined }
+  | { ok: false; error: RunError; /** The partial trace of a run cut short by a limit. */ trace?: CompactTrace }
+
+export type ProgressCallback = (progress: RunProgress) => void
+
+export interface SimulatorServiceOptions {
+  /** Milliseconds of work between turns of the event loop (default 16: about one frame). */
+  sliceMs?: number
+  /** How to give the event loop a turn (default: a zero-delay timeout). */
+  yieldTurn?: () => Promise<void>
+  now?: () => number
+}
+
+export function createSimulatorService(options: SimulatorServiceOptions = {}) {
+  const sliceMs = options.sliceMs ?? 16
+  const yieldTurn = options.yieldTurn ?? (() => new Promise<void>((resolve) => setTimeout(resolve, 0)))
+  const now = options.now ?? (() => performance.now())
+  /** The run in progress; a new run or cancel() marks it cancelled. */
+  let current: { cancelled: boolean } | null = null
+
+  const withTransfer = (r: WorkerRunResult): WorkerRunResult => {
+    const buffers = new Set<ArrayBuffer>(r.trace ? transferablesOf(r.trace) : [])
+    if (r.ok) {
+      for (const a of [...r.functional.v, r.functional.memory, r.functional.output]) {
+        if (a.buffer instanceof ArrayBuffer) buffers.add(a.buffer)
+      }
+    }
+    return Comlink.transfer(r, [...buffers])
+  }
+
+  return {
+    /** Runs text or an assembled program on a machine; resolves with the compact trace or a structured error. */
+    async simulate(program: RunInput['program'], machine: unknown, runOptions: RunOptions = {}, onProgress?: ProgressCallback): Promise<WorkerRunResult> {
+      if (current) current.cancelled = true
+      const token = { cancelled: false }
+      current = token
+      const steps = runPipelineSteps({ program, machine }, runOptions)
+      let sliceStart = now()
+      try {
+        for (;;) {
+          const step = steps.next()
+          if (step.done) {
+            const r = step.value
+            if (r.ok) return withTransfer({ ok: true, trace: encodeTrace(r.trace), functional: r.functional })
+            return withTransfer({ ok: false, error: r.error, ...(r.trace ? { trace: encodeTrace(r.trace) } : {}) })
+          }
+          if (now() - sliceStart >= sliceMs) {
+            // A proxied callback answers with a promise; progress is best effort, never awaited.
+            if (onProgress) Promise.resolve(onProgress(step.value)).catch(() => undefined)
+            await yieldTurn()
+            if (token.cancelled) {
+              steps.return(undefined as never)
+              return { ok: false, error: { stage: step.value.stage, code: 'cancelled', message: 'The run was cancelled.' } }
+            }
+            sliceStart = now()
+          }
+        }
+      } finally {
+        if (current === token) current = null
+      }
+    },
+    /** Cancels the run in progress, if any; it resolves with a 'cancelled' error at its next step. */
+    cancel(): void {
+      if (current) current.cancelled = true
+    },
+  }
+}
+
+export type SimulatorService = ReturnType<typeof createSimulatorService>
