@@ -8,7 +8,7 @@
  *   npx tsx scripts/db.ts test-setup     start the test cluster, recreate chimeline_test, migrate
  *   npx tsx scripts/db.ts test-teardown  stop the test cluster
  */
-import { connect } from '../server/db/connection'
+import { openConnection } from '../server/db/connection'
 import { createMigrator } from '../server/db/migrator'
 import {
   databaseUrl,
@@ -23,7 +23,7 @@ import {
 
 /** Applies pending migrations (or reverts the last one); returns their names. */
 export async function migrateDatabase(url: string, direction: 'up' | 'down' = 'up'): Promise<string[]> {
-  const sequelize = connect(url)
+  const sequelize = openConnection(url)
   try {
     const migrator = createMigrator(sequelize)
     const done = direction === 'up' ? await migrator.up() : await migrator.down()

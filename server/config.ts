@@ -41,14 +41,14 @@ function intEnv(env: NodeJS.ProcessEnv, name: string, fallback: number): number 
  * JWT_SECRET wins; otherwise a random secret generated once into the data
  * folder (mode 600), so sign-ins survive restarts and nothing is committed.
  */
-export function loadJwtSecret(env: NodeJS.ProcessEnv = process.env): string {
+export function loadJwtSecret(env: NodeJS.ProcessEnv = process.env, folder: string = dataDir): string {
   if (env.JWT_SECRET) {
     if (env.JWT_SECRET.length < 32) throw new Error('JWT_SECRET must have at least 32 characters')
     return env.JWT_SECRET
   }
-  const file = path.join(dataDir, 'jwt-secret')
+  const file = path.join(folder, 'jwt-secret')
   if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim()
-  fs.mkdirSync(dataDir, { recursive: true })
+  fs.mkdirSync(folder, { recursive: true })
   const secret = crypto.randomBytes(48).toString('base64url')
   fs.writeFileSync(file, `${secret}\n`, { mode: 0o600, flag: 'wx' })
   return secret

@@ -1,6 +1,7 @@
 import type { Server } from 'node:http'
 import type { AddressInfo } from 'node:net'
 import { pino } from 'pino'
+import type { Sequelize } from 'sequelize'
 import { buildApp } from './app'
 import type { ServerConfig } from './config'
 import type { AppContext } from './context'
@@ -16,10 +17,19 @@ export interface Runtime {
   close(): Promise<void>
 }
 
+export interface RuntimeOptions {
+  /**
+   * An open connection to share instead of opening one. Sequelize models are
+   * bound to one connection per process, so a second runtime in the same
+   * process (tests) must share it; it is then not closed by close().
+   */
+  sequelize?: Sequelize
+}
+
 /** Connects to PostgreSQL, starts the SMTP sink when needed, builds the app. */
-export async function createRuntime(config: ServerConfig): Promise<Runtime> {
+export async function createRuntime(config: ServerConfig, options: RuntimeOptions = {}): Promise<Runtime> {
   const logger = pino({ level: config.logLevel })
-  const sequelize = connect(config.databaseUrl)
+  const sequelize = options.sequelize ?? connect(config.databaseUrl)
   const sink = config.smtpUrl ? null : await startSmtpSink(config.smtpSinkPort, logger)
   const mailer = createMailer(config.smtpUrl ?? sinkSmtpUrl((sink as SmtpSink).port), config.mailFrom)
   const ctx: AppContext = { config, sequelize, mailer, logger }
@@ -31,7 +41,7 @@ export async function createRuntime(config: ServerConfig): Promise<Runtime> {
     async close() {
       mailer.close()
       await sink?.close()
-      await sequelize.close()
+      if (!options.sequelize) await sequelize.close()
     },
   }
 }

@@ -1,0 +1,107 @@
+/**
+ * `npm run -s sim -- FILE.s [--preset NAME] [--config FILE.json] [--set path=value]...
+ *   [--format summary|json|csv|vcd] [--out FILE]`
+ *
+ * Assembles, executes and times a program with the shared pipeline
+ * (shared/sim/run.ts) and prints the trace in the chosen form. The machine is
+ * the preset (default: the handbook defaults), then the --config file merged
+ * over it, then each --set. Errors: one line on stderr; exit code 2 for a
+ * mistake in the command line (options, files, machine fields), 1 for a
+ * program or model error (assembly, execution, a cycle or trace limit).
+ */
+import { readFileSync, writeFileSync } from 'node:fs'
+import { checkMachine, defaultMachine } from '../../shared/schemas/machine'
+import { PRESETS } from '../../shared/sim/presets'
+import { runPipeline, type RunError } from '../../shared/sim/run'
+import { toCsv } from '../../shared/sim/trace/csv'
+import { traceToJson } from '../../shared/sim/trace/schema'
+import { summarize } from '../../shared/sim/trace/summary'
+import type { TimingTrace } from '../../shared/sim/trace/types'
+import { toVcd } from '../../shared/sim/trace/vcd'
+import { applySets, mergeMachine, parseSimArgs, UsageError, type Format, type SimArgs } from './simArgs'
+import { appVersion as version } from '../version'
+
+/** A program or model error: exit code 1. */
+class RunFailure extends Error {}
+
+function readText(path: string, what: string): string {
+  try {
+    return readFileSync(path, 'utf8')
+  } catch (e) {
+    throw new UsageError(`cannot read ${what} ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`)
+  }
+}
+
+function presetMachine(name: string | undefined): Record<string, unknown> {
+  if (name === undefined) return { ...defaultMachine }
+  const key = name.toLowerCase()
+  const preset = PRESETS.find((p) => p.id === key || p.name.toLowerCase() === key)
+  if (!preset) throw new UsageError(`unknown preset "${name}" (presets: ${PRESETS.map((p) => `"${p.name}" (${p.id})`).join(', ')})`)
+  return { ...defaultMachine, ...preset.machine }
+}
+
+/** The machine of the command line, validated by the shared machine schema. */
+export function machineFromArgs(args: SimArgs) {
+  let machine = presetMachine(args.preset)
+  if (args.config) {
+    let partial: unknown
+    try {
+      partial = JSON.parse(readText(args.config, 'config file'))
+    } catch (e) {
+      if (e instanceof UsageError) throw e
+      throw new UsageError(`config file ${args.config} is not JSON: ${(e as Error).message}`)
+    }
+    if (typeof partial !== 'object' || partial === null || Array.isArray(partial)) throw new UsageError(`config file ${args.config} must hold a JSON object of machine fields`)
+    machine = mergeMachine(machine, partial as Record<string, unknown>)
+  }
+  machine = applySets(machine, args.sets)
+  const checked = checkMachine(machine)
+  if (!checked.ok) throw new UsageError(`machine: ${checked.issues.map((i) => `${i.field}: ${i.message}`).join('; ')}`)
+  return checked.machine
+}
+
+function describe(error: RunError): string {
+  const d = error.diagnostics?.[0]
+  const more = error.diagnostics && error.diagnostics.length > 1 ? ` (and ${error.diagnostics.length - 1} more)` : ''
+  return d ? `line ${d.line}, column ${d.column}: ${d.message}${more}` : error.message
+}
+
+export function format(trace: TimingTrace, fmt: Format, cutShort?: RunError): string {
+  switch (fmt) {
+    case 'summary':
+      return JSON.stringify(summarize(trace, cutShort ? { error: { code: cutShort.code, message: cutShort.message } } : {}), null, 2) + '\n'
+    case 'json':
+      return JSON.stringify(traceToJson(trace)) + '\n'
+    case 'csv':
+      return toCsv(trace)
+    case 'vcd':
+      return toVcd(trace, { version })
+  }
+}
+
+export function main(argv: string[]): number {
+  let args: SimArgs | undefined
+  try {
+    args = parseSimArgs(argv)
+    const machine = machineFromArgs(args)
+    const source = readText(args.file, 'program')
+    const result = runPipeline({ program: source, machine })
+    // A run cut short by a limit still writes its partial trace, then fails.
+    if (result.trace) {
+      const text = format(result.trace, args.format, result.ok ? undefined : result.error)
+      if (args.out) writeFileSync(args.out, text)
+      else process.stdout.write(text)
+    }
+    if (!result.ok) {
+      const partial = result.trace ? ' (the trace written is partial)' : ''
+      throw new RunFailure(`${args.file}: ${result.error.stage}: ${describe(result.error)}${partial}`)
+    }
+    return 0
+  } catch (e) {
+    const message = (e as Error).message.split('\n')[0]
+    process.stderr.write(`sim: ${message}\n`)
+    return e instanceof UsageError ? 2 : 1
+  }
+}
+
+process.exitCode = main(process.argv.slice(2))
