@@ -59,6 +59,16 @@ test.describe('signing in', () => {
     await page.keyboard.press('Enter')
     await expect(page).toHaveURL(/\/bench$/)
     await expect(page.getByTestId('workspace-switcher')).toContainText('Vector Lab')
+
+    // The first Tab reaches the skip link, the next ones the header: each shows a focus ring.
+    await page.keyboard.press('Tab')
+    await expect(page.getByRole('link', { name: 'Skip to content' })).toBeFocused()
+    await page.keyboard.press('Tab')
+    await page.keyboard.press('Tab')
+    const focused = page.locator(':focus')
+    await expect(focused).toHaveText('Bench')
+    expect(await focused.evaluate((el) => getComputedStyle(el).outlineStyle)).toBe('solid')
+    await screenshot(page, 'focus-ring')
   })
 })
 

@@ -74,6 +74,25 @@ describe('route guards', () => {
   })
 })
 
+describe('a session that expires on an open page', () => {
+  it('sends the user to sign in with the way back to that page', async () => {
+    let refreshes = 0
+    installFakeServer({
+      // The first refresh restores the session on load; the next one finds the cookie expired.
+      'POST /api/auth/refresh': () =>
+        ++refreshes === 1 ? json(200, { user: editor, accessToken: 't' }) : apiError(401, 'unauthenticated', 'Your session has ended'),
+      'GET /api/me': () => apiError(401, 'unauthenticated', 'The access token has expired'),
+    })
+    const router = createAppRouter(createMemoryHistory())
+    const auth = useAuthStore()
+    installGuards(router, auth)
+    await router.push('/sweeps?range=lanes')
+    await expect(auth.api.workspaces.me()).rejects.toMatchObject({ status: 401 })
+    await vi.waitFor(() => expect(router.currentRoute.value.name).toBe('signin'))
+    expect(router.currentRoute.value.query.redirect).toBe('/sweeps?range=lanes')
+  })
+})
+
 describe('safeRedirect', () => {
   it.each([
     ['/scenarios?tag=x', '/scenarios?tag=x'],
