@@ -1,0 +1,120 @@
+/**
+ * What every structure of the model shares during a run: the derived machine,
+ * the register file, renaming, the recorder, per-lane unit state and the
+ * per-cycle notes from which stalls are classified.
+ */
+import type { Machine } from '../../schemas/machine'
+import type { StallReason } from '../trace/types'
+import { STALL_REASONS } from '../trace/types'
+import type { Derived } from './config'
+import { UNITS } from './config'
+import type { Recorder } from './recorder'
+import type { RegFile } from './regfile'
+import type { Renamer } from './rename'
+
+export const REASON: Record<StallReason, number> = Object.fromEntries(STALL_REASONS.map((r, i) => [r, i])) as Record<
+  StallReason,
+  number
+>
+
+/** Called by an instruction when it is finished everywhere. */
+export interface CompletionSink {
+  completed(seq: number, c: number): void
+  laneFinished(lane: number, seq: number, tookSlot: boolean): void
+}
+
+export class Ctx {
+  readonly m: Machine
+  readonly L: number
+  /** [lane][unit]: first cycle the unit can take a beat. */
+  readonly unitFree: Int32Array
+  /** [lane][unit] resource ids. */
+  readonly unitRes: Int32Array
+  /** [lane][bank] resource ids. */
+  readonly bankRes: Int32Array
+  /** Ring links: up[l] carries lane l -> l+1, down[l] carries lane l+1 -> l (mod L). */
+  readonly linkUpRes: Int32Array
+  readonly linkDownRes: Int32Array
+  readonly loadBusRes: Int32Array
+  readonly storeBusRes: Int32Array
+  /** Per lane, this cycle: did the lane read, execute, write or hold results in flight. */
+  readonly progress: Uint8Array
+  /** Per lane, this cycle: the oldest blocked instruction and why. */
+  readonly blockSeq: Int32Array
+  readonly blockReason: Int8Array
+  /** Link bookings: [link][cycle mod RING_HORIZON] = cycle booked. */
+  readonly upBook: Int32Array
+  readonly downBook: Int32Array
+  sink!: CompletionSink
+
+  constructor(
+    readonly d: Derived,
+    readonly rf: RegFile,
+    readonly ren: Renamer,
+    readonly rec: Recorder,
+    readonly laneTimes: Int32Array,
+  ) {
+    this.m = d.machine
+    const L = (this.L = d.lanes)
+    this.unitFree = new Int32Array(L * 4)
+    this.unitRes = new Int32Array(L * 4)
+    this.bankRes = new Int32Array(L * d.banks)
+    for (let l = 0; l < L; l++) {
+      UNITS.forEach((u, k) => {
+        this.unitRes[l * 4 + k] = rec.addResource({ kind: 'unit', name: `lane ${l} ${u}`, lane: l, capacity: 1 })
+      })
+      for (let b = 0; b < d.banks; b++) {
+        this.bankRes[l * d.banks + b] = rec.addResource({ kind: 'bank', name: `lane ${l} bank ${b}`, lane: l, capacity: d.ports })
+      }
+    }
+    const links = L > 1 ? L : 0
+    this.linkUpRes = new Int32Array(links)
+    this.linkDownRes = new Int32Array(links)
+    for (let l = 0; l < links; l++) {
+      this.linkUpRes[l] = rec.addResource({ kind: 'ring', name: `ring ${l}->${(l + 1) % L}`, lane: l, capacity: 1 })
+      this.linkDownRes[l] = rec.addResource({ kind: 'ring', name: `ring ${(l + 1) % L}->${l}`, lane: (l + 1) % L, capacity: 1 })
+    }
+    const P = this.m.memoryPorts
+    this.loadBusRes = new Int32Array(P)
+    this.storeBusRes = new Int32Array(P)
+    for (let p = 0; p < P; p++) {
+      this.loadBusRes[p] = rec.addResource({ kind: 'bus', name: `load bus ${p}`, lane: null, capacity: this.m.loadBusBits })
+      this.storeBusRes[p] = rec.addResource({ kind: 'bus', name: `store bus ${p}`, lane: null, capacity: this.m.storeBusBits })
+    }
+    rec.seal()
+    this.progress = new Uint8Array(L)
+    this.blockSeq = new Int32Array(L)
+    this.blockReason = new Int8Array(L)
+    this.upBook = new Int32Array(links * RING_HORIZON).fill(-1)
+    this.downBook = new Int32Array(links * RING_HORIZON).fill(-1)
+  }
+
+  /** Notes that `seq` could not advance in `lane` this cycle; the oldest such instruction names the stall. */
+  block(lane: number, seq: number, reason: number): void {
+    if (seq < (this.blockSeq[lane] ?? 0)) {
+      this.blockSeq[lane] = seq
+      this.blockReason[lane] = reason
+    }
+  }
+
+  busyLane(lane: number): void {
+    this.progress[lane] = 1
+  }
+
+  /** Books link `link` (up or down) in cycle c if free; true when booked. */
+  bookLink(up: boolean, link: number, c: number, seq: number): boolean {
+    const book = up ? this.upBook : this.downBook
+    const k = link * RING_HORIZON + (c % RING_HORIZON)
+    if (book[k] === c) return false
+    book[k] = c
+    this.rec.use((up ? this.linkUpRes : this.linkDownRes)[link] ?? 0, c, 1, seq)
+    return true
+  }
+
+  linkFree(up: boolean, link: number, c: number): boolean {
+    return (up ? this.upBook : this.downBook)[link * RING_HORIZON + (c % RING_HORIZON)] !== c
+  }
+}
+
+/** Bookings reach at most lanes x ringHopLatency (64 x 16) cycles ahead. */
+export const RING_HORIZON = 2048

@@ -1,0 +1,397 @@
+/**
+ * The tick-based engine: `step` advances the whole machine by one cycle.
+ * Order inside a cycle: the memory unit starts instructions and moves bus
+ * data, the ring moves words, then every lane grants writes, takes beats and
+ * grants reads (oldest instruction first), then the front end dispatches
+ * (what it dispatches in cycle c reads from c + 1), and finally each lane's
+ * cycle is classified as busy, stalled (one reason) or idle.
+ */
+import type { Machine } from '../../schemas/machine'
+import type { DynamicStream, VectorOp } from '../exec/stream'
+import type { SimulateOptions, TimingError } from '../trace/types'
+import { DEFAULT_CYCLE_LIMIT, DEFAULT_TRACE_LIMIT, LANE_FIELD_COUNT, NO_CYCLE } from '../trace/types'
+import { derive } from './config'
+import { Ctx, REASON } from './context'
+import type { Inst } from './inst'
+import { F_READ_END } from './inst'
+import { LoadInst, MemInst, StoreInst } from './memory'
+import { PermutationInst } from './permutation'
+import { Recorder } from './recorder'
+import { OrderedReductionInst, ReductionInst } from './reduction'
+import { RegFile } from './regfile'
+import { Renamer } from './rename'
+import { UnitInst } from './units'
+
+const NONE = 0x7fffffff
+
+export interface TimingState {
+  readonly stream: DynamicStream
+  readonly machine: Machine
+  readonly ctx: Ctx
+  readonly options: Required<SimulateOptions>
+  cycle: number
+  lastBusy: number
+  done: boolean
+  error: TimingError | null
+  /** Per op: dispatch and completion cycles (-1 when not reached). */
+  readonly dispatchAt: Int32Array
+  readonly completeAt: Int32Array
+  /** [op][reason] stall cycles attributed to the op. */
+  readonly opStalls: Int32Array
+  readonly laneBusy: Float64Array
+  // Front end
+  opIdx: number
+  scalarLeft: number
+  scalarAfterLeft: number
+  hold: number
+  holdReleasedAt: number
+  feReason: number
+  // Instructions in flight, in program order
+  inflight: Inst[]
+  readonly arith: Inst[]
+  readonly mem: MemInst[]
+  readonly laneArithNext: Int32Array
+  memNext: number
+  arithQueued: number
+  memQueued: number
+  readonly slotsUsed: Int32Array
+  readonly slotRelease: Int32Array
+  readonly memPorts: (MemInst | null)[]
+  readonly instOf: (Inst | null)[]
+}
+
+export function createTimingState(stream: DynamicStream, machine: Machine, options: SimulateOptions = {}): TimingState {
+  const d = derive(machine)
+  const L = d.lanes
+  const ops = stream.ops
+  const laneTimes = new Int32Array(ops.length * L * LANE_FIELD_COUNT).fill(NO_CYCLE)
+  const rec = new Recorder(L, options.recordUsage ?? true)
+  const ctx = new Ctx(d, new RegFile(d, machine.physRegs), new Renamer(machine.physRegs), rec, laneTimes)
+  const s: TimingState = {
+    stream,
+    machine,
+    ctx,
+    options: {
+      cycleLimit: options.cycleLimit ?? DEFAULT_CYCLE_LIMIT,
+      traceLimit: options.traceLimit ?? DEFAULT_TRACE_LIMIT,
+      recordUsage: options.recordUsage ?? true,
+    },
+    cycle: 0,
+    lastBusy: -1,
+    done: false,
+    error: null,
+    dispatchAt: new Int32Array(ops.length).fill(-1),
+    completeAt: new Int32Array(ops.length).fill(-1),
+    opStalls: new Int32Array(ops.length * 9),
+    laneBusy: new Float64Array(L),
+    opIdx: 0,
+    scalarLeft: ops[0]?.scalarBefore ?? 0,
+    scalarAfterLeft: stream.scalarAfter,
+    hold: -1,
+    holdReleasedAt: -1,
+    feReason: REASON.frontend,
+    inflight: [],
+    arith: [],
+    mem: [],
+    laneArithNext: new Int32Array(L),
+    memNext: 0,
+    arithQueued: 0,
+    memQueued: 0,
+    slotsUsed: new Int32Array(L),
+    slotRelease: new Int32Array(L),
+    memPorts: Array.from({ length: machine.memoryPorts }, () => null),
+    instOf: new Array<Inst | null>(ops.length).fill(null),
+  }
+  for (let i = 0; i < ops.length; i++) {
+    if ((ops[i] as VectorOp).seq !== i) {
+      s.done = true
+      s.error = { code: 'invalid-stream', message: `op ${i} has seq ${(ops[i] as VectorOp).seq}; expected ${i}` }
+    }
+  }
+  ctx.sink = {
+    completed(seq, c) {
+      s.completeAt[seq] = c
+      if (s.hold === seq) {
+        s.hold = -1
+        s.holdReleasedAt = c
+      }
+    },
+    laneFinished(lane, _seq, tookSlot) {
+      if (tookSlot) s.slotRelease[lane] = (s.slotRelease[lane] ?? 0) + 1
+    },
+  }
+  return s
+}
+
+function makeInst(ctx: Ctx, op: VectorOp, src: Int32Array[], mask: Int32Array | null): Inst {
+  if (op.memory || op.unit === 'load' || op.unit === 'store') {
+    return op.memory?.isStore || op.unit === 'store' ? new StoreInst(ctx, op, src, mask) : new LoadInst(ctx, op, src, mask)
+  }
+  if (op.shape === 'ordered-reduction') return new OrderedReductionInst(ctx, op, src, mask)
+  if (op.shape === 'reduction' || (op.shape === 'scalar-result' && /^(vcpop|vfirst)/.test(op.op))) {
+    return new ReductionInst(ctx, op, src, mask)
+  }
+  if (op.shape === 'permutation') return new PermutationInst(ctx, op, src, mask)
+  return new UnitInst(ctx, op, src, mask)
+}
+
+function isMem(op: VectorOp): boolean {
+  return !!op.memory || op.unit === 'load' || op.unit === 'store'
+}
+
+/** Tries to dispatch op in cycle c; returns false (and sets the front-end reason) when it must wait. */
+function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
+  const m = s.machine
+  const ctx = s.ctx
+  const mem = isMem(op)
+  if (mem ? s.memQueued >= m.memQueueDepth : s.arithQueued >= m.arithQueueDepth) {
+    s.feReason = REASON.queue
+    return false
+  }
+  if (ctx.ren.freeCount < op.dstRegs.length) {
+    s.feReason = REASON.rename
+    return false
+  }
+  const src = op.srcRegs.map((g) => Int32Array.from(g, (r) => ctx.ren.lookup(r)))
+  const mask = op.masked ? Int32Array.of(ctx.ren.lookup(0)) : null
+  for (const g of src) for (const p of g) ctx.ren.addReader(p)
+  if (mask) ctx.ren.addReader(mask[0] ?? 0)
+  const inst = makeInst(ctx, op, src, mask)
+  const dst = new Int32Array(op.dstRegs.length)
+  const old = new Int32Array(op.dstRegs.length)
+  op.dstRegs.forEach((r, k) => {
+    const [p, o] = ctx.ren.rename(r)
+    ctx.rf.invalidate(p)
+    dst[k] = p
+    old[k] = o
+  })
+  inst.dst = dst
+  inst.oldDst = old
+  inst.dispatch = c
+  s.dispatchAt[op.seq] = c
+  s.instOf[op.seq] = inst
+  s.inflight.push(inst)
+  if (inst instanceof MemInst) {
+    s.mem.push(inst)
+    s.memQueued++
+  } else {
+    s.arith.push(inst)
+    s.arithQueued++
+  }
+  return true
+}
+
+/** One front-end cycle: a scalar instruction, a vset, or up to dispatchWidth vector dispatches. */
+function frontEnd(s: TimingState, c: number): boolean {
+  const ops = s.stream.ops
+  s.feReason = REASON.frontend
+  if (s.hold >= 0 || s.holdReleasedAt === c) return false
+  let dispatched = 0
+  for (;;) {
+    if (s.opIdx >= ops.length) {
+      if (dispatched > 0 || s.scalarAfterLeft === 0) return dispatched > 0
+      s.scalarAfterLeft--
+      return true
+    }
+    if (s.scalarLeft > 0) {
+      if (dispatched > 0) return true
+      s.scalarLeft--
+      return true
+    }
+    const op = ops[s.opIdx] as VectorOp
+    if (op.isConfig) {
+      if (dispatched > 0) return true
+      s.dispatchAt[op.seq] = c
+      s.completeAt[op.seq] = c
+      advance(s)
+      return true
+    }
+    if (!dispatch(s, op, c)) return dispatched > 0
+    dispatched++
+    advance(s)
+    if (op.scalarResult) {
+      s.hold = op.seq
+      return true
+    }
+    if (dispatched >= s.machine.dispatchWidth) return true
+  }
+}
+
+function advance(s: TimingState): void {
+  s.opIdx++
+  s.scalarLeft = s.stream.ops[s.opIdx]?.scalarBefore ?? 0
+}
+
+function readEnd(inst: Inst, lane: number, ctx: Ctx): number {
+  return ctx.laneTimes[(inst.seq * ctx.L + lane) * LANE_FIELD_COUNT + F_READ_END] ?? NO_CYCLE
+}
+
+function noteStarted(s: TimingState, inst: Inst): void {
+  if (inst.startedCount === s.ctx.L) s.arithQueued--
+}
+
+function startInLane(s: TimingState, inst: Inst, lane: number, c: number): void {
+  const work = inst.hasWorkIn(lane)
+  inst.tookSlot[lane] = work ? 1 : 0
+  if (work) s.slotsUsed[lane] = (s.slotsUsed[lane] ?? 0) + 1
+  s.laneArithNext[lane] = (s.laneArithNext[lane] ?? 0) + 1
+  inst.startLane(lane, c)
+  noteStarted(s, inst)
+}
+
+/** Issue policy `staggered`: each lane starts its next instruction the cycle after it finished reading the previous one. */
+function issueStaggered(s: TimingState, lane: number, c: number): void {
+  const ctx = s.ctx
+  for (;;) {
+    const k = s.laneArithNext[lane] ?? 0
+    const inst = s.arith[k]
+    if (!inst || inst.dispatch >= c) return
+    const prev = k > 0 ? s.arith[k - 1] : undefined
+    if (prev && (prev.readDone[lane] !== 1 || readEnd(prev, lane, ctx) >= c)) return
+    if (inst.hasWorkIn(lane) && (s.slotsUsed[lane] ?? 0) >= s.machine.laneSlots) {
+      ctx.block(lane, inst.seq, REASON.slot)
+      return
+    }
+    startInLane(s, inst, lane, c)
+    if (inst.hasWorkIn(lane)) return
+  }
+}
+
+/** Policies `lockstep` and `serial`: the next instruction starts in every lane at once. */
+function issueTogether(s: TimingState, c: number): void {
+  const ctx = s.ctx
+  const L = ctx.L
+  for (;;) {
+    const k = s.laneArithNext[0] ?? 0
+    const inst = s.arith[k]
+    if (!inst || inst.dispatch >= c) return
+    const prev = k > 0 ? s.arith[k - 1] : undefined
+    let ok = true
+    if (prev) {
+      if (s.machine.issue === 'serial') ok = prev.complete >= 0 && prev.complete < c
+      else {
+        ok = prev.readDoneCount === L
+        for (let l = 0; l < L && ok; l++) if (readEnd(prev, l, ctx) >= c) ok = false
+      }
+    }
+    if (!ok) {
+      for (let l = 0; l < L; l++) ctx.block(l, inst.seq, REASON.barrier)
+      return
+    }
+    for (let l = 0; l < L; l++) {
+      if (inst.hasWorkIn(l) && (s.slotsUsed[l] ?? 0) >= s.machine.laneSlots) {
+        for (let q = 0; q < L; q++) ctx.block(q, inst.seq, q === l ? REASON.slot : REASON.barrier)
+        return
+      }
+    }
+    for (let l = 0; l < L; l++) startInLane(s, inst, l, c)
+  }
+}
+
+/** The memory unit starts the next memory instructions, in program order, on free ports. */
+function memoryStart(s: TimingState, c: number): void {
+  const ports = s.memPorts
+  for (let p = 0; p < ports.length; p++) {
+    const held = ports[p]
+    if (held && held.busDone && held.portUntil < c) ports[p] = null
+  }
+  for (;;) {
+    const inst = s.mem[s.memNext]
+    if (!inst || inst.dispatch >= c) return
+    const port = ports.indexOf(null)
+    let ok = port >= 0
+    if (ok) {
+      // Memory dependences: wait for every older overlapping access when either side is a store.
+      for (let k = 0; k < s.memNext && ok; k++) {
+        const o = s.mem[k] as MemInst
+        if (o.complete >= 0 && o.complete < c) continue
+        if ((o.isStore || inst.isStore) && o.overlaps(inst)) ok = false
+      }
+    }
+    if (!ok) {
+      for (let l = 0; l < s.ctx.L; l++) s.ctx.block(l, inst.seq, REASON.memory)
+      return
+    }
+    ports[port] = inst
+    inst.begin(c, port)
+    s.memNext++
+    s.memQueued--
+  }
+}
+
+/** Advances the machine by one cycle. Returns false once the run is over (finished or stopped by a limit). */
+export function step(s: TimingState): boolean {
+  if (s.done) return false
+  const c = s.cycle
+  if (c >= s.options.cycleLimit) {
+    s.done = true
+    s.error = { code: 'cycle-limit', message: `the run exceeded the cycle limit of ${s.options.cycleLimit} cycles` }
+    return false
+  }
+  const ctx = s.ctx
+  const L = ctx.L
+  ctx.progress.fill(0)
+  ctx.blockSeq.fill(NONE)
+  memoryStart(s, c)
+  const fl = s.inflight
+  for (let i = 0; i < fl.length; i++) (fl[i] as Inst).global(c)
+  const together = s.machine.issue !== 'staggered'
+  if (together) issueTogether(s, c)
+  for (let l = 0; l < L; l++) {
+    for (let i = 0; i < fl.length; i++) (fl[i] as Inst).write(l, c)
+    for (let i = 0; i < fl.length; i++) (fl[i] as Inst).exec(l, c)
+    if (!together) issueStaggered(s, l, c)
+    for (let i = 0; i < fl.length; i++) (fl[i] as Inst).read(l, c)
+  }
+  // Instructions dispatched by a lane's issue above were not yet in `fl` for earlier lanes: nothing to do for them now.
+  const feActive = frontEnd(s, c)
+  let busy = feActive
+  const ops = s.stream.ops
+  const feWaiting = s.opIdx < ops.length || s.hold >= 0
+  const nextSeq = s.hold >= 0 ? s.hold : (ops[s.opIdx]?.seq ?? -1)
+  for (let l = 0; l < L; l++) {
+    if (ctx.progress[l] === 1) {
+      busy = true
+      s.laneBusy[l] = (s.laneBusy[l] ?? 0) + 1
+    } else {
+      let reason = -1
+      let seq = -1
+      if ((ctx.blockSeq[l] ?? NONE) !== NONE) {
+        reason = ctx.blockReason[l] ?? 0
+        seq = ctx.blockSeq[l] ?? 0
+      } else {
+        for (let i = 0; i < fl.length; i++) {
+          const inst = fl[i] as Inst
+          if (inst.dispatch < c && inst.pending(l)) {
+            reason = inst.waitReason
+            seq = inst.seq
+            break
+          }
+        }
+        if (reason < 0 && feWaiting && nextSeq >= 0) {
+          reason = s.feReason
+          seq = nextSeq
+        }
+      }
+      if (reason >= 0) {
+        ctx.rec.stallAt(l, c, reason, seq)
+        s.opStalls[seq * 9 + reason] = (s.opStalls[seq * 9 + reason] ?? 0) + 1
+      }
+    }
+    s.slotsUsed[l] = (s.slotsUsed[l] ?? 0) - (s.slotRelease[l] ?? 0)
+    s.slotRelease[l] = 0
+  }
+  if (busy) s.lastBusy = c
+  if (fl.some((i) => i.complete >= 0)) s.inflight = fl.filter((i) => i.complete < 0)
+  s.cycle = c + 1
+  if (s.opIdx >= ops.length && s.scalarAfterLeft === 0 && s.hold < 0 && s.inflight.length === 0) {
+    s.done = true
+    return false
+  }
+  if (ctx.rec.spanCount > s.options.traceLimit) {
+    s.done = true
+    s.error = { code: 'trace-limit', message: `the trace exceeded its limit of ${s.options.traceLimit} spans at cycle ${c}` }
+    return false
+  }
+  return true
+}

@@ -1,0 +1,297 @@
+/**
+ * An instruction in flight: its per-lane element counts, source operand
+ * queues, results waiting for write ports, and the phase times it records.
+ * Subclasses add what their shape needs (units, reductions, ring, memory).
+ */
+import type { VectorOp } from '../exec/stream'
+import { LANE_FIELD_COUNT, NO_CYCLE } from '../trace/types'
+import { wordsFor } from './config'
+import type { Ctx } from './context'
+import { REASON } from './context'
+import { PENDING } from './regfile'
+
+export const F_ELEMENTS = 0
+export const F_BEATS = 1
+export const F_READ_START = 2
+export const F_READ_END = 3
+export const F_EXEC_START = 4
+export const F_EXEC_END = 5
+export const F_WRITE_START = 6
+export const F_WRITE_END = 7
+
+/** A source operand group: words read into its queue and consumed by beats, per lane. */
+export class Operand {
+  readonly words: Int32Array
+  readonly readCnt: Int32Array
+  readonly cons: Int32Array
+  constructor(
+    readonly group: Int32Array,
+    readonly bits: number,
+    lanes: number,
+  ) {
+    this.words = new Int32Array(lanes)
+    this.readCnt = new Int32Array(lanes)
+    this.cons = new Int32Array(lanes)
+  }
+}
+
+export type Queue = 'arith' | 'mem'
+
+export abstract class Inst {
+  readonly seq: number
+  readonly L: number
+  /** Active element positions (0..vl-1) per lane. */
+  readonly n: Int32Array
+  readonly beats: Int32Array
+  readonly srcs: Operand[] = []
+  dst: Int32Array = new Int32Array(0)
+  oldDst: Int32Array = new Int32Array(0)
+  /** Words each lane writes to `dst`, and has written. */
+  readonly dstWords: Int32Array
+  readonly wrCnt: Int32Array
+  /** [lane][word]: cycle the result asks for a write port; -1 while not computed. */
+  protected readyAt: Int32Array = new Int32Array(0)
+  protected maxDstWords = 0
+  /** Writes a lane may do for this instruction in one cycle. */
+  protected writesPerCycle = 1
+  /** A scalar result (vmv.x.s, vcpop.m): no vector write port, it goes to the front end. */
+  scalarDst = false
+  readonly started: Uint8Array
+  readonly readDone: Uint8Array
+  readonly laneDone: Uint8Array
+  startedCount = 0
+  readDoneCount = 0
+  doneCount = 0
+  dispatch = -1
+  complete = -1
+  /** Lanes where the instruction holds a lane slot. */
+  readonly tookSlot: Uint8Array
+  protected readonly base: number
+
+  constructor(
+    readonly ctx: Ctx,
+    readonly op: VectorOp,
+    readonly queue: Queue,
+  ) {
+    this.seq = op.seq
+    const L = (this.L = ctx.L)
+    this.n = new Int32Array(L)
+    this.beats = new Int32Array(L)
+    this.dstWords = new Int32Array(L)
+    this.wrCnt = new Int32Array(L)
+    this.started = new Uint8Array(L)
+    this.readDone = new Uint8Array(L)
+    this.laneDone = new Uint8Array(L)
+    this.tookSlot = new Uint8Array(L)
+    this.base = op.seq * L * LANE_FIELD_COUNT
+  }
+
+  /** Sets up results storage once dstWords is known. */
+  protected allocResults(): void {
+    let max = 0
+    for (let l = 0; l < this.L; l++) max = Math.max(max, this.dstWords[l] ?? 0)
+    this.maxDstWords = max
+    this.readyAt = new Int32Array(this.L * max).fill(-1)
+  }
+
+  addSource(group: Int32Array, bits: number, wordsOf: (lane: number) => number): Operand {
+    const o = new Operand(group, bits, this.L)
+    for (let l = 0; l < this.L; l++) o.words[l] = wordsOf(l)
+    this.srcs.push(o)
+    return o
+  }
+
+  protected setTime(lane: number, field: number, c: number): void {
+    this.ctx.laneTimes[this.base + lane * LANE_FIELD_COUNT + field] = c
+  }
+
+  protected time(lane: number, field: number): number {
+    return this.ctx.laneTimes[this.base + lane * LANE_FIELD_COUNT + field] ?? NO_CYCLE
+  }
+
+  /** Records elements and beats of each lane; lanes without elements keep null phases. */
+  protected writeCounts(): void {
+    for (let l = 0; l < this.L; l++) {
+      this.setTime(l, F_ELEMENTS, this.n[l] ?? 0)
+      this.setTime(l, F_BEATS, this.beats[l] ?? 0)
+    }
+  }
+
+  /** The lane may start: reads from this cycle on. */
+  startLane(lane: number, c: number): void {
+    this.started[lane] = 1
+    this.startedCount++
+    if (!this.hasWork(lane)) {
+      this.readDone[lane] = 1
+      this.readDoneCount++
+      this.finishLane(lane, c)
+      this.checkAllRead()
+      return
+    }
+    let anyWords = false
+    for (const s of this.srcs) if ((s.words[lane] ?? 0) > 0) anyWords = true
+    if (!anyWords) {
+      // Nothing to read (vmv.v.x, vid.v, unit-stride loads): the read phase is the start cycle itself.
+      this.setTime(lane, F_READ_START, c)
+      this.setTime(lane, F_READ_END, c)
+      this.readDone[lane] = 1
+      this.readDoneCount++
+      this.checkAllRead()
+    }
+  }
+
+  /** The reason a lane waiting on this instruction without a more specific note is given. */
+  waitReason: number = REASON.raw
+
+  hasWorkIn(lane: number): boolean {
+    return this.hasWork(lane)
+  }
+
+  /** Whether the lane has anything to do for this instruction (lanes without any finish at once). */
+  protected hasWork(lane: number): boolean {
+    return (this.n[lane] ?? 0) > 0
+  }
+
+  /** Read lane words into the operand queues: one word per operand per cycle, oldest instruction first. */
+  read(lane: number, c: number): void {
+    if (this.started[lane] !== 1 || this.readDone[lane] === 1) return
+    const { rf, rec, d } = this.ctx
+    let all = true
+    for (const s of this.srcs) {
+      const w = s.readCnt[lane] ?? 0
+      if (w >= (s.words[lane] ?? 0)) continue
+      all = false
+      if (w - (s.cons[lane] ?? 0) >= d.queueDepth) {
+        this.ctx.block(lane, this.seq, REASON.queue)
+        continue
+      }
+      if ((rf.ready[rf.slot(s.group, lane, w)] ?? 0) > c) {
+        this.ctx.block(lane, this.seq, REASON.raw)
+        continue
+      }
+      const bank = rf.bankOf(s.group, w)
+      if (!rf.grant(lane, bank, c)) {
+        this.ctx.block(lane, this.seq, REASON.bank)
+        continue
+      }
+      rec.use(this.ctx.bankRes[lane * d.banks + bank] ?? 0, c, 1, this.seq)
+      s.readCnt[lane] = w + 1
+      this.ctx.busyLane(lane)
+      if (this.time(lane, F_READ_START) === NO_CYCLE) this.setTime(lane, F_READ_START, c)
+      this.setTime(lane, F_READ_END, c)
+      if (w + 1 < (s.words[lane] ?? 0)) all = false
+    }
+    if (all || this.srcs.every((s) => (s.readCnt[lane] ?? 0) >= (s.words[lane] ?? 0))) {
+      this.readDone[lane] = 1
+      this.readDoneCount++
+      this.checkAllRead()
+    }
+  }
+
+  private checkAllRead(): void {
+    if (this.readDoneCount !== this.L) return
+    for (const s of this.srcs) for (const p of s.group) this.ctx.ren.dropReader(p)
+  }
+
+  /** A result word of `lane` asks for a write port from cycle `at`. */
+  protected resultReady(lane: number, w: number, at: number): void {
+    this.readyAt[lane * this.maxDstWords + w] = at
+  }
+
+  /** Write back ready results, in word order, writes before reads. */
+  write(lane: number, c: number): void {
+    if (this.laneDone[lane] === 1 || this.started[lane] !== 1) return
+    const total = this.dstWords[lane] ?? 0
+    let w = this.wrCnt[lane] ?? 0
+    const { rf, rec, d } = this.ctx
+    for (let k = 0; k < this.writesPerCycle && w < total; k++) {
+      const at = this.readyAt[lane * this.maxDstWords + w] ?? -1
+      if (at < 0) break
+      if (at > c) {
+        this.ctx.busyLane(lane) // the result is still in the unit's pipeline
+        break
+      }
+      if (!this.scalarDst) {
+        const bank = rf.bankOf(this.dst, w)
+        if (!rf.grant(lane, bank, c)) {
+          this.ctx.block(lane, this.seq, REASON.bank)
+          break
+        }
+        rec.use(this.ctx.bankRes[lane * d.banks + bank] ?? 0, c, 1, this.seq)
+        if (this.ctx.m.chaining) rf.ready[rf.slot(this.dst, lane, w)] = c + 1
+      }
+      this.ctx.busyLane(lane)
+      if (this.time(lane, F_WRITE_START) === NO_CYCLE) this.setTime(lane, F_WRITE_START, c)
+      this.setTime(lane, F_WRITE_END, c)
+      w++
+    }
+    this.wrCnt[lane] = w
+    if (w >= total && this.lanePhasesDone(lane)) this.finishLane(lane, c)
+  }
+
+  /** Whether a lane has nothing left besides its writes (subclasses with extra phases override). */
+  protected lanePhasesDone(_lane: number): boolean {
+    return true
+  }
+
+  protected finishLane(lane: number, c: number): void {
+    if (this.laneDone[lane] === 1) return
+    this.laneDone[lane] = 1
+    this.doneCount++
+    if ((this.n[lane] ?? 0) > 0) {
+      const ws = this.time(lane, F_WRITE_END)
+      const es = this.time(lane, F_EXEC_START)
+      if (ws !== NO_CYCLE && es !== NO_CYCLE) this.setTime(lane, F_EXEC_END, Math.max(es, ws - 1))
+    }
+    this.ctx.sink.laneFinished(lane, this.seq, this.tookSlot[lane] === 1)
+    if (this.doneCount === this.L && this.globalDone()) this.finishAll(c)
+  }
+
+  /** Whether phases outside the lanes (ring, memory port) are finished. */
+  protected globalDone(): boolean {
+    return true
+  }
+
+  protected finishAll(c: number): void {
+    if (this.complete >= 0) return
+    this.complete = c
+    const { rf, ren } = this.ctx
+    for (const p of this.dst) {
+      rf.release(p, c + 1)
+      ren.written(p)
+    }
+    for (const p of this.oldDst) ren.supersede(p)
+    this.ctx.sink.completed(this.seq, c)
+  }
+
+  /** Per-lane beat step; called after writes and before reads each cycle. */
+  abstract exec(lane: number, c: number): void
+  /** Step outside the lanes (memory unit, ring); called first in each cycle. */
+  global(_c: number): void {}
+
+  /** Flops of the active elements. */
+  flops(): number {
+    const op = this.op
+    if (op.flopsPerElement === 0) return 0
+    let active = op.vl
+    if (op.active) {
+      active = 0
+      for (let i = 0; i < op.vl; i++) active += op.active[i] ?? 0
+    }
+    return active * op.flopsPerElement
+  }
+
+  /** The lane still has work for this instruction. */
+  pending(lane: number): boolean {
+    return this.laneDone[lane] !== 1
+  }
+}
+
+/** Elements per lane for the standard layout. */
+export function fillLaneElements(n: Int32Array, vl: number): void {
+  const L = n.length
+  for (let l = 0; l < L; l++) n[l] = Math.max(0, Math.ceil((vl - l) / L))
+}
+
+export { PENDING, wordsFor }
+export const NO_CYCLE_F = -1

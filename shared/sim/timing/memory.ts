@@ -1,0 +1,235 @@
+/**
+ * The memory unit (handbook section 7): `memoryPorts` memory instructions at a
+ * time, started in program order. A unit-stride access moves busBits / EEW
+ * consecutive elements a cycle, strided and indexed ones
+ * `gatherElementsPerCycle` (never more than the bus carries); loaded elements
+ * arrive `memLatency` cycles after their request and are written like results.
+ */
+import type { VectorOp } from '../exec/stream'
+import { wordsFor } from './config'
+import type { Ctx } from './context'
+import { REASON } from './context'
+import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, F_WRITE_END, F_WRITE_START, Inst, NO_CYCLE_F } from './inst'
+
+export abstract class MemInst extends Inst {
+  /** Element count moved (vl, or ceil(vl / 8) bytes for vlm/vsm: the stream already says so). */
+  readonly count: number
+  readonly eew: number
+  readonly perCycle: number
+  readonly lo: number
+  readonly hi: number
+  port = -1
+  next = 0
+  busDone = false
+  /** Last cycle the access needs its port: the last request, or a load's last arrival. */
+  portUntil = -1
+  protected readonly laneBeats: Int32Array
+  protected readonly lastCycle: Int32Array
+  protected index: ReturnType<Inst['addSource']> | null = null
+  protected indexBits = 64
+
+  constructor(ctx: Ctx, op: VectorOp) {
+    super(ctx, op, 'mem')
+    this.waitReason = REASON.memory
+    const L = this.L
+    this.count = op.vl
+    this.eew = op.eew
+    const mem = op.memory
+    const bus = mem?.isStore ? ctx.m.storeBusBits : ctx.m.loadBusBits
+    const unit = !mem || mem.pattern === 'unit' || mem.pattern === 'mask'
+    this.perCycle = unit ? Math.max(1, bus / this.eew) : Math.max(1, Math.min(ctx.m.gatherElementsPerCycle, bus / this.eew))
+    for (let l = 0; l < L; l++) this.n[l] = Math.max(0, Math.ceil((this.count - l) / L))
+    let lo = Infinity
+    let hi = -Infinity
+    const addr = mem?.addresses
+    if (addr) for (let i = 0; i < addr.length; i++) {
+      const a = addr[i] ?? 0
+      if (a < lo) lo = a
+      if (a + this.eew / 8 > hi) hi = a + this.eew / 8
+    }
+    this.lo = lo
+    this.hi = hi
+    this.laneBeats = new Int32Array(L)
+    this.lastCycle = new Int32Array(L).fill(-1)
+  }
+
+  get isStore(): boolean {
+    return this.op.memory?.isStore === true
+  }
+
+  get indexed(): boolean {
+    return this.op.memory?.pattern === 'indexed'
+  }
+
+  overlaps(o: MemInst): boolean {
+    return this.lo < o.hi && o.lo < this.hi
+  }
+
+  /** Gets a memory port: every lane may read (indices, store data) from this cycle. */
+  begin(c: number, port: number): void {
+    this.port = port
+    for (let l = 0; l < this.L; l++) this.startLane(l, c)
+  }
+
+  protected unitStride(): boolean {
+    const p = this.op.memory?.pattern
+    return p === undefined || p === 'unit' || p === 'mask'
+  }
+
+  protected isActive(i: number): boolean {
+    return !this.op.active || this.op.active[i] === 1
+  }
+
+  /** Whether element i's index (indexed) is queued in its lane. */
+  protected indexReady(i: number): boolean {
+    const ix = this.index
+    if (!ix) return true
+    const lane = i % this.L
+    return (ix.readCnt[lane] ?? 0) >= Math.floor((Math.floor(i / this.L) * this.indexBits) / 64) + 1
+  }
+
+  protected touchLane(lane: number, c: number): void {
+    if (this.lastCycle[lane] === c) return
+    if (this.lastCycle[lane] === -1) this.setTime(lane, F_EXEC_START, c)
+    this.lastCycle[lane] = c
+    this.laneBeats[lane] = (this.laneBeats[lane] ?? 0) + 1
+    this.setTime(lane, F_BEATS, this.laneBeats[lane] ?? 0)
+    this.ctx.busyLane(lane)
+  }
+
+  protected consumeIndex(i: number): void {
+    const ix = this.index
+    if (!ix) return
+    const lane = i % this.L
+    const local = Math.floor(i / this.L)
+    ix.cons[lane] = local === (this.n[lane] ?? 0) - 1 ? (ix.words[lane] ?? 0) : Math.floor(((local + 1) * this.indexBits) / 64)
+  }
+
+  protected override globalDone(): boolean {
+    return this.busDone
+  }
+
+  exec(_lane: number, _c: number): void {}
+}
+
+export class LoadInst extends MemInst {
+  private readonly arrived: Int32Array
+
+  constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
+    super(ctx, op)
+    const [index] = srcPhys
+    if (index && this.indexed) {
+      this.indexBits = (op.memory as { indexEew?: number } | undefined)?.indexEew ?? op.sew
+      this.index = this.addSource(index, this.indexBits, (l) => wordsFor(this.n[l] ?? 0, this.indexBits))
+    }
+    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
+    for (let l = 0; l < this.L; l++) this.dstWords[l] = wordsFor(this.n[l] ?? 0, this.eew)
+    // A lane may receive several elements a cycle from a wide bus.
+    this.writesPerCycle = Math.max(1, Math.ceil(this.perCycle / this.L))
+    this.allocResults()
+    this.arrived = new Int32Array(this.L)
+    this.writeCounts()
+  }
+
+  /** Issues this cycle's requests on the load bus. */
+  override global(c: number): void {
+    if (this.port < 0 || this.busDone) return
+    const ctx = this.ctx
+    const L = this.L
+    const per = 64 / this.eew
+    let moved = 0
+    const unit = this.unitStride()
+    while (this.next < this.count && moved < this.perCycle) {
+      const i = this.next
+      const active = this.isActive(i)
+      if (active && !this.indexReady(i)) break
+      // Unit-stride moves whole lines, masked-off elements included; gathers skip them.
+      if (active || unit) moved++
+      const lane = i % L
+      this.touchLane(lane, c)
+      this.consumeIndex(i)
+      const got = (this.arrived[lane] = (this.arrived[lane] ?? 0) + 1)
+      if (got % per === 0 || got === (this.n[lane] ?? 0)) this.resultReady(lane, Math.ceil(got / per) - 1, c + ctx.m.memLatency)
+      this.next++
+    }
+    if (moved > 0) ctx.rec.use(ctx.loadBusRes[this.port] ?? 0, c, moved * this.eew, this.seq)
+    if (this.next >= this.count) {
+      this.busDone = true
+      // One memory pipeline: the port stays with the load until its last element has arrived.
+      this.portUntil = c + ctx.m.memLatency
+    }
+  }
+
+  override write(lane: number, c: number): void {
+    if (this.started[lane] === 1 && this.laneDone[lane] !== 1) {
+      const at = this.readyAt[lane * this.maxDstWords + (this.wrCnt[lane] ?? 0)] ?? -1
+      if (at < 0 || at > c) this.ctx.block(lane, this.seq, REASON.memory)
+    }
+    super.write(lane, c)
+  }
+}
+
+export class StoreInst extends MemInst {
+  private readonly data: ReturnType<Inst['addSource']> | null
+  private readonly sentCount: Int32Array
+
+  constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
+    super(ctx, op)
+    const [data, index] = srcPhys
+    this.data = data ? this.addSource(data, this.eew, (l) => wordsFor(this.n[l] ?? 0, this.eew)) : null
+    if (index && this.indexed) {
+      this.indexBits = (op.memory as { indexEew?: number } | undefined)?.indexEew ?? op.sew
+      this.index = this.addSource(index, this.indexBits, (l) => wordsFor(this.n[l] ?? 0, this.indexBits))
+    }
+    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
+    this.allocResults()
+    this.sentCount = new Int32Array(this.L)
+    this.writeCounts()
+  }
+
+  /** Sends this cycle's elements on the store bus, in element order, once their data words are queued. */
+  override global(c: number): void {
+    if (this.port < 0 || this.busDone) return
+    const ctx = this.ctx
+    const L = this.L
+    let moved = 0
+    const unit = this.unitStride()
+    while (this.next < this.count && moved < this.perCycle) {
+      const i = this.next
+      const lane = i % L
+      const local = Math.floor(i / L)
+      const active = this.isActive(i)
+      if (active) {
+        const d = this.data
+        if (d && (d.readCnt[lane] ?? 0) < Math.floor((local * this.eew) / 64) + 1) break
+        if (!this.indexReady(i)) break
+      }
+      if (active || unit) moved++
+      this.touchLane(lane, c)
+      this.consumeIndex(i)
+      const sent = (this.sentCount[lane] = (this.sentCount[lane] ?? 0) + 1)
+      const d = this.data
+      if (d) d.cons[lane] = sent === (this.n[lane] ?? 0) ? (d.words[lane] ?? 0) : Math.floor((sent * this.eew) / 64)
+      if (sent === (this.n[lane] ?? 0)) {
+        // The store's write phase in a lane is the cycle its last element leaves for memory.
+        this.setTime(lane, F_WRITE_START, c)
+        this.setTime(lane, F_WRITE_END, c)
+        if (this.time(lane, F_READ_START) === NO_CYCLE_F) {
+          this.setTime(lane, F_READ_START, c)
+          this.setTime(lane, F_READ_END, c)
+        }
+      }
+      this.next++
+    }
+    if (moved > 0) ctx.rec.use(ctx.storeBusRes[this.port] ?? 0, c, moved * this.eew, this.seq)
+    if (this.next >= this.count) {
+      this.busDone = true
+      this.portUntil = c
+    }
+    for (let l = 0; l < L; l++) {
+      if (this.laneDone[l] !== 1 && this.started[l] === 1 && (this.sentCount[l] ?? 0) >= (this.n[l] ?? 0)) this.finishLane(l, c)
+    }
+  }
+
+  override write(_lane: number, _c: number): void {}
+}

@@ -1,0 +1,331 @@
+/**
+ * Reductions (handbook section 8). Unordered: each lane folds its beats into
+ * `reductionAccumulators` partials used round-robin, combines them pairwise,
+ * then the lane partials walk down the ring from the highest active lane to
+ * lane 0, where vs1[0] is added and vd[0] written. Ordered (vfredosum): one
+ * running value visits the elements in order, lane to lane over the ring.
+ */
+import type { VectorOp } from '../exec/stream'
+import { elementsPerBeat, UNIT_INDEX, unitLatency, wordsFor } from './config'
+import type { Ctx } from './context'
+import { REASON } from './context'
+import { F_EXEC_START, F_WRITE_END, F_WRITE_START, Inst } from './inst'
+import { execUnitOf, maskBits } from './units'
+
+const STAGE_LANES = 0 // lanes folding their beats
+const STAGE_SEND = 1 // running value waits in lane `pos` to be sent down
+const STAGE_ADD = 2 // value on its way to lane `pos`, added there on arrival
+const STAGE_FINAL = 3 // lane 0 adds vs1[0]
+const STAGE_WRITE = 4 // vd[0] or the scalar result is being written
+
+export class ReductionInst extends Inst {
+  private readonly u: number
+  private readonly D: number
+  private readonly epc: number
+  private readonly A: number
+  private readonly beatDone: Int32Array
+  /** [lane][accumulator]: cycle the accumulator's last operation finishes (-1: unused). */
+  private readonly acc: Int32Array
+  /** Partials still to be combined per lane, and the lane's final partial time (-1 until known). */
+  private readonly partials: Int32Array
+  private readonly laneValue: Int32Array
+  private readonly hasVs1: boolean
+  private stage = STAGE_LANES
+  private pos = 0
+  private valueAt = 0
+
+  constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
+    super(ctx, op, 'arith')
+    this.waitReason = REASON.ring
+    const unit = execUnitOf(op)
+    this.u = UNIT_INDEX[unit]
+    this.D = unitLatency(ctx.m, unit)
+    const bits = maskBits(op)
+    this.epc = bits.maskOnly ? 64 : elementsPerBeat(ctx.m, unit, op.sew)
+    this.A = ctx.m.reductionAccumulators
+    this.scalarDst = op.scalarResult
+    const L = this.L
+    for (let l = 0; l < L; l++) this.n[l] = Math.max(0, Math.ceil((op.vl - l) / L))
+    const [vs2, vs1] = srcPhys
+    if (vs2) this.addSource(vs2, bits.src, (l) => wordsFor(this.n[l] ?? 0, bits.src))
+    this.hasVs1 = !!vs1 && !op.scalarResult
+    if (vs1 && this.hasVs1) this.addSource(vs1, op.sew, (l) => (l === 0 && op.vl > 0 ? 1 : 0))
+    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
+    for (let l = 0; l < L; l++) this.beats[l] = Math.ceil((this.n[l] ?? 0) / this.epc)
+    this.dstWords[0] = op.vl > 0 ? 1 : 0
+    this.allocResults()
+    this.beatDone = new Int32Array(L)
+    this.acc = new Int32Array(L * this.A).fill(-1)
+    this.partials = new Int32Array(L)
+    this.laneValue = new Int32Array(L).fill(-1)
+    this.writeCounts()
+  }
+
+  private get vs2() {
+    return this.srcs[0]
+  }
+
+  exec(lane: number, c: number): void {
+    if (this.started[lane] !== 1) return
+    const ctx = this.ctx
+    const uk = lane * 4 + this.u
+    if ((ctx.unitFree[uk] ?? 0) > c) return
+    const j = this.beatDone[lane] ?? 0
+    const b = this.beats[lane] ?? 0
+    if (j < b) {
+      const n = this.n[lane] ?? 0
+      const upto = Math.min(n, (j + 1) * this.epc)
+      const vs2 = this.vs2
+      if (vs2 && (vs2.readCnt[lane] ?? 0) < Math.ceil((upto * vs2.bits) / 64)) return
+      const mask = this.op.masked ? this.srcs[this.srcs.length - 1] : undefined
+      if (mask && (mask.readCnt[lane] ?? 0) < Math.ceil(upto / 64)) return
+      const a = lane * this.A + (j % this.A)
+      if ((this.acc[a] ?? -1) > c) {
+        ctx.busyLane(lane) // the accumulator's previous add is in the pipeline
+        return
+      }
+      this.beat(lane, uk, c)
+      this.acc[a] = c + this.D
+      if (j === 0) this.setTime(lane, F_EXEC_START, c)
+      const last = j === b - 1
+      if (vs2) vs2.cons[lane] = last ? (vs2.words[lane] ?? 0) : Math.floor((upto * vs2.bits) / 64)
+      if (mask) mask.cons[lane] = last ? (mask.words[lane] ?? 0) : Math.floor(upto / 64)
+      this.beatDone[lane] = j + 1
+      if (last) this.partials[lane] = Math.min(this.A, b)
+      return
+    }
+    if ((this.laneValue[lane] ?? -1) < 0 && b > 0) {
+      this.combine(lane, uk, c)
+      return
+    }
+    const own = this.laneValue[lane] ?? -1
+    if (this.stage === STAGE_ADD && this.pos === lane && c >= this.valueAt && own >= 0 && own <= c) {
+      this.beat(lane, uk, c)
+      this.valueAt = c + this.D
+      this.stage = lane === 0 ? this.afterRing() : STAGE_SEND
+      return
+    }
+    if (this.stage === STAGE_FINAL && lane === 0 && c >= this.valueAt) {
+      const vs1 = this.srcs[1]
+      if (vs1 && (vs1.readCnt[0] ?? 0) < 1) return
+      this.beat(lane, uk, c)
+      this.valueAt = c + this.D
+      this.toWrite()
+    }
+  }
+
+  private beat(lane: number, uk: number, c: number): void {
+    const ctx = this.ctx
+    ctx.unitFree[uk] = c + 1
+    ctx.rec.use(ctx.unitRes[uk] ?? 0, c, 1, this.seq)
+    ctx.busyLane(lane)
+  }
+
+  /** Pairwise combination of the accumulators: the two earliest ready partials, when both are done. */
+  private combine(lane: number, uk: number, c: number): void {
+    const base = lane * this.A
+    let i1 = -1
+    let i2 = -1
+    let pending = false
+    for (let k = 0; k < this.A; k++) {
+      const t = this.acc[base + k] ?? -1
+      if (t < 0) continue
+      if (t > c) {
+        pending = true
+        continue
+      }
+      if (i1 < 0 || t < (this.acc[base + i1] ?? 0)) {
+        i2 = i1
+        i1 = k
+      } else if (i2 < 0 || t < (this.acc[base + i2] ?? 0)) i2 = k
+    }
+    const left = this.partials[lane] ?? 0
+    if (left <= 1) {
+      if (!pending && i1 >= 0) this.laneValue[lane] = this.acc[base + i1] ?? c
+      else this.ctx.busyLane(lane)
+      if ((this.laneValue[lane] ?? -1) >= 0) this.maybeStartRing()
+      return
+    }
+    if (i1 < 0 || i2 < 0) {
+      this.ctx.busyLane(lane)
+      return
+    }
+    this.beat(lane, uk, c)
+    this.acc[base + i1] = c + this.D
+    this.acc[base + i2] = -1
+    this.partials[lane] = left - 1
+  }
+
+  private activeLanes(): number {
+    return Math.min(this.op.vl, this.L)
+  }
+
+  private maybeStartRing(): void {
+    if (this.stage !== STAGE_LANES) return
+    const top = this.activeLanes() - 1
+    if (top < 0) return
+    const t = this.laneValue[top] ?? -1
+    if (t < 0) return
+    this.pos = top
+    this.valueAt = t
+    this.stage = top === 0 ? this.afterRing() : STAGE_SEND
+  }
+
+  private afterRing(): number {
+    if (this.hasVs1) return STAGE_FINAL
+    this.toWrite()
+    return STAGE_WRITE
+  }
+
+  private toWrite(): void {
+    this.stage = STAGE_WRITE
+    this.resultReady(0, 0, this.valueAt)
+  }
+
+  override global(c: number): void {
+    if (this.stage !== STAGE_SEND || c < this.valueAt) return
+    const from = this.pos
+    if (!this.ctx.bookLink(false, from - 1, c, this.seq)) {
+      this.ctx.block(from, this.seq, REASON.ring)
+      return
+    }
+    this.ctx.busyLane(from)
+    this.setTime(from, F_WRITE_START, c)
+    this.setTime(from, F_WRITE_END, c)
+    this.finishLane(from, c)
+    this.pos = from - 1
+    this.valueAt = c + this.ctx.m.ringHopLatency
+    this.stage = STAGE_ADD
+  }
+
+  override write(lane: number, c: number): void {
+    if (lane !== 0 || this.started[0] !== 1) {
+      this.waiting(lane)
+      return
+    }
+    if (this.stage !== STAGE_WRITE && (this.n[0] ?? 0) > 0) {
+      this.waiting(lane)
+      return
+    }
+    super.write(lane, c)
+  }
+
+  /** A lane whose own work is done waits for the ring: the wait is the ring's. */
+  private waiting(lane: number): void {
+    if (this.laneDone[lane] === 1 || this.started[lane] !== 1) return
+    if ((this.beatDone[lane] ?? 0) >= (this.beats[lane] ?? 0) && (this.laneValue[lane] ?? -1) >= 0) {
+      this.ctx.block(lane, this.seq, REASON.ring)
+    }
+  }
+
+  protected override lanePhasesDone(lane: number): boolean {
+    return lane === 0 ? this.stage === STAGE_WRITE || (this.n[0] ?? 0) === 0 : true
+  }
+}
+
+/** vfredosum: the running sum visits element 0, 1, 2, ... in their lanes. */
+export class OrderedReductionInst extends Inst {
+  private readonly u: number
+  private readonly D: number
+  private next = 0
+  /** Lane the running value is in, the lane it must reach, and when it is there. */
+  private at = 0
+  private target = 0
+  private valueAt = -1
+  private adding = false
+  private readonly lastOfLane: Int32Array
+  private readonly beatDone: Int32Array
+
+  constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
+    super(ctx, op, 'arith')
+    this.waitReason = REASON.ring
+    const unit = execUnitOf(op)
+    this.u = UNIT_INDEX[unit]
+    this.D = unitLatency(ctx.m, unit)
+    const L = this.L
+    for (let l = 0; l < L; l++) this.n[l] = Math.max(0, Math.ceil((op.vl - l) / L))
+    const [vs2, vs1] = srcPhys
+    if (vs2) this.addSource(vs2, op.sew, (l) => wordsFor(this.n[l] ?? 0, op.sew))
+    if (vs1) this.addSource(vs1, op.sew, (l) => (l === 0 && op.vl > 0 ? 1 : 0))
+    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
+    this.lastOfLane = new Int32Array(L).fill(-1)
+    for (let l = 0; l < L; l++) {
+      // One element a beat: the order forbids folding elements together.
+      this.beats[l] = this.n[l] ?? 0
+      if ((this.n[l] ?? 0) > 0) this.lastOfLane[l] = l + ((this.n[l] ?? 0) - 1) * L
+    }
+    this.dstWords[0] = op.vl > 0 ? 1 : 0
+    this.allocResults()
+    this.beatDone = new Int32Array(L)
+    this.writeCounts()
+  }
+
+  exec(lane: number, c: number): void {
+    if (this.started[lane] !== 1 || this.adding || this.next >= this.op.vl) return
+    const L = this.L
+    if (lane !== this.next % L || this.at !== lane) return
+    const vs1 = this.srcs[1]
+    if (this.valueAt < 0) {
+      // The running value starts as vs1[0], read in lane 0.
+      if (!vs1 || (vs1.readCnt[0] ?? 0) < 1) return
+      this.valueAt = c
+    }
+    if (c < this.valueAt) {
+      this.ctx.busyLane(lane)
+      return
+    }
+    const vs2 = this.srcs[0]
+    const local = Math.floor(this.next / L)
+    const word = Math.floor((local * this.op.sew) / 64)
+    if (vs2 && (vs2.readCnt[lane] ?? 0) < word + 1) return
+    const mask = this.op.masked ? this.srcs[this.srcs.length - 1] : undefined
+    if (mask && (mask.readCnt[lane] ?? 0) < Math.floor(local / 64) + 1) return
+    const uk = lane * 4 + this.u
+    const ctx = this.ctx
+    if ((ctx.unitFree[uk] ?? 0) > c) return
+    ctx.unitFree[uk] = c + 1
+    ctx.rec.use(ctx.unitRes[uk] ?? 0, c, 1, this.seq)
+    ctx.busyLane(lane)
+    if ((this.beatDone[lane] ?? 0) === 0) this.setTime(lane, F_EXEC_START, c)
+    this.beatDone[lane] = (this.beatDone[lane] ?? 0) + 1
+    const lastLocal = (this.n[lane] ?? 0) - 1
+    if (vs2) vs2.cons[lane] = local === lastLocal ? (vs2.words[lane] ?? 0) : Math.floor(((local + 1) * this.op.sew) / 64)
+    if (mask) mask.cons[lane] = local === lastLocal ? (mask.words[lane] ?? 0) : Math.floor((local + 1) / 64)
+    if (vs1 && lane === 0) vs1.cons[0] = 1
+    this.valueAt = c + this.D
+    this.next++
+    this.target = this.next < this.op.vl ? this.next % L : 0
+    if (this.target === lane && this.next >= this.op.vl) this.resultReady(0, 0, this.valueAt)
+  }
+
+  override global(c: number): void {
+    if (this.at === this.target || this.valueAt < 0 || c < this.valueAt) return
+    if (this.next === 0) return
+    const from = this.at
+    if (!this.ctx.bookLink(true, from, c, this.seq)) {
+      this.ctx.block(from, this.seq, REASON.ring)
+      return
+    }
+    this.ctx.busyLane(from)
+    if (this.lastOfLane[from] === this.next - 1 || ((this.lastOfLane[from] ?? -1) < this.next && from !== 0)) {
+      if (this.laneDone[from] !== 1 && (this.n[from] ?? 0) > 0 && (this.lastOfLane[from] ?? -1) < this.next) {
+        if (this.time(from, F_WRITE_START) < 0) this.setTime(from, F_WRITE_START, c)
+        this.setTime(from, F_WRITE_END, c)
+        if (from !== 0) this.finishLane(from, c)
+      }
+    }
+    this.at = (from + 1) % this.L
+    this.valueAt = c + this.ctx.m.ringHopLatency
+    if (this.at === this.target && this.next >= this.op.vl) this.resultReady(0, 0, this.valueAt)
+  }
+
+  override write(lane: number, c: number): void {
+    if (lane !== 0) return
+    if (this.next < this.op.vl || this.at !== 0) return
+    super.write(lane, c)
+  }
+
+  protected override lanePhasesDone(lane: number): boolean {
+    return lane !== 0 || (this.next >= this.op.vl && this.at === 0)
+  }
+}

@@ -1,0 +1,95 @@
+/**
+ * Chimeline's cycle-level lane timing model. `simulate` runs a dynamic
+ * instruction stream to the end; `createTimingState` + `step` + `finish` let a
+ * driver (the Worker) advance it in slices, report progress and cancel.
+ *
+ * @example
+ *   const { trace, error } = simulate(execute(program).stream, parseMachine({ lanes: 4 }))
+ */
+import type { Machine } from '../../schemas/machine'
+import type { DynamicStream } from '../exec/stream'
+import type { InstructionTrace, SimulateOptions, TimingError, TimingResult } from '../trace/types'
+import { STALL_REASONS, emptyStallCounts } from '../trace/types'
+import type { TimingState } from './engine'
+import { createTimingState, step } from './engine'
+import { computeMetrics } from './metrics'
+
+export type { TimingState } from './engine'
+export { createTimingState, step } from './engine'
+
+export interface TimingProgress {
+  cycle: number
+  dispatched: number
+  total: number
+  done: boolean
+}
+
+export function progress(s: TimingState): TimingProgress {
+  return { cycle: s.cycle, dispatched: s.opIdx, total: s.stream.ops.length, done: s.done }
+}
+
+/** Runs up to `cycles` more cycles; returns false once the run is over. */
+export function advance(s: TimingState, cycles: number): boolean {
+  for (let i = 0; i < cycles; i++) if (!step(s)) return false
+  return true
+}
+
+/** Builds the (possibly partial) trace. `stopped` records why a driver ended the run early (e.g. cancelled). */
+export function finish(s: TimingState, stopped?: TimingError): TimingResult {
+  const ctx = s.ctx
+  const cycles = s.lastBusy + 1
+  const ops = s.stream.ops
+  let flops = 0
+  const instructions: InstructionTrace[] = ops.map((op, i) => {
+    const inst = s.instOf[i]
+    const done = (s.completeAt[i] ?? -1) >= 0
+    const f = inst && done ? inst.flops() : 0
+    flops += f
+    const stalls = emptyStallCounts()
+    STALL_REASONS.forEach((r, k) => (stalls[r] = s.opStalls[i * 9 + k] ?? 0))
+    const dispatch = (s.dispatchAt[i] ?? -1) >= 0 ? (s.dispatchAt[i] ?? 0) : null
+    const complete = done ? (s.completeAt[i] ?? 0) : null
+    return {
+      index: op.seq,
+      staticIndex: op.staticIndex,
+      op: op.op,
+      text: op.text,
+      vl: op.vl,
+      sew: op.sew,
+      lmul: op.lmul,
+      unit: op.unit,
+      shape: op.shape,
+      masked: op.masked,
+      isConfig: op.isConfig,
+      dispatch,
+      complete,
+      latency: dispatch !== null && complete !== null ? complete - dispatch + 1 : null,
+      flops: f,
+      stalls,
+    }
+  })
+  const spans = ctx.rec.finish()
+  const error = s.error ?? (s.done ? undefined : (stopped ?? { code: 'cancelled', message: 'the run was stopped before it finished' }))
+  return {
+    trace: {
+      formatVersion: 1,
+      machine: s.machine,
+      laneCount: ctx.L,
+      cycles,
+      instructions,
+      laneTimes: ctx.laneTimes,
+      stalls: spans.stalls,
+      resources: ctx.rec.resources,
+      usage: spans.usage,
+      metrics: computeMetrics(ctx, cycles, flops, s.laneBusy),
+    },
+    ...(error ? { error } : {}),
+  }
+}
+
+/** Times a whole stream on a machine. Never throws for a long or huge run: limits end it with `error` set. */
+export function simulate(stream: DynamicStream, machine: Machine, options: SimulateOptions = {}): TimingResult {
+  const s = createTimingState(stream, machine, options)
+  while (step(s));
+  return finish(s)
+}

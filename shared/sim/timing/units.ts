@@ -1,0 +1,100 @@
+/**
+ * Element-wise instructions on the lane units (handbook sections 1, 5, 6): a
+ * unit takes a beat when all its operand words are queued; the result asks for
+ * a write port `latency` cycles later. The divider is not pipelined.
+ */
+import type { VectorOp } from '../exec/stream'
+import type { ExecUnit } from './config'
+import { elementsPerBeat, UNIT_INDEX, unitLatency, wordsFor } from './config'
+import type { Ctx } from './context'
+import { F_EXEC_START, Inst } from './inst'
+
+/** Mask-producing instructions write one bit per element. */
+const MASK_DST = /^vm(seq|sne|sltu?|sleu?|sgtu?|feq|fne|flt|fle|fgt|fge|and|nand|andn|or|nor|orn|xor|xnor|sbf|sif|sof)\./
+/** Instructions whose vector sources are all masks. */
+const MASK_SRC = /(\.mm$)|^(vmsbf|vmsif|vmsof|viota|vcpop|vfirst)\./
+/** Pure mask work: 64 mask bits a beat. */
+const MASK_ONLY = /(\.mm$)|^(vmsbf|vmsif|vmsof|vcpop|vfirst)\./
+
+export function execUnitOf(op: VectorOp): ExecUnit {
+  return op.unit === 'mul' || op.unit === 'fpu' || op.unit === 'div' ? op.unit : 'alu'
+}
+
+export function maskBits(op: VectorOp): { src: number; dst: number; maskOnly: boolean } {
+  return { src: MASK_SRC.test(op.op) ? 1 : op.sew, dst: MASK_DST.test(op.op) ? 1 : op.sew, maskOnly: MASK_ONLY.test(op.op) }
+}
+
+export class UnitInst extends Inst {
+  readonly unit: ExecUnit
+  protected readonly u: number
+  protected readonly latency: number
+  protected readonly epc: number
+  protected readonly beatDone: Int32Array
+  protected readonly dstBits: number
+
+  constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
+    super(ctx, op, 'arith')
+    const m = ctx.m
+    this.unit = execUnitOf(op)
+    this.u = UNIT_INDEX[this.unit]
+    this.latency = unitLatency(m, this.unit)
+    const bits = maskBits(op)
+    this.dstBits = bits.dst
+    this.epc = bits.maskOnly ? 64 : elementsPerBeat(m, this.unit, op.sew)
+    this.layout()
+    for (const g of srcPhys) this.addSource(g, bits.src, (l) => wordsFor(this.n[l] ?? 0, bits.src))
+    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
+    for (let l = 0; l < this.L; l++) {
+      this.beats[l] = Math.ceil((this.n[l] ?? 0) / this.epc)
+      this.dstWords[l] = wordsFor(this.n[l] ?? 0, this.dstBits)
+    }
+    this.writesPerCycle = Math.max(1, Math.ceil((this.epc * this.dstBits) / 64))
+    this.beatDone = new Int32Array(this.L)
+    this.allocResults()
+    this.writeCounts()
+  }
+
+  /** Element positions per lane; element-0 forms override it. */
+  protected layout(): void {
+    const op = this.op
+    if (op.shape === 'scalar-result' && !/^(vcpop|vfirst)/.test(op.op)) {
+      // vmv.x.s, vfmv.f.s: lane 0 reads element 0; the result goes to the front end.
+      this.n[0] = 1
+      this.scalarDst = true
+      return
+    }
+    if (op.shape === 'scalar-insert') {
+      this.n[0] = op.vl > 0 ? 1 : 0
+      return
+    }
+    for (let l = 0; l < this.L; l++) this.n[l] = Math.max(0, Math.ceil((op.vl - l) / this.L))
+  }
+
+  exec(lane: number, c: number): void {
+    if (this.started[lane] !== 1) return
+    const j = this.beatDone[lane] ?? 0
+    const b = this.beats[lane] ?? 0
+    if (j >= b) return
+    const ctx = this.ctx
+    const uk = lane * 4 + this.u
+    const n = this.n[lane] ?? 0
+    const upto = Math.min(n, (j + 1) * this.epc)
+    for (const s of this.srcs) {
+      if ((s.words[lane] ?? 0) === 0) continue
+      if ((s.readCnt[lane] ?? 0) < Math.ceil((upto * s.bits) / 64)) return
+    }
+    if (this.srcs.every((s) => (s.words[lane] ?? 0) === 0) && this.time(lane, 2) >= c) return // start cycle reads nothing
+    if ((ctx.unitFree[uk] ?? 0) > c) return
+    const occupy = this.unit === 'div' ? this.latency : 1
+    ctx.unitFree[uk] = c + occupy
+    ctx.rec.use(ctx.unitRes[uk] ?? 0, c, 1, this.seq, occupy)
+    ctx.busyLane(lane)
+    if (j === 0) this.setTime(lane, F_EXEC_START, c)
+    const last = j === b - 1
+    for (const s of this.srcs) s.cons[lane] = last ? (s.words[lane] ?? 0) : Math.floor((upto * s.bits) / 64)
+    const before = j === 0 ? 0 : Math.floor((Math.min(n, j * this.epc) * this.dstBits) / 64)
+    const after = last ? (this.dstWords[lane] ?? 0) : Math.floor((upto * this.dstBits) / 64)
+    for (let w = before; w < after; w++) this.resultReady(lane, w, c + this.latency)
+    this.beatDone[lane] = j + 1
+  }
+}
