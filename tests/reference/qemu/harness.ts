@@ -80,7 +80,7 @@ export async function runQemu(exe: string, vlen: number): Promise<QemuRun> {
   } catch (e) {
     const err = e as { code?: number; stdout?: Buffer; signal?: string }
     if (typeof err.code === 'number' && err.stdout) return { stdout: err.stdout, exitCode: err.code }
-    throw new Error(`qemu-riscv64 ${args.join(" ")} failed (signal ${err.signal ?? "none"})`, { cause: e })
+    throw new Error(`qemu-riscv64 ${args.join(' ')} failed (signal ${err.signal ?? 'none'})`, { cause: e })
   }
 }
 
