@@ -15,7 +15,7 @@ import type { OperandKind } from './fields'
 import { formatInstruction } from './format'
 import { lexLine, type Token } from './lexer'
 import { parseOperand, parseVtypeOperand } from './operands'
-import { PSEUDOS, type Expansion } from './pseudo'
+import { PSEUDOS, pseudoNamed, type Expansion } from './pseudo'
 import { OPS, opInfo, type OpInfo } from './table'
 import type { Instruction, Operands, Program, SimDiagnostic, SourceLoc } from './types'
 import { isUnsupportedVector } from './unsupported'
@@ -143,7 +143,7 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
       continue
     }
     let expansions: Expansion[] | SimDiagnostic
-    const pseudo = PSEUDOS[name]
+    const pseudo = pseudoNamed(name)
     const info = opInfo(name)
     if (pseudo && (!info || pseudo.applies(lexed.operands))) {
       expansions = pseudo.applies(lexed.operands)
@@ -188,7 +188,8 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
   const textBase = opt.textBase
   const textEnd = textBase + code.length * 4
   const dataBase = Math.ceil(textEnd / 4096) * 4096
-  const symbols: Record<string, number> = {}
+  // No prototype: a label may be called __proto__ or constructor.
+  const symbols = Object.create(null) as Record<string, number>
   for (const [n, l] of textLabels) symbols[n] = textBase + l.index * 4
   for (const [n, l] of dataLabels) symbols[n] = dataBase + l.offset
   code.forEach((p, i) => {

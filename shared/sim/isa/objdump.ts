@@ -75,7 +75,7 @@ function build(rows: ObjdumpRow[], symbols: Record<string, number>, textBase: nu
 export function parseObjdump(text: string, options: ReadOptions = {}): ReadResult {
   const max = options.maxInstructions ?? DEFAULT_MAX
   const rows: ObjdumpRow[] = []
-  const symbols: Record<string, number> = {}
+  const symbols = Object.create(null) as Record<string, number> // symbol names are user text
   const lines = text.split(/\r\n|\n|\r/)
   for (const [i, raw] of lines.entries()) {
     const s = SYMBOL.exec(raw)

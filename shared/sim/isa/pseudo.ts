@@ -202,6 +202,7 @@ export const PSEUDOS: Record<string, Pseudo> = {
   'vmsgeu.vx': geVx('vmsltu.vx'),
 }
 
-export function pseudoUsage(name: string): string | undefined {
-  return PSEUDOS[name]?.usage
+/** The pseudo-instruction called `name` (own keys only: user text may say `__proto__`). */
+export function pseudoNamed(name: string): Pseudo | undefined {
+  return Object.hasOwn(PSEUDOS, name) ? PSEUDOS[name] : undefined
 }

@@ -144,6 +144,17 @@ describe('assemble: errors say what and where', () => {
     expect(e?.message).toContain(message)
   })
 
+  it('rejects a branch whose label is beyond its reach (B-type: -4096..4094 bytes)', () => {
+    const e = errs(`beqz a0, far\n${'nop\n'.repeat(1100)}far: nop\n`)
+    expect(e[0]).toMatchObject({ line: 1, column: 10, code: 'imm-range' })
+  })
+
+  it('takes labels called like Object prototype members as plain labels', () => {
+    const p = ok('__proto__: nop\nconstructor: j __proto__\n')
+    expect([p.symbols['__proto__'], p.symbols['constructor'], p.instructions[1]?.operands.imm]).toEqual([0x10000, 0x10004, -4])
+    expect(errs('__proto__ a0')[0]?.code).toBe('unknown-mnemonic')
+  })
+
   it('reports several errors in one run, in source order', () => {
     const e = errs('foo a0\nvadd.vi v1, v2, 99\nbar\n')
     expect(e.map((d) => [d.line, d.code])).toEqual([[1, 'unknown-mnemonic'], [2, 'imm-range'], [3, 'unknown-mnemonic']])
@@ -182,6 +193,8 @@ describe('assemble: register groups (RISC-V V 1.0 spec 3.4.2, 5.3, 7.3, 16.3)', 
     expect(errs('vadd.vv v0, v1, v2, v0.t')[0]?.code).toBe('mask-overlap')
     expect(errs('vle32.v v0, (a0), v0.t')[0]?.code).toBe('mask-overlap')
     expect(ok('vmseq.vv v0, v1, v2, v0.t').instructions).toHaveLength(1)
+    // vmerge is encoded masked (vm = 0), so spec 5.3 reserves vd = v0 too; GNU as 2.40 accepts it
+    expect(errs('vmerge.vvm v0, v1, v2, v0')[0]?.code).toBe('mask-overlap')
   })
 
   it('rejects vslideup, vrgather and vcompress writing over their source (spec 16.3.1, 16.4, 16.5)', () => {
