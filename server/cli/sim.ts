@@ -14,7 +14,6 @@ import { checkMachine, defaultMachine } from '../../shared/schemas/machine'
 import { PRESETS } from '../../shared/sim/presets'
 import { runPipeline, type RunError } from '../../shared/sim/run'
 import { toCsv } from '../../shared/sim/trace/csv'
-import { traceToJson } from '../../shared/sim/trace/schema'
 import { summarize } from '../../shared/sim/trace/summary'
 import type { TimingTrace } from '../../shared/sim/trace/types'
 import { toVcd } from '../../shared/sim/trace/vcd'
@@ -37,7 +36,7 @@ function presetMachine(name: string | undefined): Record<string, unknown> {
   const key = name.toLowerCase()
   const preset = PRESETS.find((p) => p.id === key || p.name.toLowerCase() === key)
   if (!preset) throw new UsageError(`unknown preset "${name}" (presets: ${PRESETS.map((p) => `"${p.name}" (${p.id})`).join(', ')})`)
-  return { ...defaultMachine, ...preset.machine }
+  return mergeMachine({ ...defaultMachine }, preset.machine as Record<string, unknown>)
 }
 
 /** The machine of the command line, validated by the shared machine schema. */
@@ -69,9 +68,10 @@ function describe(error: RunError): string {
 export function format(trace: TimingTrace, fmt: Format, cutShort?: RunError): string {
   switch (fmt) {
     case 'summary':
-      return JSON.stringify(summarize(trace, cutShort ? { error: { code: cutShort.code, message: cutShort.message } } : {}), null, 2) + '\n'
+      return JSON.stringify(summarize(trace, cutShort ? { error: { code: cutShort.code, message: cutShort.message } } : {})) + '\n'
     case 'json':
-      return JSON.stringify(traceToJson(trace)) + '\n'
+      // Typed arrays as plain arrays; the zod JSON form of shared/sim/trace/schema.ts replaces this once it lands.
+      return JSON.stringify(trace, (_key, v: unknown) => (ArrayBuffer.isView(v) ? Array.from(v as Int32Array) : v)) + '\n'
     case 'csv':
       return toCsv(trace)
     case 'vcd':

@@ -5,7 +5,7 @@
  * @example
  *   JSON.stringify(summarize(result.trace, { error: result.error }))
  */
-import { laneTiming, type LaneTiming, type Metrics, type StallCounts, type TimingError, type TimingTrace } from './types'
+import { laneTiming, type LaneTiming, type Metrics, type StallCounts, type TimingTrace } from './types'
 import type { Sew } from '../isa/types'
 
 export const ESTIMATE_NOTE = 'Model estimates from the Chimeline reference timing model; not sign-off for silicon.'
@@ -25,13 +25,19 @@ export interface Summary {
   metrics: Metrics
   instructions: SummaryInstruction[]
   /** Present when the run was cut short: the trace above is partial. */
-  error?: TimingError
+  error?: SummaryError
   note: string
+}
+
+/** Why a run was cut short, e.g. a TimingError ('cycle-limit', 'trace-limit'). */
+export interface SummaryError {
+  code: string
+  message: string
 }
 
 export interface SummaryOptions {
   /** The error of a run that was cut short. */
-  error?: TimingError
+  error?: SummaryError
 }
 
 export function summarize(trace: TimingTrace, options: SummaryOptions = {}): Summary {

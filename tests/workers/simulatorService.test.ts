@@ -1,0 +1,72 @@
+/**
+ * The Worker's service, called directly (no Worker thread): it reports
+ * progress between batches, can be cancelled, supersedes a run in progress,
+ * returns structured errors as values, and hands back the compact trace.
+ */
+import { readFileSync } from 'node:fs'
+import { join } from 'node:path'
+import { describe, expect, it } from 'vitest'
+import { defaultMachine } from '../../shared/schemas/machine'
+import { runPipeline } from '../../shared/sim/run'
+import { decodeTrace } from '../../shared/sim/trace/compact'
+import { createSimulatorService } from '../../src/workers/simulatorService'
+
+const longStream = readFileSync(join(import.meta.dirname, '..', '..', 'examples', 'long-stream.s'), 'utf8')
+const saxpy = readFileSync(join(import.meta.dirname, '..', '..', 'examples', 'saxpy.s'), 'utf8')
+// Yield after every batch, so that the tests see every pause.
+const eager = () => createSimulatorService({ sliceMs: 0 })
+
+describe('the simulator Worker service', () => {
+  it('returns the same trace as the pipeline run directly, in compact form', async () => {
+    const r = await eager().simulate(saxpy, defaultMachine)
+    expect(r.ok).toBe(true)
+    const direct = runPipeline({ program: saxpy, machine: defaultMachine })
+    if (!r.ok || !direct.ok) throw new Error('run failed')
+    const back = decodeTrace(r.trace)
+    expect(back.cycles).toBe(direct.trace.cycles)
+    expect(back.instructions).toEqual(direct.trace.instructions)
+    expect(back.laneTimes).toEqual(direct.trace.laneTimes)
+    expect(r.functional.output).toEqual(direct.functional.output)
+  })
+
+  it('reports progress with cycles that grow, up to the whole stream', async () => {
+    const seen: { cycle: number; total: number; stage: string }[] = []
+    const r = await eager().simulate(longStream, { ...defaultMachine, lanes: 1 }, { batchCycles: 10_000 }, (p) => seen.push(p))
+    expect(r.ok).toBe(true)
+    const timing = seen.filter((p) => p.stage === 'simulate' && p.cycle > 0)
+    expect(timing.length).toBeGreaterThan(5)
+    expect(timing.every((p, i) => i === 0 || p.cycle > timing[i - 1]!.cycle)).toBe(true)
+    expect(timing[0]!.total).toBe(1000)
+  })
+
+  it('stops at the next pause after cancel() with a cancelled error', async () => {
+    const service = eager()
+    let pauses = 0
+    const run = service.simulate(longStream, { ...defaultMachine, lanes: 1 }, { batchCycles: 1000 }, () => {
+      if (++pauses === 3) service.cancel()
+    })
+    const r = await run
+    expect(r).toMatchObject({ ok: false, error: { code: 'cancelled', stage: 'simulate' } })
+    expect(pauses).toBe(3)
+  })
+
+  it('cancels a run in progress when a new one starts', async () => {
+    const service = eager()
+    const first = service.simulate(longStream, { ...defaultMachine, lanes: 1 }, { batchCycles: 1000 })
+    const second = service.simulate(saxpy, defaultMachine)
+    expect(await first).toMatchObject({ ok: false, error: { code: 'cancelled' } })
+    expect((await second).ok).toBe(true)
+  })
+
+  it.each([
+    ['an assembly error, with line and column', 'vfadd.vv v1\n', defaultMachine, 'assemble'],
+    ['a machine field out of range', saxpy, { ...defaultMachine, lanes: 0 }, 'machine'],
+  ])('returns %s as a value', async (_what, program, machine, stage) => {
+    const r = await eager().simulate(program, machine)
+    expect(r.ok).toBe(false)
+    if (r.ok) return
+    expect(r.error.stage).toBe(stage)
+    if (stage === 'assemble') expect(r.error.diagnostics?.[0]).toMatchObject({ line: 1 })
+    if (stage === 'machine') expect(r.error.fields?.[0]?.field).toBe('lanes')
+  })
+})
