@@ -50,8 +50,14 @@ export function loadJwtSecret(env: NodeJS.ProcessEnv = process.env, folder: stri
   if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim()
   fs.mkdirSync(folder, { recursive: true })
   const secret = crypto.randomBytes(48).toString('base64url')
-  fs.writeFileSync(file, `${secret}\n`, { mode: 0o600, flag: 'wx' })
-  return secret
+  try {
+    fs.writeFileSync(file, `${secret}\n`, { mode: 0o600, flag: 'wx' })
+    return secret
+  } catch (err) {
+    // Another process (the test server beside npm start) wrote it first: use theirs.
+    if ((err as NodeJS.ErrnoException).code === 'EEXIST') return fs.readFileSync(file, 'utf8').trim()
+    throw err
+  }
 }
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
