@@ -1,0 +1,101 @@
+import { describe, expect, it } from 'vitest'
+import { bandY, buildLayout, STALL_KIND, type ChartLayout } from '@/lib/lanechart/layout'
+import { buildTrace, twoLaneTrace } from './buildTrace'
+
+/** Bars of one (instruction position, lane) as [kind, start, end] sorted, for readable expectations. */
+function barsOf(layout: ChartLayout, instruction: number, lane: number): [number, number, number][] {
+  const out: [number, number, number][] = []
+  for (let g = 0; g < layout.groups.count; g++) {
+    if (layout.groups.instruction[g] !== instruction || layout.groups.lane[g] !== lane) continue
+    for (let b = layout.groups.firstBar[g]!; b < layout.groups.firstBar[g + 1]!; b++) out.push([layout.bars.kind[b]!, layout.bars.start[b]!, layout.bars.end[b]!])
+  }
+  return out.sort((a, b) => a[0] - b[0] || a[1] - b[1])
+}
+
+describe('lane chart layout', () => {
+  it('has one bar group per lane and instruction with activity, none for a config instruction or an idle lane', () => {
+    const layout = buildLayout(twoLaneTrace())
+    const pairs = Array.from({ length: layout.groups.count }, (_, g) => `${layout.groups.instruction[g]}@${layout.groups.lane[g]}`)
+    expect(pairs).toEqual(['1@0', '1@1', '2@0', '3@0', '3@1'])
+  })
+
+  // Bars are half-open [start, end): a phase from cycle 2 to 4 inclusive is [2, 5) (common practice).
+  it.each([
+    { what: 'overlapping phases are cut where the next phase starts', lane: [2, 2, 2, 4, 3, 8, 7, 9], bars: [[0, 2, 3], [1, 3, 7], [2, 7, 10]] },
+    { what: 'a gap between execute and write stays empty', lane: [1, 1, 2, 2, 3, 4, 8, 8], bars: [[0, 2, 3], [1, 3, 5], [2, 8, 9]] },
+    { what: 'a store has no write phase', lane: [1, 1, 5, 6, 7, 7, null, null], bars: [[0, 5, 7], [1, 7, 8]] },
+    { what: 'a load has no read phase', lane: [1, 1, null, null, 4, 20, 18, 21], bars: [[1, 4, 18], [2, 18, 22]] },
+  ] as const)('without sub-rows, $what', ({ lane, bars }) => {
+    const trace = buildTrace({ lanes: 1, cycles: 30, instructions: [{ lanes: [[...lane]] }] })
+    expect(barsOf(buildLayout(trace), 0, 0)).toEqual(bars)
+  })
+
+  it('with sub-rows, every phase is drawn whole in its own row', () => {
+    const layout = buildLayout(twoLaneTrace(), { subRows: true })
+    expect(barsOf(layout, 1, 0)).toEqual([[0, 2, 5], [1, 3, 9], [2, 7, 10], [STALL_KIND, 3, 4]])
+    expect(layout.rows.map((r) => `${r.lane}:${r.phase}`)).toEqual(['0:read', '0:execute', '0:write', '1:read', '1:execute', '1:write'])
+  })
+
+  // Greedy interval partitioning by start time uses as many tracks as the deepest overlap
+  // (Kleinberg and Tardos, Algorithm Design, section 4.1, "interval partitioning").
+  it.each([
+    { what: 'disjoint instructions share one track', spans: [[0, 3], [4, 6], [7, 9]], tracks: 1 },
+    { what: 'two in flight need two tracks', spans: [[0, 5], [3, 8], [6, 9]], tracks: 2 },
+    { what: 'three overlapping at one cycle need three', spans: [[0, 9], [2, 6], [4, 5], [7, 8]], tracks: 3 },
+    { what: 'an instruction may start the cycle after another ends on the same track', spans: [[0, 4], [5, 9]], tracks: 1 },
+  ])('tracks: $what', ({ spans, tracks }) => {
+    const trace = buildTrace({ lanes: 1, cycles: 12, instructions: spans.map(([s, e]) => ({ lanes: [[1, 1, s!, e!, null, null, null, null]] })) })
+    const layout = buildLayout(trace)
+    expect(layout.tracks).toBe(tracks)
+    // No two groups on one track overlap.
+    for (let a = 0; a < layout.groups.count; a++) {
+      for (let b = a + 1; b < layout.groups.count; b++) {
+        if (layout.groups.track[a] !== layout.groups.track[b]) continue
+        const [sa, ea] = spans[a]!
+        const [sb, eb] = spans[b]!
+        expect(ea! < sb! || eb! < sa!).toBe(true)
+      }
+    }
+  })
+
+  it.each([
+    { what: 'a stall before the first read', stall: 1, row: 'read' },
+    { what: 'a stall while reading', stall: 3, row: 'read' },
+    { what: 'a stall after reading, while executing', stall: 6, row: 'execute' },
+    { what: 'a stall after executing', stall: 9, row: 'write' },
+    { what: 'a stall after the last phase', stall: 14, row: 'write' },
+  ])('with sub-rows, $what goes in the $row row', ({ stall, row }) => {
+    const trace = buildTrace({ lanes: 1, cycles: 20, instructions: [{ lanes: [[1, 1, 2, 4, 3, 8, 9, 10]] }], stalls: [[0, stall, 1, 'bank', 0]] })
+    const layout = buildLayout(trace, { subRows: true })
+    const b = Array.from({ length: layout.bars.count }, (_, i) => i).find((i) => layout.bars.kind[i] === STALL_KIND)!
+    const y = bandY(layout, layout.bars.band[b]!)
+    expect(layout.rows.find((r) => y >= r.y && y < r.y + r.height)?.phase).toBe(row)
+  })
+
+  it('gives instructions of one static instruction one colour slot, in order of first appearance, and none to an instruction without bars', () => {
+    const trace = buildTrace({
+      lanes: 1, cycles: 10,
+      instructions: [5, 7, 5, 9, 7, 3].map((staticIndex, i) => ({ staticIndex, lanes: i === 5 ? [null] : [[1, 1, i, i, null, null, null, null]] })),
+    })
+    const layout = buildLayout(trace)
+    expect(Array.from(layout.colourOf)).toEqual([0, 1, 0, 2, 1, -1])
+    expect(Array.from(layout.colourInstruction)).toEqual([0, 1, 3])
+  })
+
+  it('stacks lanes with a gap and tracks inside them', () => {
+    const layout = buildLayout(twoLaneTrace(), { trackHeight: 10, laneGap: 4 })
+    expect(layout.tracks).toBe(2)
+    expect(layout.laneHeight).toBe(20)
+    expect(layout.height).toBe(44)
+    expect([0, 1, 2, 3].map((band) => bandY(layout, band))).toEqual([0, 10, 24, 34])
+  })
+
+  it('refuses a trace whose lane times are too short, naming the expected size', () => {
+    const trace = { ...twoLaneTrace(), laneTimes: new Int32Array(8) }
+    expect(() => buildLayout(trace)).toThrow(/8 values, 64 expected \(4 instructions x 2 lanes x 8\)/)
+  })
+
+  it('refuses a track height of zero', () => {
+    expect(() => buildLayout(twoLaneTrace(), { trackHeight: 0 })).toThrow(/trackHeight must be positive/)
+  })
+})

@@ -1,0 +1,81 @@
+import { describe, expect, it } from 'vitest'
+import { bandCount, buildLayout } from '@/lib/lanechart/layout'
+import { colourKey, drawList, instructionBars, keyKind, keySlot, MIXED_SLOT } from '@/lib/lanechart/lod'
+import { cycleScale } from '@/lib/lanechart/window'
+import { buildTrace, twoLaneTrace } from './buildTrace'
+
+/** One lane, `n` back-to-back one-cycle instructions of `statics` distinct static instructions. */
+function stream(n: number, statics: number) {
+  return buildTrace({
+    lanes: 1, cycles: n,
+    instructions: Array.from({ length: n }, (_, i) => ({ staticIndex: i % statics, lanes: [[1, 1, i, i, null, null, null, null]] })),
+  })
+}
+
+describe('level of detail', () => {
+  it('draws every bar as it is when zoomed in, in pixels', () => {
+    const layout = buildLayout(twoLaneTrace())
+    const list = drawList(layout, cycleScale({ start: 0, end: 20 }, 200), { only: 'phases' })
+    expect(list.count).toBe(layout.phaseBands.items.length)
+    // Instruction 1 lane 0: read [2, 3) at 10 px a cycle.
+    const r = Array.from({ length: list.count }, (_, i) => i).find((i) => list.x[i] === 20 && list.y[i] === 0)!
+    expect([list.w[r], list.h[r], keyKind(list.key[r]!), keySlot(list.key[r]!)]).toEqual([10, 10, 0, layout.colourOf[1]! + 1])
+    expect(list.bar[r]).toBeGreaterThanOrEqual(0)
+  })
+
+  it.each([
+    [{ start: 0, end: 2 }, 0],
+    [{ start: 2, end: 3 }, 2],
+    [{ start: 16, end: 20 }, 0],
+  ])('leaves out bars outside the window %o', (w, count) => {
+    const layout = buildLayout(twoLaneTrace())
+    expect(drawList(layout, cycleScale(w, 100), { only: 'phases' }).count).toBe(count)
+  })
+
+  it('merges sub-pixel bars so that a band draws about one rectangle per pixel at most', () => {
+    const layout = buildLayout(stream(10_000, 7))
+    const list = drawList(layout, cycleScale({ start: 0, end: 10_000 }, 500))
+    expect(list.count).toBeLessThanOrEqual(bandCount(layout) * 500)
+    // Back-to-back bars with no gap merge into one run covering the band.
+    expect(list.count).toBe(1)
+    expect(list.x[0]).toBe(0)
+    expect(list.w[0]).toBeCloseTo(500, 6)
+    expect(keySlot(list.key[0]!)).toBe(MIXED_SLOT)
+    expect(list.bar[0]).toBe(-1)
+  })
+
+  it('keeps the colour of merged bars of one static instruction', () => {
+    const layout = buildLayout(stream(1000, 1))
+    const list = drawList(layout, cycleScale({ start: 0, end: 1000 }, 100))
+    expect(list.count).toBe(1)
+    expect(list.key[0]).toBe(colourKey(1, 0))
+  })
+
+  it('does not merge sub-pixel bars that are more than a pixel apart', () => {
+    const trace = buildTrace({ lanes: 1, cycles: 1000, instructions: [0, 500, 999].map((c) => ({ lanes: [[1, 1, c, c, null, null, null, null]] })) })
+    const list = drawList(buildLayout(trace), cycleScale({ start: 0, end: 1000 }, 100))
+    expect(list.count).toBe(3)
+    // Each is widened to the one-pixel minimum.
+    expect(Array.from(list.w)).toEqual([1, 1, 1])
+  })
+
+  it('draws stalls after phases, so that the hatching lies on top', () => {
+    const layout = buildLayout(twoLaneTrace())
+    const list = drawList(layout, cycleScale({ start: 0, end: 20 }, 200))
+    const kinds = Array.from(list.key, keyKind)
+    expect(kinds.slice(-2)).toEqual([3, 3])
+    expect(kinds.slice(0, -2).every((k) => k < 3)).toBe(true)
+  })
+
+  it('lists every bar of an instruction across lanes for the selection', () => {
+    const layout = buildLayout(twoLaneTrace())
+    // Instruction 1: three segments in lane 0, a stall there, three segments in lane 1.
+    expect(instructionBars(layout, 1)).toHaveLength(7)
+    expect(instructionBars(layout, 0)).toEqual([])
+    expect(instructionBars(layout, 99)).toEqual([])
+  })
+
+  it('refuses a minimum width of zero', () => {
+    expect(() => drawList(buildLayout(twoLaneTrace()), cycleScale({ start: 0, end: 20 }, 200), { minWidth: 0 })).toThrow(/minWidth must be positive/)
+  })
+})
