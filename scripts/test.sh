@@ -16,8 +16,7 @@ step "Lint"
 npx eslint .
 
 step "Type checks"
-npx vue-tsc --noEmit -p tsconfig.app.json
-npx tsc --noEmit -p tsconfig.node.json
+npm run -s typecheck
 
 step "Test database"
 npx tsx scripts/db.ts test-setup
