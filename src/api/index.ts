@@ -1,6 +1,7 @@
 import { createAdminApi } from './admin'
 import { createAuthApi } from './auth'
 import { createHttp, type HttpOptions } from './http'
+import { createMembersApi } from './members'
 import { createWorkspaceApi } from './workspaces'
 
 export { ApiError, type ApiErrorCode } from './errors'
@@ -13,6 +14,7 @@ export function createApi(options: HttpOptions = {}) {
     auth: createAuthApi(http),
     workspaces: createWorkspaceApi(http),
     admin: createAdminApi(http),
+    members: createMembersApi(http),
   }
 }
 

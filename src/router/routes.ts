@@ -31,6 +31,19 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Scenarios', requiresAuth: true },
   },
   {
+    path: '/workspace/settings',
+    name: 'workspace-settings',
+    component: () => import('@/views/WorkspaceSettingsView.vue'),
+    meta: { title: 'Workspace settings', requiresAuth: true },
+  },
+  {
+    // A share link works signed out when it allows it; the view asks the server, which decides.
+    path: '/s/:token',
+    name: 'share',
+    component: () => import('@/views/ShareView.vue'),
+    meta: { title: 'Shared scenario' },
+  },
+  {
     path: '/sweeps',
     name: 'sweeps',
     component: () => import('@/views/SweepsView.vue'),
