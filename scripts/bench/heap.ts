@@ -28,16 +28,19 @@ for (;;) {
   }
 }
 const seconds = (performance.now() - t0) / 1000
-if (!result.ok) throw new Error(`${result.error.stage}: ${result.error.message}`)
+// A run cut short by a limit still has its partial trace: report it with the error.
+const trace = result.ok ? result.trace : result.trace
+if (!trace) throw new Error(`${result.ok ? '' : `${result.error.stage}: ${result.error.message}`}`)
 gc()
 const retained = process.memoryUsage().heapUsed - base
 const MiB = 1024 * 1024
 console.log(JSON.stringify({
-  instructions: result.trace.instructions.length,
-  cycles: result.trace.cycles,
+  instructions: trace.instructions.length,
+  cycles: trace.cycles,
+  ...(result.ok ? {} : { error: `${result.error.code} at cycle ${trace.cycles}` }),
   peakHeapMiB: peak / MiB,
   retainedMiB: retained / MiB,
   seconds,
   // keep the trace alive until after the measurement
-  lanes: result.trace.laneCount,
+  lanes: trace.laneCount,
 }))

@@ -51,11 +51,20 @@ function speed() {
   return { instructions: run.stream.ops.length, vl, lanes: machine.lanes, cycles, laneCycles, timingMs: median(timing), pipelineMs: median(pipeline) }
 }
 
-function heap() {
+interface HeapFigures { instructions: number; cycles: number; peakHeapMiB: number; retainedMiB: number; seconds: number; error?: string }
+
+function heapRun(limitMiB: number): HeapFigures | { failed: string } {
   const script = fileURLToPath(new URL('./heap.ts', import.meta.url))
-  const child = spawnSync(process.execPath, ['--expose-gc', '--max-old-space-size=256', '--import', 'tsx', script], { encoding: 'utf8' })
-  if (child.status !== 0) return { failed: `exit ${child.status ?? child.signal}: ${(child.stderr || child.stdout).trim().split('\n').slice(-3).join(' | ')}` }
-  return JSON.parse(child.stdout) as { instructions: number; cycles: number; peakHeapMiB: number; retainedMiB: number; seconds: number }
+  const child = spawnSync(process.execPath, ['--expose-gc', `--max-old-space-size=${limitMiB}`, '--import', 'tsx', script], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 })
+  if (child.status === 0) return JSON.parse(child.stdout) as HeapFigures
+  const oom = /heap out of memory|Allocation failed/.test(child.stderr)
+  return { failed: oom ? `out of memory under a ${limitMiB} MiB heap` : `exit ${child.status ?? child.signal}: ${child.stderr.trim().split('\n').pop()}` }
+}
+
+/** Under the target's limit; when that fails, once more with room to spare, to report the real peak. */
+function heap(): { within: HeapFigures | { failed: string }; unbounded?: HeapFigures | { failed: string } } {
+  const within = heapRun(256)
+  return 'failed' in within ? { within, unbounded: heapRun(4096) } : { within }
 }
 
 const fmt = (n: number, digits = 1) => n.toLocaleString('en-US', { maximumFractionDigits: digits })
@@ -67,11 +76,14 @@ const rows: string[][] = [
   ['lane-cycles/s, timing only', `${s.instructions} instructions, vl ${s.vl}, ${s.lanes} lanes, ${fmt(s.cycles, 0)} cycles`, `${fmt(rate / 1e6)} M (${fmt(s.timingMs)} ms)`, '>= 10 M', rate >= 10e6 ? 'yes' : 'no'],
   ['lane-cycles/s, whole pipeline', 'same, with assemble and execute', `${fmt(s.laneCycles / (s.pipelineMs / 1000) / 1e6)} M (${fmt(s.pipelineMs)} ms)`, '', ''],
 ]
+const heapRow = (h: HeapFigures | { failed: string }, label: string, judge: boolean) =>
+  'failed' in h
+    ? ['peak heap' + label, '100,000-instruction strip-mined run', h.failed, '<= 256 MiB', 'no']
+    : ['peak heap' + label, `${fmt(h.instructions, 0)} instructions, ${fmt(h.cycles, 0)} cycles, ${fmt(h.seconds)} s${h.error ? ` (${h.error})` : ''}`,
+        `${fmt(h.peakHeapMiB)} MiB (retained after the run ${fmt(h.retainedMiB)} MiB)`, judge ? '<= 256 MiB' : '', judge ? (h.peakHeapMiB <= 256 ? 'yes' : 'no') : '']
 const h = heap()
-if ('failed' in h) rows.push(['peak heap', '100,000-instruction strip-mined run', `failed: ${h.failed}`, '<= 256 MiB', 'no'])
-else {
-  rows.push(['peak heap', `${fmt(h.instructions, 0)} instructions, ${fmt(h.cycles, 0)} cycles, ${fmt(h.seconds)} s`, `${fmt(h.peakHeapMiB)} MiB (trace retained ${fmt(h.retainedMiB)} MiB)`, '<= 256 MiB', h.peakHeapMiB <= 256 ? 'yes' : 'no'])
-}
+rows.push(heapRow(h.within, '', true))
+if (h.unbounded) rows.push(heapRow(h.unbounded, ', 4 GiB allowed', false))
 const widths = rows[0]!.map((_, c) => Math.max(...rows.map((r) => r[c]!.length)))
 for (const [i, r] of rows.entries()) {
   console.log(r.map((cell, c) => cell.padEnd(widths[c]!)).join('  '))
