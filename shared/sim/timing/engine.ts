@@ -58,6 +58,8 @@ export interface TimingState {
   readonly slotRelease: Int32Array
   readonly memPorts: (MemInst | null)[]
   readonly instOf: (Inst | null)[]
+  /** Scratch list of the instructions active in one lane this cycle. */
+  readonly active: Inst[]
 }
 
 export function createTimingState(stream: DynamicStream, machine: Machine, options: SimulateOptions = {}): TimingState {
@@ -101,6 +103,7 @@ export function createTimingState(stream: DynamicStream, machine: Machine, optio
     slotRelease: new Int32Array(L),
     memPorts: Array.from({ length: machine.memoryPorts }, () => null),
     instOf: new Array<Inst | null>(ops.length).fill(null),
+    active: [],
   }
   for (let i = 0; i < ops.length; i++) {
     if ((ops[i] as VectorOp).seq !== i) {
@@ -337,11 +340,26 @@ export function step(s: TimingState): boolean {
   for (let i = 0; i < fl.length; i++) (fl[i] as Inst).global(c)
   const together = s.machine.issue !== 'staggered'
   if (together) issueTogether(s, c)
+  // Per lane, only instructions started and not finished there take part (most of the queue waits).
+  const act = s.active
   for (let l = 0; l < L; l++) {
-    for (let i = 0; i < fl.length; i++) (fl[i] as Inst).write(l, c)
-    for (let i = 0; i < fl.length; i++) (fl[i] as Inst).exec(l, c)
-    if (!together) issueStaggered(s, l, c)
-    for (let i = 0; i < fl.length; i++) (fl[i] as Inst).read(l, c)
+    let na = 0
+    for (let i = 0; i < fl.length; i++) {
+      const inst = fl[i] as Inst
+      if (inst.started[l] === 1 && inst.laneDone[l] !== 1) act[na++] = inst
+    }
+    for (let i = 0; i < na; i++) (act[i] as Inst).write(l, c)
+    for (let i = 0; i < na; i++) (act[i] as Inst).exec(l, c)
+    if (!together) {
+      const before = s.laneArithNext[l] ?? 0
+      issueStaggered(s, l, c)
+      // Instructions that just started in this lane may read in this very cycle.
+      for (let k = before; k < (s.laneArithNext[l] ?? 0); k++) {
+        const inst = s.arith[k] as Inst
+        if (inst.laneDone[l] !== 1) act[na++] = inst
+      }
+    }
+    for (let i = 0; i < na; i++) (act[i] as Inst).read(l, c)
   }
   // Instructions dispatched by a lane's issue above were not yet in `fl` for earlier lanes: nothing to do for them now.
   const feActive = frontEnd(s, c)
@@ -382,7 +400,9 @@ export function step(s: TimingState): boolean {
     s.slotRelease[l] = 0
   }
   if (busy) s.lastBusy = c
-  if (fl.some((i) => i.complete >= 0)) s.inflight = fl.filter((i) => i.complete < 0)
+  let finished = false
+  for (let i = 0; i < fl.length && !finished; i++) if ((fl[i] as Inst).complete >= 0) finished = true
+  if (finished) s.inflight = fl.filter((i) => i.complete < 0)
   s.cycle = c + 1
   if (s.opIdx >= ops.length && s.scalarAfterLeft === 0 && s.hold < 0 && s.inflight.length === 0) {
     s.done = true

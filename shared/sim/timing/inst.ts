@@ -157,19 +157,24 @@ export abstract class Inst {
     if (this.started[lane] !== 1 || this.readDone[lane] === 1) return
     const { rf, rec, d } = this.ctx
     let all = true
-    for (const s of this.srcs) {
+    const srcs = this.srcs
+    for (let k = 0; k < srcs.length; k++) {
+      const s = srcs[k] as Operand
       const w = s.readCnt[lane] ?? 0
-      if (w >= (s.words[lane] ?? 0)) continue
+      const words = s.words[lane] ?? 0
+      if (w >= words) continue
       all = false
       if (w - (s.cons[lane] ?? 0) >= d.queueDepth) {
         this.ctx.block(lane, this.seq, REASON.queue)
         continue
       }
-      if ((rf.ready[rf.slot(s.group, lane, w)] ?? 0) > c) {
+      const p = rf.physOf(s.group, w)
+      const off = w % rf.wpr
+      if ((rf.ready[(p * this.L + lane) * rf.wpr + off] ?? 0) > c) {
         this.ctx.block(lane, this.seq, REASON.raw)
         continue
       }
-      const bank = rf.bankOf(s.group, w)
+      const bank = (p + off) % rf.banks
       if (!rf.grant(lane, bank, c)) {
         this.ctx.block(lane, this.seq, REASON.bank)
         continue
@@ -179,13 +184,22 @@ export abstract class Inst {
       this.ctx.busyLane(lane)
       if (this.time(lane, F_READ_START) === NO_CYCLE) this.setTime(lane, F_READ_START, c)
       this.setTime(lane, F_READ_END, c)
-      if (w + 1 < (s.words[lane] ?? 0)) all = false
+      if (w + 1 >= words) all = true
     }
-    if (all || this.srcs.every((s) => (s.readCnt[lane] ?? 0) >= (s.words[lane] ?? 0))) {
+    if (all) all = this.allRead(lane)
+    if (all) {
       this.readDone[lane] = 1
       this.readDoneCount++
       this.checkAllRead()
     }
+  }
+
+  private allRead(lane: number): boolean {
+    for (let k = 0; k < this.srcs.length; k++) {
+      const s = this.srcs[k] as Operand
+      if ((s.readCnt[lane] ?? 0) < (s.words[lane] ?? 0)) return false
+    }
+    return true
   }
 
   private checkAllRead(): void {

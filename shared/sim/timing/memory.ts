@@ -157,6 +157,8 @@ export class LoadInst extends MemInst {
       this.busDone = true
       // One memory pipeline: the port stays with the load until its last element has arrived.
       this.portUntil = c + ctx.m.memLatency
+      // Lanes without elements finished at the start; an empty access is complete now.
+      if (this.doneCount === this.L) this.finishAll(c)
     }
   }
 
@@ -226,6 +228,7 @@ export class StoreInst extends MemInst {
       this.busDone = true
       this.portUntil = c
     }
+    if (this.busDone && this.doneCount === this.L) this.finishAll(c)
     for (let l = 0; l < L; l++) {
       if (this.laneDone[l] !== 1 && this.started[l] === 1 && (this.sentCount[l] ?? 0) >= (this.n[l] ?? 0)) this.finishLane(l, c)
     }

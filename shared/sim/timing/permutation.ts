@@ -9,7 +9,7 @@ import type { VectorOp } from '../exec/stream'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
 import { REASON } from './context'
-import { F_BEATS, F_EXEC_START, Inst } from './inst'
+import { F_BEATS, F_EXEC_START, F_READ_START, Inst } from './inst'
 
 export class PermutationInst extends Inst {
   /** Per source lane, packets in source-word order: source word, destination lane, destination word. */
@@ -75,10 +75,25 @@ export class PermutationInst extends Inst {
 
   override startLane(lane: number, c: number): void {
     super.startLane(lane, c)
-    // Words no packet feeds (slide-in scalars, zeros, undisturbed elements) are ready at once.
+    if (this.time(lane, F_READ_START) >= 0) this.engage(lane, this.time(lane, F_READ_START))
+  }
+
+  /**
+   * The lane's permutation datapath is engaged from the cycle after its first read
+   * (or after its start when it reads nothing); words no packet feeds (slide-in
+   * scalars, zeros, undisturbed elements) are ready from then on.
+   */
+  private engage(lane: number, first: number): void {
+    if (this.time(lane, F_EXEC_START) >= 0 || !this.hasWork(lane)) return
+    this.setTime(lane, F_EXEC_START, first + 1)
     for (let w = 0; w < (this.dstWords[lane] ?? 0); w++) {
-      if ((this.waiting[lane * this.maxDstWords + w] ?? 0) === 0) this.resultReady(lane, w, c + 1)
+      if ((this.waiting[lane * this.maxDstWords + w] ?? 0) === 0) this.resultReady(lane, w, first + 1)
     }
+  }
+
+  override read(lane: number, c: number): void {
+    super.read(lane, c)
+    if (this.time(lane, F_READ_START) === c) this.engage(lane, c)
   }
 
   exec(_lane: number, _c: number): void {}
@@ -118,7 +133,6 @@ export class PermutationInst extends Inst {
       this.arrival[slot] = Math.max(this.arrival[slot] ?? 0, at)
       this.waiting[slot] = (this.waiting[slot] ?? 0) - 1
       if (this.waiting[slot] === 0) this.resultReady(b, dw, this.arrival[slot] ?? at)
-      if ((this.sent[a] ?? 0) === 0) this.setTime(a, F_EXEC_START, c)
       this.sent[a] = (this.sent[a] ?? 0) + 1
       this.setTime(a, F_BEATS, this.sent[a] ?? 0)
       this.pkNext[a] = k + 1
@@ -130,8 +144,15 @@ export class PermutationInst extends Inst {
   override write(lane: number, c: number): void {
     const extra = this.srcs[1]
     if (extra && extra !== this.srcs[0] && (extra.readCnt[lane] ?? 0) < (extra.words[lane] ?? 0)) return
-    if (this.started[lane] === 1 && this.laneDone[lane] !== 1 && (this.wrCnt[lane] ?? 0) < (this.dstWords[lane] ?? 0)) {
-      const at = this.readyAt[lane * this.maxDstWords + (this.wrCnt[lane] ?? 0)] ?? -1
+    // Nothing is written before the lane's own read phase has begun.
+    if (this.time(lane, F_EXEC_START) < 0) return
+    const w = this.wrCnt[lane] ?? 0
+    const total = this.dstWords[lane] ?? 0
+    // The last word is written once the lane has read and sent all its own source words,
+    // so that a lane's phases stay in order: read, then exchange, then write.
+    if (w === total - 1 && (this.readDone[lane] !== 1 || !this.lanePhasesDone(lane) || this.time(lane, 3) >= c)) return
+    if (this.started[lane] === 1 && this.laneDone[lane] !== 1 && w < total) {
+      const at = this.readyAt[lane * this.maxDstWords + w] ?? -1
       if (at < 0) this.ctx.block(lane, this.seq, REASON.ring) // waiting for packets from other lanes
     }
     super.write(lane, c)

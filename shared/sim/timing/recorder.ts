@@ -193,11 +193,20 @@ export class Recorder {
   }
 }
 
-/** Row order by start cycle (stable). */
+/** Row order by start cycle, stable: a counting sort, as starts are cycle numbers. */
 function order(start: Int32Array, n: number): Uint32Array {
+  let max = 0
+  for (let i = 0; i < n; i++) if ((start[i] ?? 0) > max) max = start[i] ?? 0
+  const counts = new Uint32Array(max + 2)
+  for (let i = 0; i < n; i++) counts[(start[i] ?? 0) + 1] = (counts[(start[i] ?? 0) + 1] ?? 0) + 1
+  for (let k = 1; k < counts.length; k++) counts[k] = (counts[k] ?? 0) + (counts[k - 1] ?? 0)
   const idx = new Uint32Array(n)
-  for (let i = 0; i < n; i++) idx[i] = i
-  return idx.sort((a, b) => (start[a] ?? 0) - (start[b] ?? 0) || a - b)
+  for (let i = 0; i < n; i++) {
+    const k = start[i] ?? 0
+    idx[counts[k] ?? 0] = i
+    counts[k] = (counts[k] ?? 0) + 1
+  }
+  return idx
 }
 
 function pick<T extends Int32Array | Uint8Array | Uint16Array | Uint32Array>(

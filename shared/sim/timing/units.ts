@@ -7,6 +7,7 @@ import type { VectorOp } from '../exec/stream'
 import type { ExecUnit } from './config'
 import { elementsPerBeat, UNIT_INDEX, unitLatency, wordsFor } from './config'
 import type { Ctx } from './context'
+import type { Operand } from './inst'
 import { F_EXEC_START, Inst } from './inst'
 
 /** Mask-producing instructions write one bit per element. */
@@ -79,11 +80,15 @@ export class UnitInst extends Inst {
     const uk = lane * 4 + this.u
     const n = this.n[lane] ?? 0
     const upto = Math.min(n, (j + 1) * this.epc)
-    for (const s of this.srcs) {
-      if ((s.words[lane] ?? 0) === 0) continue
+    let reads = 0
+    for (let k = 0; k < this.srcs.length; k++) {
+      const s = this.srcs[k] as Operand
+      const words = s.words[lane] ?? 0
+      if (words === 0) continue
+      reads++
       if ((s.readCnt[lane] ?? 0) < Math.ceil((upto * s.bits) / 64)) return
     }
-    if (this.srcs.every((s) => (s.words[lane] ?? 0) === 0) && this.time(lane, 2) >= c) return // start cycle reads nothing
+    if (reads === 0 && this.time(lane, 2) >= c) return // nothing to read: beats start the cycle after the start
     if ((ctx.unitFree[uk] ?? 0) > c) return
     const occupy = this.unit === 'div' ? this.latency : 1
     ctx.unitFree[uk] = c + occupy
