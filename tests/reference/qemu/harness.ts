@@ -5,7 +5,7 @@
  * --no-relax`, run `qemu-riscv64 -cpu rv64,v=true,vlen=N,vext_spec=v1.0`.
  */
 import { execFile } from 'node:child_process'
-import { mkdtempSync, readdirSync, readFileSync } from 'node:fs'
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { basename, join } from 'node:path'
 import { promisify } from 'node:util'
@@ -87,7 +87,11 @@ export async function runQemu(exe: string, vlen: number): Promise<QemuRun> {
 /** Builds every program once and runs each at every VLEN, a few at a time. */
 export async function referenceOutputs(programs: CorpusProgram[]): Promise<Map<string, QemuRun>> {
   const dir = mkdtempSync(join(tmpdir(), 'chimeline-qemu-'))
-  const exes = await pool(programs.map((p) => () => build(p, dir)), 4)
-  const jobs = programs.flatMap((p, i) => VLENS.map((vlen) => async () => [`${p.name}@${vlen}`, await runQemu(exes[i]!, vlen)] as const))
-  return new Map(await pool(jobs, 4))
+  try {
+    const exes = await pool(programs.map((p) => () => build(p, dir)), 4)
+    const jobs = programs.flatMap((p, i) => VLENS.map((vlen) => async () => [`${p.name}@${vlen}`, await runQemu(exes[i]!, vlen)] as const))
+    return new Map(await pool(jobs, 4))
+  } finally {
+    rmSync(dir, { recursive: true, force: true })
+  }
 }
