@@ -1,8 +1,11 @@
 /**
  * The simulator Worker never blocks the page (issue 4, "Done when"): while the
  * Worker runs the 1,000-instruction example, the test keeps typing and
- * clicking and every interaction must be answered within 100 ms, and the page's
- * own 10 ms timer must never be held up by 100 ms or more.
+ * clicking; the page measures how long each input event waited for the main
+ * thread (event creation to handler) and how late its own 10 ms timer fired:
+ * both must stay under 100 ms. The test's round trips through the browser
+ * protocol are also bounded, loosely, since they include Playwright's own
+ * overhead on a loaded machine.
  *
  * The probe page is e2e/fixtures/worker-probe.html (mounting
  * src/views/WorkerProbeView.vue), served by a Vite dev server this spec starts
@@ -49,16 +52,19 @@ test('the page answers within 100 ms while the Worker runs a 1,000-instruction p
     await page.click('#count')
     await expect(page.locator('#count-out')).toHaveText(String(i + 1), { timeout: 1000 })
     typed += String.fromCharCode(97 + (i % 26))
-    await page.locator('#echo').press(typed[typed.length - 1]!)
+    // Focusing the field again puts the caret first: go to the end before typing.
+    await page.locator('#echo').press('End')
+    await page.keyboard.press(typed[typed.length - 1]!)
     await expect(page.locator('#echo-out')).toHaveText(typed, { timeout: 1000 })
     latencies.push(Date.now() - t0)
   }
   await expect(page.locator('#status')).toHaveText('done', { timeout: 120_000 })
 
-  // Each sample is a click and a key press, each waited for: two answers.
   expect(latencies.length, 'interactions made while the Worker was running').toBeGreaterThanOrEqual(5)
-  expect(Math.max(...latencies) / 2).toBeLessThan(100)
-  expect(Number(await page.locator('#max-gap').textContent())).toBeLessThan(100)
+  expect(Number(await page.locator('#max-input-delay').textContent()), 'input event waited for the main thread (ms)').toBeLessThan(100)
+  expect(Number(await page.locator('#max-gap').textContent()), 'page timer held up (ms)').toBeLessThan(100)
+  // A click and a key press, each waited for, per sample; a frozen page would take seconds.
+  expect(Math.max(...latencies), 'test round trip (ms)').toBeLessThan(1000)
   expect(Number(await page.locator('#progress').textContent())).toBeGreaterThan(0)
   await expect(page.locator('#runs')).toHaveText('3')
   await expect(page.locator('#instructions')).toHaveText('1000')
