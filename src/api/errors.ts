@@ -17,6 +17,8 @@ export class ApiError extends Error {
     message: string,
     /** Field path -> message, as the server's validation reported it. */
     readonly fields: Readonly<Record<string, string>> = {},
+    /** The whole JSON error body, for answers that carry more than the error (a save conflict, an upload's diagnostics). */
+    readonly body: unknown = undefined,
   ) {
     super(message)
   }

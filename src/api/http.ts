@@ -37,9 +37,10 @@ export function createHttp(options: HttpOptions = {}): Http {
   const baseUrl = options.baseUrl ?? ''
   const hooks = options.auth
 
-  async function send(path: string, req: BaseRequest, json: string | undefined): Promise<Response> {
+  // A FormData body (a file upload) goes as it is: fetch sets the multipart boundary itself.
+  async function send(path: string, req: BaseRequest, json: string | FormData | undefined): Promise<Response> {
     const headers: Record<string, string> = { Accept: 'application/json' }
-    if (json !== undefined) headers['Content-Type'] = 'application/json'
+    if (typeof json === 'string') headers['Content-Type'] = 'application/json'
     const token = req.auth !== false ? hooks?.accessToken() : null
     if (token) headers.Authorization = `Bearer ${token}`
     try {
@@ -57,7 +58,7 @@ export function createHttp(options: HttpOptions = {}): Http {
   }
 
   async function request<T>(path: string, req: BaseRequest & { schema?: ZodType<T> } = {}): Promise<T | void> {
-    const json = req.body === undefined ? undefined : JSON.stringify(req.body)
+    const json = req.body === undefined ? undefined : req.body instanceof FormData ? req.body : JSON.stringify(req.body)
     let res = await send(path, req, json)
     if (res.status === 401 && req.auth !== false && hooks) {
       if (await hooks.refresh()) res = await send(path, req, json)
@@ -80,13 +81,14 @@ async function readJson(res: Response): Promise<unknown> {
 }
 
 async function errorFrom(res: Response, label: string): Promise<ApiError> {
-  const parsed = errorBodySchema.safeParse(await readJson(res))
+  const body = await readJson(res)
+  const parsed = errorBodySchema.safeParse(body)
   if (parsed.success) {
     const { code, message, fields } = parsed.data.error
-    return new ApiError(res.status, code, message, fields ?? {})
+    return new ApiError(res.status, code, message, fields ?? {}, body)
   }
   const statusText = res.statusText ? ` ${res.statusText}` : ''
-  return new ApiError(res.status, codeForStatus(res.status), `The server answered ${res.status}${statusText} to ${label}.`)
+  return new ApiError(res.status, codeForStatus(res.status), `The server answered ${res.status}${statusText} to ${label}.`, {}, body)
 }
 
 async function parseBody<T>(res: Response, schema: ZodType<T>, label: string): Promise<T> {

@@ -2,6 +2,9 @@ import { createAdminApi } from './admin'
 import { createAuthApi } from './auth'
 import { createHttp, type HttpOptions } from './http'
 import { createMembersApi } from './members'
+import { createScenarioApi } from './scenarios'
+import { createShareApi } from './shares'
+import { createUploadApi } from './uploads'
 import { createWorkspaceApi } from './workspaces'
 
 export { ApiError, type ApiErrorCode } from './errors'
@@ -15,6 +18,9 @@ export function createApi(options: HttpOptions = {}) {
     workspaces: createWorkspaceApi(http),
     admin: createAdminApi(http),
     members: createMembersApi(http),
+    scenarios: createScenarioApi(http),
+    shares: createShareApi(http),
+    uploads: createUploadApi(http),
   }
 }
 
