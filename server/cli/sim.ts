@@ -14,6 +14,7 @@ import { checkMachine, defaultMachine } from '../../shared/schemas/machine'
 import { PRESETS } from '../../shared/sim/presets'
 import { runPipeline, type RunError } from '../../shared/sim/run'
 import { toCsv } from '../../shared/sim/trace/csv'
+import { traceToJson } from '../../shared/sim/trace/schema'
 import { summarize } from '../../shared/sim/trace/summary'
 import type { TimingTrace } from '../../shared/sim/trace/types'
 import { toVcd } from '../../shared/sim/trace/vcd'
@@ -70,8 +71,7 @@ export function format(trace: TimingTrace, fmt: Format, cutShort?: RunError): st
     case 'summary':
       return JSON.stringify(summarize(trace, cutShort ? { error: { code: cutShort.code, message: cutShort.message } } : {})) + '\n'
     case 'json':
-      // Typed arrays as plain arrays; the zod JSON form of shared/sim/trace/schema.ts replaces this once it lands.
-      return JSON.stringify(trace, (_key, v: unknown) => (ArrayBuffer.isView(v) ? Array.from(v as Int32Array) : v)) + '\n'
+      return JSON.stringify(traceToJson(trace)) + '\n'
     case 'csv':
       return toCsv(trace)
     case 'vcd':

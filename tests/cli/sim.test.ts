@@ -10,6 +10,7 @@ import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 import { parse } from 'csv-parse/sync'
 import { parseVcd } from '../sim/trace/vcdReader'
+import { traceJsonSchema } from '../../shared/sim/trace/schema'
 
 const root = join(import.meta.dirname, '..', '..')
 const examples = readdirSync(join(root, 'examples')).filter((f) => f.endsWith('.s')).sort()
@@ -92,7 +93,8 @@ describe('sim options', () => {
     const config = file('machine.json', JSON.stringify({ lanes: 2, units: { fpu: { latency: 7 } } }))
     const r = sim('examples/saxpy.s', '--preset', 'Starter 4-lane', '--config', config, '--set', 'lanes=4', '--format', 'json')
     expect(r.code).toBe(0)
-    const j = JSON.parse(r.stdout)
+    const j = traceJsonSchema.parse(JSON.parse(r.stdout))
+    expect(j.instructions[0]!.lanes).toHaveLength(4)
     expect(j.machine.lanes).toBe(4)
     expect(j.machine.units.fpu.latency).toBe(7)
   })
