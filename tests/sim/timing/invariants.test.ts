@@ -1,43 +1,13 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import type { VectorOp } from '../../../shared/sim/exec/stream'
 import { simulate } from '../../../shared/sim/timing/simulate'
 import type { TimingTrace } from '../../../shared/sim/trace/types'
 import { laneTiming } from '../../../shared/sim/trace/types'
-import { buildOp, buildStream, fma, unitLoad, unitStore } from './factories'
+import { caseArb, machineOf } from './arbitraries'
+import { buildStream, fma } from './factories'
 import { parseMachine } from '../../../shared/schemas/machine'
 
 // Model properties (common practice): checked on random streams of every shape.
-const reg = fc.integer({ min: 1, max: 7 }).map((r) => r * 4)
-const opArb = (vl: number): fc.Arbitrary<VectorOp> =>
-  fc.oneof(
-    fc.tuple(reg, reg, reg).map(([d, a, b]) => buildOp({ vl, dstRegs: [d], srcRegs: [[a], [b]], text: `vfadd.vv v${d}, v${a}, v${b}` })),
-    fc.tuple(reg, reg, reg).map(([d, a, b]) => fma(d, a, b, vl)),
-    fc.tuple(reg, reg).map(([d, a]) => buildOp({ op: 'vmul.vx', unit: 'mul', flopsPerElement: 0, vl, dstRegs: [d], srcRegs: [[a]] })),
-    fc.tuple(reg, reg).map(([d, a]) => buildOp({ op: 'vdiv.vx', unit: 'div', flopsPerElement: 0, vl, dstRegs: [d], srcRegs: [[a]] })),
-    reg.map((d) => unitLoad(d, vl)),
-    reg.map((s) => unitStore(s, vl)),
-    fc.tuple(reg, reg).map(([d, a]) => buildOp({ op: 'vfredusum.vs', shape: 'reduction', vl, dstRegs: [d], srcRegs: [[a], [1]] })),
-    fc.tuple(reg, reg).map(([d, a]) => buildOp({ op: 'vfredosum.vs', shape: 'ordered-reduction', vl, dstRegs: [d], srcRegs: [[a], [1]] })),
-    fc.tuple(reg, reg, fc.integer({ min: 1, max: 5 })).map(([d, a, k]) =>
-      buildOp({ op: 'vslideup.vi', shape: 'permutation', unit: 'alu', flopsPerElement: 0, vl, dstRegs: [d], srcRegs: [[a]], sourceIndex: Int32Array.from({ length: vl }, (_, i) => (i >= k ? i - k : -1)) }),
-    ),
-    reg.map((a) => buildOp({ op: 'vfmv.f.s', shape: 'scalar-result', scalarResult: true, flopsPerElement: 0, vl, dstRegs: [], srcRegs: [[a]] })),
-  )
-
-const caseArb = fc.record({
-  lanes: fc.constantFrom(1, 2, 3, 4, 8),
-  vl: fc.integer({ min: 0, max: 64 }),
-  issue: fc.constantFrom('serial', 'lockstep', 'staggered' as const),
-  chaining: fc.boolean(),
-  rfBanks: fc.integer({ min: 1, max: 8 }),
-  rfPortsPerBank: fc.integer({ min: 1, max: 2 }),
-  seed: fc.integer(),
-}).chain((c) => fc.record({ c: fc.constant(c), ops: fc.array(opArb(c.vl), { minLength: 1, maxLength: 12 }) }))
-
-function machineOf(c: { lanes: number; issue: 'serial' | 'lockstep' | 'staggered'; chaining: boolean; rfBanks: number; rfPortsPerBank: number }) {
-  return parseMachine({ lanes: c.lanes, vlen: 4096, issue: c.issue, chaining: c.chaining, rfBanks: c.rfBanks, rfPortsPerBank: c.rfPortsPerBank, memLatency: 5 })
-}
 
 function usePerCycle(trace: TimingTrace): Map<number, Map<number, number>> {
   const byRes = new Map<number, Map<number, number>>()
