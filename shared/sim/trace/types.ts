@@ -164,8 +164,9 @@ export function laneTiming(trace: TimingTrace, index: number, lane: number): Lan
   }
   return {
     lane,
-    elements: t[base] ?? 0,
-    beats: t[base + 1] ?? 0,
+    // vset* and instructions a limit cut off never reach a lane: their counts stay at the fill value.
+    elements: Math.max(0, t[base] ?? 0),
+    beats: Math.max(0, t[base + 1] ?? 0),
     readStart: cyc(2),
     readEnd: cyc(3),
     execStart: cyc(4),
