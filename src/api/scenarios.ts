@@ -1,4 +1,3 @@
-import { z } from 'zod'
 import { bundleSchema } from '@shared/schemas/bundle'
 import {
   savedScenarioResponseSchema,
@@ -34,8 +33,6 @@ export function listQueryString(p: ScenarioListParams): string {
   return q.toString()
 }
 
-const authorListSchema = z.object({ authors: z.array(z.object({ id: z.uuid(), name: z.string() })) })
-
 /** /api/workspaces/:id/scenarios and their versions. */
 export function createScenarioApi(http: Http) {
   const ws = (workspaceId: string) => `/api/workspaces/${encodeURIComponent(workspaceId)}/scenarios`
@@ -43,7 +40,6 @@ export function createScenarioApi(http: Http) {
   return {
     list: (workspaceId: string, params: ScenarioListParams) =>
       http.request(`${ws(workspaceId)}?${listQueryString(params)}`, { schema: scenarioListResponseSchema }),
-    authors: (workspaceId: string) => http.request(`${ws(workspaceId)}/authors`, { schema: authorListSchema }),
     get: (workspaceId: string, id: string) => http.request(one(workspaceId, id), { schema: scenarioResponseSchema }),
     create: (workspaceId: string, body: CreateScenarioBody) =>
       http.request(ws(workspaceId), { method: 'POST', body, schema: scenarioResponseSchema }),
@@ -52,10 +48,10 @@ export function createScenarioApi(http: Http) {
       http.request(`${one(workspaceId, id)}/versions`, { method: 'POST', body, schema: savedScenarioResponseSchema }),
     duplicate: (workspaceId: string, id: string, title?: string) =>
       http.request(`${one(workspaceId, id)}/duplicate`, { method: 'POST', body: title ? { title } : {}, schema: scenarioResponseSchema }),
-    /** Soft delete: the scenario goes to the trash for 30 days. */
+    /** Soft delete (owners): the scenario goes to the trash for 30 days. */
     remove: (workspaceId: string, id: string) => http.request(one(workspaceId, id), { method: 'DELETE' }),
     undelete: (workspaceId: string, id: string) =>
-      http.request(`${one(workspaceId, id)}/undelete`, { method: 'POST', body: {}, schema: scenarioResponseSchema }),
+      http.request(`${one(workspaceId, id)}/undo-delete`, { method: 'POST', schema: scenarioResponseSchema }),
     versions: (workspaceId: string, id: string) => http.request(`${one(workspaceId, id)}/versions`, { schema: versionListResponseSchema }),
     version: (workspaceId: string, id: string, n: number) =>
       http.request(`${one(workspaceId, id)}/versions/${n}`, { schema: versionResponseSchema }),

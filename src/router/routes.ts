@@ -41,7 +41,7 @@ export const routes: RouteRecordRaw[] = [
     path: '/s/:token',
     name: 'share',
     component: () => import('@/views/ShareView.vue'),
-    meta: { title: 'Shared scenario' },
+    meta: { title: 'Shared scenario', layout: 'plain' },
   },
   {
     path: '/sweeps',

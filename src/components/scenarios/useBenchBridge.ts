@@ -1,0 +1,46 @@
+/**
+ * The one place where scenarios meet the Bench's store: what to save is read
+ * from it, and an opened (or restored, or shared) scenario is written into it.
+ * The bench store owns its state; this only uses its public refs and actions.
+ */
+import { parseMachine } from '@shared/schemas/machine'
+import type { ScenarioContent } from '@shared/schemas/scenario'
+import { contentFrom, type BenchSnapshot } from '@/lib/scenarios/content'
+import { useBenchStore } from '@/stores/bench'
+
+export const NEW_SCENARIO_FIELDS: Omit<ScenarioContent, 'program' | 'machine' | 'view'> = {
+  title: '',
+  description: '',
+  tags: [],
+  initialData: [],
+}
+
+export function useBenchBridge() {
+  const bench = useBenchStore()
+
+  /** The Bench as it is now, or null while its machine form has an invalid value (nothing valid to save). */
+  function snapshot(): BenchSnapshot | null {
+    if (!bench.machine) return null
+    return { program: bench.source, machine: bench.machine, view: { ...bench.view } }
+  }
+
+  function content(base: Omit<ScenarioContent, 'program' | 'machine' | 'view'>): ScenarioContent | null {
+    const s = snapshot()
+    return s ? contentFrom(base, s) : null
+  }
+
+  /** Puts a scenario on the Bench at its saved view, and runs it. */
+  async function load(c: ScenarioContent): Promise<void> {
+    bench.pause()
+    bench.exampleId = null
+    bench.presetId = null
+    bench.setSource(c.program)
+    bench.machineDraft = parseMachine(c.machine)
+    bench.setView(c.view)
+    await bench.run()
+    // A run keeps a view that fits the trace; set it again in case the run moved a cursor the trace now holds.
+    bench.setView(c.view)
+  }
+
+  return { bench, snapshot, content, load }
+}
