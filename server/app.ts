@@ -15,6 +15,12 @@ import { healthRoutes } from './routes/health'
 import { invitationRoutes } from './routes/invitations'
 import { meRoutes } from './routes/me'
 import { workspaceRoutes } from './routes/workspaces'
+import { docsRoutes } from './routes/docs'
+import { scenarioRoutes } from './routes/scenarios'
+import { shareLinkRoutes } from './routes/share-links'
+import { shareRoutes } from './routes/shares'
+import { uploadRoutes } from './routes/uploads'
+import { workspaceTrashRoutes } from './routes/workspace-trash'
 
 /** Builds the Express app: API under /api, and the built client (if any) with history fallback. */
 export function buildApp(ctx: AppContext): Express {
@@ -42,6 +48,12 @@ export function buildApp(ctx: AppContext): Express {
   workspaceRoutes(ctx, api)
   invitationRoutes(ctx, api)
   adminRoutes(api)
+  workspaceTrashRoutes(api)
+  scenarioRoutes(ctx, api)
+  shareLinkRoutes(ctx, api)
+  shareRoutes(ctx, api)
+  uploadRoutes(ctx, api)
+  docsRoutes(api)
 
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT_BYTES }), cookieParser(), api.router, apiNotFound)
 

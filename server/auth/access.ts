@@ -1,7 +1,7 @@
 import type { Request, RequestHandler } from 'express'
 import type { SiteRole } from '../../shared/schemas/user'
 import type { WorkspaceRole } from '../../shared/schemas/workspace'
-import { Membership, type User } from '../models'
+import { Membership, Workspace, type User } from '../models'
 import { errors } from '../http/errors'
 
 /**
@@ -12,19 +12,21 @@ import { errors } from '../http/errors'
  * - site: a signed-in user whose site role is listed;
  * - workspace: a member of the workspace `:id` whose role is listed, or, with
  *   `orSelf`, the user named by that route parameter (leaving a workspace).
- * A non-member gets 404, not 403, so workspace ids cannot be probed.
+ * A non-member gets 404, not 403, so workspace ids cannot be probed. A
+ * soft-deleted workspace is not found either, except by rules with
+ * `allowDeleted` (its undo).
  */
 export type Access =
   | { kind: 'public' }
   | { kind: 'signedIn' }
   | { kind: 'site'; roles: readonly SiteRole[] }
-  | { kind: 'workspace'; roles: readonly WorkspaceRole[]; orSelf?: string }
+  | { kind: 'workspace'; roles: readonly WorkspaceRole[]; orSelf?: string; allowDeleted?: boolean }
 
 export const access = {
   public: { kind: 'public' } as Access,
   signedIn: { kind: 'signedIn' } as Access,
   site: (...roles: SiteRole[]): Access => ({ kind: 'site', roles }),
-  workspace: (roles: readonly WorkspaceRole[], options: { orSelf?: string } = {}): Access => ({ kind: 'workspace', roles, ...options }),
+  workspace: (roles: readonly WorkspaceRole[], options: { orSelf?: string; allowDeleted?: boolean } = {}): Access => ({ kind: 'workspace', roles, ...options }),
 }
 
 export const ALL_WORKSPACE_ROLES: readonly WorkspaceRole[] = ['owner', 'editor', 'viewer']
@@ -55,7 +57,10 @@ export function authorize(rule: Access): RequestHandler {
     }
     const workspaceId = req.params.id
     if (typeof workspaceId !== 'string' || !UUID.test(workspaceId)) throw errors.notFound('workspace')
-    const membership = await Membership.findOne({ where: { workspaceId, userId: user.id } })
+    const membership = await Membership.findOne({
+      where: { workspaceId, userId: user.id },
+      include: [{ model: Workspace, as: 'workspace', required: true, paranoid: !rule.allowDeleted }],
+    })
     if (!membership) throw errors.notFound('workspace')
     ;(req as Request & { membership?: Membership }).membership = membership
     const self = rule.orSelf !== undefined && req.params[rule.orSelf] === user.id

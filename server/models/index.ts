@@ -4,14 +4,18 @@ import { Membership } from './membership'
 import { OutboxMessage } from './outbox-message'
 import { PasswordReset } from './password-reset'
 import { RefreshToken } from './refresh-token'
+import { Scenario } from './scenario'
+import { ScenarioVersion } from './scenario-version'
+import { ShareLink } from './share-link'
+import { Upload } from './upload'
 import { User } from './user'
 import { Workspace } from './workspace'
 
-export { Invitation, Membership, OutboxMessage, PasswordReset, RefreshToken, User, Workspace }
+export { Invitation, Membership, OutboxMessage, PasswordReset, RefreshToken, Scenario, ScenarioVersion, ShareLink, Upload, User, Workspace }
 
 /** Binds every model to the connection and declares the associations. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage]) {
+  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage, Upload, Scenario, ScenarioVersion, ShareLink]) {
     model.initModel(sequelize)
   }
   Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' })
@@ -19,4 +23,10 @@ export function initModels(sequelize: Sequelize): void {
   Workspace.hasMany(Membership, { as: 'memberships', foreignKey: 'workspaceId' })
   User.hasMany(Membership, { as: 'memberships', foreignKey: 'userId' })
   Invitation.belongsTo(User, { as: 'invitedBy', foreignKey: 'invitedById' })
+  Scenario.belongsTo(User, { as: 'author', foreignKey: 'authorId' })
+  Scenario.belongsTo(Workspace, { as: 'workspace', foreignKey: 'workspaceId' })
+  ShareLink.belongsTo(ScenarioVersion, { as: 'version', foreignKey: 'versionId' })
+  ShareLink.belongsTo(Scenario, { as: 'scenario', foreignKey: 'scenarioId' })
+  ShareLink.belongsTo(User, { as: 'createdBy', foreignKey: 'createdById' })
+  Upload.belongsTo(User, { as: 'uploadedBy', foreignKey: 'uploadedById' })
 }

@@ -5,6 +5,8 @@ export class Workspace extends Model<InferAttributes<Workspace>, InferCreationAt
   declare name: string
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
+  /** Soft delete (paranoid): destroy() sets it, queries skip such rows, restore() undoes it. */
+  declare deletedAt: CreationOptional<Date | null>
 
   static initModel(sequelize: Sequelize): void {
     Workspace.init(
@@ -13,8 +15,9 @@ export class Workspace extends Model<InferAttributes<Workspace>, InferCreationAt
         name: { type: DataTypes.STRING(80), allowNull: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
+        deletedAt: { type: DataTypes.DATE, allowNull: true },
       },
-      { sequelize, tableName: 'workspaces', underscored: true },
+      { sequelize, tableName: 'workspaces', underscored: true, paranoid: true },
     )
   }
 }

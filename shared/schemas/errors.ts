@@ -13,6 +13,11 @@ export const errorCodeSchema = z.enum([
   'forbidden', // 403: signed in, but the role does not allow it
   'not_found', // 404
   'conflict', // 409: e.g. the e-mail is taken, the last owner would leave
+  'version_conflict', // 409: someone saved the scenario since the version the save started from
+  'share_expired', // 410: the share link's expiry time has passed
+  'share_revoked', // 410: the share link was revoked (or its scenario deleted)
+  'undo_expired', // 410: the 30 days to undo a delete are over
+  'invalid_file', // 400: an upload that cannot be read; `diagnostics` says where
   'payload_too_large', // 413
   'rate_limited', // 429
   'internal', // 500: nothing internal is leaked

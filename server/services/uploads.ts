@@ -1,0 +1,203 @@
+/**
+ * Imports: a `.s` file, an `objdump -d` listing, a RISC-V ELF function or a
+ * scenario bundle becomes scenarios. The file is read and checked completely
+ * first; only then, in one transaction, are the Upload (the original bytes
+ * and their SHA-256) and what it produced written. A bad file leaves nothing.
+ */
+import crypto from 'node:crypto'
+import path from 'node:path'
+import { bundleSchema, type Bundle } from '../../shared/schemas/bundle'
+import type { ScenarioContent } from '../../shared/schemas/scenario'
+import { scenarioContentSchema } from '../../shared/schemas/scenario'
+import { IMPORT_MAX_INSTRUCTIONS, type FileDiagnostic, type UploadFields, type Upload as UploadDto, type UploadInspection, type UploadKind } from '../../shared/schemas/upload'
+import { assemble } from '../../shared/sim/isa/assembler'
+import { parseObjdump } from '../../shared/sim/isa/objdump'
+import type { SimDiagnostic } from '../../shared/sim/isa/types'
+import type { AppContext } from '../context'
+import { DetailedApiError } from '../http/detailed-error'
+import { issuesToFields } from '../http/validate'
+import { Scenario, Upload, type User } from '../models'
+import { ElfError, readElf } from './elf/reader'
+import { decodeFunction, listFunctions } from './elf/import'
+import { importBundle } from './scenario-bundles'
+import { summarizeRun } from './scenario-run'
+import { createScenario } from './scenarios'
+import { instructionsToAssembly } from './uploads-asm'
+
+export interface ReceivedFile {
+  originalname: string
+  mimetype: string
+  size: number
+  buffer: Buffer
+}
+
+const invalid = (message: string, diagnostics: FileDiagnostic[] = [], extra: Record<string, unknown> = {}) =>
+  new DetailedApiError(400, 'invalid_file', message, { diagnostics, ...extra })
+
+const fromSim = (d: SimDiagnostic): FileDiagnostic => ({ line: d.line, column: d.column, code: d.code, message: d.message })
+
+const ASM_EXT = new Set(['.s', '.asm'])
+const OBJDUMP_EXT = new Set(['.txt', '.dump', '.objdump', '.lst', '.dis'])
+const OBJDUMP_ROW = /^\s*[0-9a-f]+:\s+[0-9a-f]{4,8}\s/im
+
+/** The file as UTF-8 text, or a 400 naming the first byte that is not text. */
+function asText(file: ReceivedFile): string {
+  const bad = file.buffer.findIndex((b) => b === 0 || (b < 0x20 && b !== 0x09 && b !== 0x0a && b !== 0x0d))
+  if (bad >= 0) throw invalid(`${file.originalname} is not a text file: byte ${bad} is 0x${(file.buffer[bad] ?? 0).toString(16).padStart(2, '0')}`, [{ offset: bad, code: 'binary', message: 'a control byte in a text file' }])
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(file.buffer).replace(/^\uFEFF/, '')
+  } catch {
+    throw invalid(`${file.originalname} is not UTF-8 text`, [{ code: 'encoding', message: 'not valid UTF-8' }])
+  }
+}
+
+export function detectKind(file: ReceivedFile, requested?: UploadKind): UploadKind {
+  if (requested) return requested
+  const b = file.buffer
+  if (b.length >= 4 && b[0] === 0x7f && b[1] === 0x45 && b[2] === 0x4c && b[3] === 0x46) return 'elf'
+  const ext = path.extname(file.originalname).toLowerCase()
+  if (ext === '.json') return 'bundle'
+  if (ASM_EXT.has(ext)) return 'asm'
+  if (OBJDUMP_EXT.has(ext)) return 'objdump'
+  const text = asText(file)
+  if (/^\s*\{/.test(text)) return 'bundle'
+  if (OBJDUMP_ROW.test(text)) return 'objdump'
+  throw invalid(`Chimeline cannot tell what ${file.originalname} is: upload a .s assembly file, an objdump -d listing (.txt), a RISC-V ELF file or a scenario bundle (.json), or name the kind`)
+}
+
+/** Line and column of a character offset. */
+function position(text: string, offset: number): { line: number; column: number } {
+  const before = text.slice(0, offset).split('\n')
+  return { line: before.length, column: (before[before.length - 1]?.length ?? 0) + 1 }
+}
+
+function readBundle(file: ReceivedFile): Bundle {
+  const text = asText(file)
+  let json: unknown
+  try {
+    json = JSON.parse(text)
+  } catch (err) {
+    const at = /position (\d+)/.exec((err as Error).message)
+    const where = at ? position(text, Number(at[1])) : {}
+    throw invalid(`${file.originalname} is not valid JSON: ${(err as Error).message}`, [{ ...where, code: 'json', message: (err as Error).message }])
+  }
+  const parsed = bundleSchema.safeParse(json)
+  if (!parsed.success) {
+    const fields = issuesToFields(parsed.error.issues)
+    const [first] = Object.entries(fields)
+    throw new DetailedApiError(400, 'invalid_file', `${file.originalname} is not a Chimeline scenario bundle (formatVersion 1): ${first?.[0]}: ${first?.[1]}`, { diagnostics: [] }, fields)
+  }
+  return parsed.data
+}
+
+function elfProblem(file: ReceivedFile, err: unknown): never {
+  if (err instanceof ElfError) throw invalid(`${file.originalname}: ${err.message}`, [{ offset: err.offset, code: err.code, message: err.message }])
+  throw err
+}
+
+const baseTitle = (file: ReceivedFile) => path.basename(file.originalname).replace(/\.[^.]+$/, '').slice(0, 200) || 'Imported program'
+
+function contentFor(title: string, program: string): ScenarioContent {
+  return scenarioContentSchema.parse({ title, program, description: '' })
+}
+
+/** Reads a file fully: the content of one scenario, or a bundle. Throws a 400 that says where on any problem. */
+function readUpload(file: ReceivedFile, kind: UploadKind, fields: UploadFields): { content: ScenarioContent } | { bundle: Bundle } {
+  const title = fields.title ?? baseTitle(file)
+  switch (kind) {
+    case 'asm': {
+      const text = asText(file)
+      const r = assemble(text, { maxInstructions: IMPORT_MAX_INSTRUCTIONS })
+      if (!r.ok) {
+        const first = r.errors[0] as SimDiagnostic
+        throw invalid(`${file.originalname} line ${first.line}, column ${first.column}: ${first.message}${r.errors.length > 1 ? ` (and ${r.errors.length - 1} more)` : ''}`, r.errors.map(fromSim))
+      }
+      return { content: contentFor(title, text) }
+    }
+    case 'objdump': {
+      const r = parseObjdump(asText(file), { maxInstructions: IMPORT_MAX_INSTRUCTIONS })
+      if (!r.ok) {
+        const first = r.errors[0] as SimDiagnostic
+        throw invalid(`${file.originalname} line ${first.line}, column ${first.column}: ${first.message}`, r.errors.map(fromSim))
+      }
+      const asm = instructionsToAssembly(r.program.instructions, `# Imported from ${path.basename(file.originalname)} (an objdump -d listing)`)
+      if (!asm.ok) throw invalid(`${file.originalname}: ${asm.message}`, [{ code: 'reassemble', message: asm.message }])
+      return { content: contentFor(title, asm.text) }
+    }
+    case 'elf': {
+      let functions
+      try {
+        functions = listFunctions(readElf(file.buffer))
+      } catch (err) {
+        elfProblem(file, err)
+      }
+      if (!fields.function) throw invalid(`${file.originalname} is an ELF file: choose one of its ${functions.length} function(s) to import`, [], { functions })
+      let decoded
+      try {
+        decoded = decodeFunction(file.buffer, fields.function, IMPORT_MAX_INSTRUCTIONS)
+      } catch (err) {
+        elfProblem(file, err)
+      }
+      const asm = instructionsToAssembly(decoded.instructions, `# Imported from ${path.basename(file.originalname)}: function ${decoded.name} (RISC-V ELF)`)
+      if (!asm.ok) throw invalid(`${file.originalname}: ${asm.message}`, [{ code: 'reassemble', message: asm.message }])
+      return { content: contentFor(fields.title ?? decoded.name, asm.text) }
+    }
+    case 'bundle':
+      return { bundle: readBundle(file) }
+  }
+}
+
+/** What a file holds, without storing anything (the ELF function list for the chooser). */
+export function inspectUpload(file: ReceivedFile, fields: UploadFields): UploadInspection {
+  const kind = detectKind(file, fields.kind)
+  const base = { kind, fileName: file.originalname, size: file.size }
+  if (kind === 'elf') {
+    try {
+      return { ...base, functions: listFunctions(readElf(file.buffer)) }
+    } catch (err) {
+      elfProblem(file, err)
+    }
+  }
+  const read = readUpload(file, kind, fields)
+  return 'bundle' in read ? { ...base, scenarios: read.bundle.scenarios.map((s) => s.versions[s.versions.length - 1]?.content.title ?? '') } : base
+}
+
+export function uploadDto(upload: Upload, uploader: User | null, scenarioIds: string[]): UploadDto {
+  return {
+    id: upload.id,
+    fileName: upload.fileName,
+    kind: upload.kind,
+    mediaType: upload.mediaType,
+    size: upload.size,
+    sha256: upload.sha256,
+    uploadedBy: { id: uploader?.id ?? null, name: uploader?.name ?? 'a former member' },
+    createdAt: upload.createdAt.toISOString(),
+    scenarioIds,
+  }
+}
+
+export async function importUpload(ctx: AppContext, user: User, workspaceId: string, file: ReceivedFile, fields: UploadFields): Promise<{ upload: Upload; scenarios: Scenario[] }> {
+  const kind = detectKind(file, fields.kind)
+  const read = readUpload(file, kind, fields)
+  const run = 'content' in read ? summarizeRun(read.content) : undefined
+  return ctx.sequelize.transaction(async (transaction) => {
+    const upload = await Upload.create(
+      {
+        workspaceId,
+        uploadedById: user.id,
+        fileName: path.basename(file.originalname).slice(0, 255),
+        kind,
+        mediaType: (file.mimetype || 'application/octet-stream').slice(0, 100),
+        size: file.size,
+        bytes: file.buffer,
+        sha256: crypto.createHash('sha256').update(file.buffer).digest('hex'),
+      },
+      { transaction },
+    )
+    const scenarios =
+      'content' in read
+        ? [await createScenario(ctx, user, workspaceId, { content: read.content, message: `Imported from ${upload.fileName}` }, { uploadId: upload.id, transaction, run })]
+        : await importBundle(user, workspaceId, read.bundle, { uploadId: upload.id, transaction })
+    return { upload, scenarios }
+  })
+}
