@@ -21,6 +21,7 @@ import { OrderedReductionInst, ReductionInst } from './reduction'
 import { RegFile } from './regfile'
 import { Renamer } from './rename'
 import { UnitInst } from './units'
+import { Window } from './window'
 
 const NONE = 0x7fffffff
 
@@ -48,8 +49,11 @@ export interface TimingState {
   feReason: number
   // Instructions in flight, in program order
   inflight: Inst[]
-  readonly arith: Inst[]
-  readonly mem: MemInst[]
+  /** Program-order lists of the arithmetic and memory instructions, by absolute position. */
+  readonly arith: Window<Inst>
+  readonly mem: Window<MemInst>
+  /** No memory instruction before this position is still incomplete. */
+  memLive: number
   readonly laneArithNext: Int32Array
   memNext: number
   arithQueued: number
@@ -57,7 +61,6 @@ export interface TimingState {
   readonly slotsUsed: Int32Array
   readonly slotRelease: Int32Array
   readonly memPorts: (MemInst | null)[]
-  readonly instOf: (Inst | null)[]
   /** Scratch list of the instructions active in one lane this cycle. */
   readonly active: Inst[]
 }
@@ -93,8 +96,9 @@ export function createTimingState(stream: DynamicStream, machine: Machine, optio
     holdReleasedAt: -1,
     feReason: REASON.frontend,
     inflight: [],
-    arith: [],
-    mem: [],
+    arith: new Window<Inst>(),
+    mem: new Window<MemInst>(),
+    memLive: 0,
     laneArithNext: new Int32Array(L),
     memNext: 0,
     arithQueued: 0,
@@ -102,7 +106,6 @@ export function createTimingState(stream: DynamicStream, machine: Machine, optio
     slotsUsed: new Int32Array(L),
     slotRelease: new Int32Array(L),
     memPorts: Array.from({ length: machine.memoryPorts }, () => null),
-    instOf: new Array<Inst | null>(ops.length).fill(null),
     active: [],
   }
   for (let i = 0; i < ops.length; i++) {
@@ -172,7 +175,6 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
   inst.oldDst = old
   inst.dispatch = c
   s.dispatchAt[op.seq] = c
-  s.instOf[op.seq] = inst
   s.inflight.push(inst)
   if (inst instanceof MemInst) {
     s.mem.push(inst)
@@ -247,9 +249,9 @@ function issueStaggered(s: TimingState, lane: number, c: number): void {
   const ctx = s.ctx
   for (;;) {
     const k = s.laneArithNext[lane] ?? 0
-    const inst = s.arith[k]
+    const inst = s.arith.at(k)
     if (!inst || inst.dispatch >= c) return
-    const prev = k > 0 ? s.arith[k - 1] : undefined
+    const prev = k > 0 ? s.arith.at(k - 1) : undefined
     if (prev && (prev.readDone[lane] !== 1 || readEnd(prev, lane, ctx) >= c)) return
     if (inst.hasWorkIn(lane) && (s.slotsUsed[lane] ?? 0) >= s.machine.laneSlots) {
       ctx.block(lane, inst.seq, REASON.slot)
@@ -266,9 +268,9 @@ function issueTogether(s: TimingState, c: number): void {
   const L = ctx.L
   for (;;) {
     const k = s.laneArithNext[0] ?? 0
-    const inst = s.arith[k]
+    const inst = s.arith.at(k)
     if (!inst || inst.dispatch >= c) return
-    const prev = k > 0 ? s.arith[k - 1] : undefined
+    const prev = k > 0 ? s.arith.at(k - 1) : undefined
     let ok = true
     if (prev) {
       if (s.machine.issue === 'serial') ok = prev.complete >= 0 && prev.complete < c
@@ -291,6 +293,11 @@ function issueTogether(s: TimingState, c: number): void {
   }
 }
 
+/** Whether an instruction has finished before cycle c. */
+function isDone(inst: Inst, c: number): boolean {
+  return inst.complete >= 0 && inst.complete < c
+}
+
 /** The memory unit starts the next memory instructions, in program order, on free ports. */
 function memoryStart(s: TimingState, c: number): void {
   const ports = s.memPorts
@@ -299,14 +306,16 @@ function memoryStart(s: TimingState, c: number): void {
     if (held && held.busDone && held.portUntil < c) ports[p] = null
   }
   for (;;) {
-    const inst = s.mem[s.memNext]
+    const inst = s.mem.at(s.memNext)
     if (!inst || inst.dispatch >= c) return
     const port = ports.indexOf(null)
     let ok = port >= 0
     if (ok) {
       // Memory dependences: wait for every older overlapping access when either side is a store.
-      for (let k = 0; k < s.memNext && ok; k++) {
-        const o = s.mem[k] as MemInst
+      while (s.memLive < s.memNext && isDone(s.mem.at(s.memLive) as MemInst, c)) s.memLive++
+      s.mem.dropBefore(s.memLive)
+      for (let k = s.memLive; k < s.memNext && ok; k++) {
+        const o = s.mem.at(k) as MemInst
         if (o.complete >= 0 && o.complete < c) continue
         if ((o.isStore || inst.isStore) && o.overlaps(inst)) ok = false
       }
@@ -355,7 +364,7 @@ export function step(s: TimingState): boolean {
       issueStaggered(s, l, c)
       // Instructions that just started in this lane may read in this very cycle.
       for (let k = before; k < (s.laneArithNext[l] ?? 0); k++) {
-        const inst = s.arith[k] as Inst
+        const inst = s.arith.at(k) as Inst
         if (inst.laneDone[l] !== 1) act[na++] = inst
       }
     }
@@ -402,7 +411,13 @@ export function step(s: TimingState): boolean {
   if (busy) s.lastBusy = c
   let finished = false
   for (let i = 0; i < fl.length && !finished; i++) if ((fl[i] as Inst).complete >= 0) finished = true
-  if (finished) s.inflight = fl.filter((i) => i.complete < 0)
+  if (finished) {
+    s.inflight = fl.filter((i) => i.complete < 0)
+    // Forget finished instructions no lane's issue looks back at any more (it reads the previous one).
+    let oldest = s.laneArithNext[0] ?? 0
+    for (let l = 1; l < L; l++) oldest = Math.min(oldest, s.laneArithNext[l] ?? 0)
+    s.arith.dropBefore(oldest - 1)
+  }
   s.cycle = c + 1
   if (s.opIdx >= ops.length && s.scalarAfterLeft === 0 && s.hold < 0 && s.inflight.length === 0) {
     s.done = true

@@ -4,7 +4,7 @@
  * Subclasses add what their shape needs (units, reductions, ring, memory).
  */
 import type { VectorOp } from '../exec/stream'
-import { LANE_FIELD_COUNT, NO_CYCLE } from '../trace/types'
+import { LANE_FIELD_COUNT as FIELD_COUNT, NO_CYCLE as NULL_CYCLE } from '../trace/types'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
 import { REASON } from './context'
@@ -18,6 +18,13 @@ export const F_EXEC_START = 4
 export const F_EXEC_END = 5
 export const F_WRITE_START = 6
 export const F_WRITE_END = 7
+
+// Imported bindings are copied once: in the hot paths a module binding may cost a getter call per use.
+const LANE_FIELD_COUNT: number = FIELD_COUNT
+const NO_CYCLE: number = NULL_CYCLE
+const R_RAW = REASON.raw
+const R_QUEUE = REASON.queue
+const R_BANK = REASON.bank
 
 /** A source operand group: words read into its queue and consumed by beats, per lane. */
 export class Operand {
@@ -165,18 +172,18 @@ export abstract class Inst {
       if (w >= words) continue
       all = false
       if (w - (s.cons[lane] ?? 0) >= d.queueDepth) {
-        this.ctx.block(lane, this.seq, REASON.queue)
+        this.ctx.block(lane, this.seq, R_QUEUE)
         continue
       }
       const p = rf.physOf(s.group, w)
       const off = w % rf.wpr
       if ((rf.ready[(p * this.L + lane) * rf.wpr + off] ?? 0) > c) {
-        this.ctx.block(lane, this.seq, REASON.raw)
+        this.ctx.block(lane, this.seq, R_RAW)
         continue
       }
       const bank = (p + off) % rf.banks
       if (!rf.grant(lane, bank, c)) {
-        this.ctx.block(lane, this.seq, REASON.bank)
+        this.ctx.block(lane, this.seq, R_BANK)
         continue
       }
       rec.use(this.ctx.bankRes[lane * d.banks + bank] ?? 0, c, 1, this.seq)
@@ -228,7 +235,7 @@ export abstract class Inst {
       if (!this.scalarDst) {
         const bank = rf.bankOf(this.dst, w)
         if (!rf.grant(lane, bank, c)) {
-          this.ctx.block(lane, this.seq, REASON.bank)
+          this.ctx.block(lane, this.seq, R_BANK)
           break
         }
         rec.use(this.ctx.bankRes[lane * d.banks + bank] ?? 0, c, 1, this.seq)
@@ -283,22 +290,21 @@ export abstract class Inst {
   /** Step outside the lanes (memory unit, ring); called first in each cycle. */
   global(_c: number): void {}
 
-  /** Flops of the active elements. */
-  flops(): number {
-    const op = this.op
-    if (op.flopsPerElement === 0) return 0
-    let active = op.vl
-    if (op.active) {
-      active = 0
-      for (let i = 0; i < op.vl; i++) active += op.active[i] ?? 0
-    }
-    return active * op.flopsPerElement
-  }
-
   /** The lane still has work for this instruction. */
   pending(lane: number): boolean {
     return this.laneDone[lane] !== 1
   }
+}
+
+/** Flops of the active elements of an op (timing model section 6). */
+export function opFlops(op: VectorOp): number {
+  if (op.flopsPerElement === 0) return 0
+  let active = op.vl
+  if (op.active) {
+    active = 0
+    for (let i = 0; i < op.vl; i++) active += op.active[i] ?? 0
+  }
+  return active * op.flopsPerElement
 }
 
 /** Elements per lane for the standard layout. */

@@ -12,6 +12,7 @@ import type { InstructionTrace, SimulateOptions, TimingError, TimingResult } fro
 import { STALL_REASONS, emptyStallCounts } from '../trace/types'
 import type { TimingState } from './engine'
 import { createTimingState, step } from './engine'
+import { opFlops } from './inst'
 import { computeMetrics } from './metrics'
 
 export type { TimingState } from './engine'
@@ -41,9 +42,8 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
   const ops = s.stream.ops
   let flops = 0
   const instructions: InstructionTrace[] = ops.map((op, i) => {
-    const inst = s.instOf[i]
     const done = (s.completeAt[i] ?? -1) >= 0
-    const f = inst && done ? inst.flops() : 0
+    const f = done && !op.isConfig ? opFlops(op) : 0
     flops += f
     const stalls = emptyStallCounts()
     STALL_REASONS.forEach((r, k) => (stalls[r] = s.opStalls[i * 9 + k] ?? 0))
