@@ -1,0 +1,149 @@
+/**
+ * Reference check of the ELF reader (server/services/elf) against GNU
+ * binutils (Debian package binutils-riscv64-linux-gnu): kernels.s is
+ * assembled by riscv64-linux-gnu-as and linked by riscv64-linux-gnu-ld; the
+ * functions Chimeline lists must be the FUNC symbols `readelf -sW` prints at
+ * the addresses `nm` prints, and each function's decoded instructions must be
+ * the words and text `objdump -d` prints.
+ */
+import { execFileSync } from 'node:child_process'
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
+import { fileURLToPath } from 'node:url'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { decodeFunction, listFunctions } from '../../../server/services/elf/import'
+import { ElfError, readElf } from '../../../server/services/elf/reader'
+import { encode } from '../../../shared/sim/isa/encoder'
+
+const kernels = fileURLToPath(new URL('./kernels.s', import.meta.url))
+
+function toolPresent(): boolean {
+  try {
+    for (const tool of ['as', 'ld', 'objdump', 'nm', 'readelf']) execFileSync(`riscv64-linux-gnu-${tool}`, ['--version'], { stdio: 'ignore' })
+    return true
+  } catch {
+    return false
+  }
+}
+
+const present = toolPresent()
+if (!present) {
+  const msg = 'GNU binutils for RISC-V (riscv64-linux-gnu-as/ld/objdump/nm/readelf) is missing: install with `bash scripts/ensure-tools.sh riscv`'
+  if (process.env.CI === 'true') throw new Error(`CI: ${msg}`)
+  console.warn(`\n!!!!! SKIPPING the ELF reader reference check: ${msg} !!!!!\n`)
+}
+
+const run = (tool: string, args: string[]) => execFileSync(`riscv64-linux-gnu-${tool}`, args, { encoding: 'utf8' })
+
+/** FUNC symbols as `readelf -sW` prints them: name -> { value, size }. */
+function readelfFunctions(file: string): Map<string, { value: number; size: number }> {
+  const out = new Map<string, { value: number; size: number }>()
+  for (const line of run('readelf', ['-sW', file]).split('\n')) {
+    const m = /^\s*\d+:\s+([0-9a-f]+)\s+(\d+)\s+FUNC\s+\S+\s+\S+\s+\d+\s+(\S+)$/.exec(line)
+    if (m) out.set(m[3] as string, { value: parseInt(m[1] as string, 16), size: Number(m[2]) })
+  }
+  return out
+}
+
+/** `nm` addresses: name -> value. */
+function nmAddresses(file: string): Map<string, number> {
+  return new Map(run('nm', [file]).trim().split('\n').map((l) => l.split(' ')).map(([v, , n]) => [n as string, parseInt(v as string, 16)]))
+}
+
+/**
+ * objdump text normalised as in tests/reference/binutils: spaces squeezed,
+ * `<symbol>` notes dropped, and binutils 2.40's immediate-form aliases
+ * (add/and/or/sll/srl/sra with an immediate) named as the ISA names them.
+ */
+function normalise(text: string): string {
+  const t = text.replace(/#.*$/, '').replace(/\s*<[^>]*>/, '').replace(/\s+/g, ' ').trim()
+  return t.replace(/^(add|and|or|sll|srl|sra) ([a-z0-9]+),([a-z0-9]+),(-?(0x[0-9a-f]+|[0-9]+))$/, (_m, op: string, rd: string, rs: string, imm: string) => `${op}i ${rd},${rs},${imm}`)
+}
+
+/** objdump -d rows of one function: address, word and normalised text. */
+function objdumpRows(file: string, fn: string): { address: number; word: number; text: string }[] {
+  const lines = run('objdump', ['-d', `--disassemble=${fn}`, file]).split('\n')
+  const rows = []
+  for (const line of lines) {
+    const m = /^\s*([0-9a-f]+):\s+([0-9a-f]{8})\s+(.*)$/.exec(line)
+    if (m) rows.push({ address: parseInt(m[1] as string, 16), word: parseInt(m[2] as string, 16), text: normalise(m[3] as string) })
+  }
+  return rows
+}
+
+describe.skipIf(!present)('the ELF reader against GNU binutils on tests/reference/elf/kernels.s', () => {
+  let dir = ''
+  let obj = ''
+  let exe = ''
+  beforeAll(() => {
+    dir = mkdtempSync(join(tmpdir(), 'chimeline-elf-'))
+    obj = join(dir, 'kernels.o')
+    exe = join(dir, 'kernels')
+    run('as', ['-march=rv64gv', kernels, '-o', obj])
+    run('ld', ['--no-relax', '-e', 'saxpy', obj, '-o', exe])
+  })
+  afterAll(() => {
+    if (dir) rmSync(dir, { recursive: true, force: true })
+  })
+
+  it.each([['object file', () => obj], ['executable', () => exe]])('lists the FUNC symbols readelf -sW shows, at the addresses nm shows (%s)', (_kind, file) => {
+    const ours = listFunctions(readElf(readFileSync(file())))
+    const theirs = readelfFunctions(file())
+    const nm = nmAddresses(file())
+    expect(ours.map((f) => f.name).sort()).toEqual([...theirs.keys()].sort())
+    for (const f of ours) {
+      expect({ name: f.name, address: f.address, size: f.size }).toEqual({ name: f.name, address: theirs.get(f.name)?.value, size: theirs.get(f.name)?.size })
+      expect(f.address).toBe(nm.get(f.name))
+      expect(f.instructions).toBe(f.size / 4)
+    }
+  })
+
+  it.each([
+    ['saxpy', 'object file'],
+    ['dot', 'object file'],
+    ['saxpy', 'executable'],
+    ['dot', 'executable'],
+    ['scale_table', 'executable'],
+  ])('decodes %s from the %s to the words and text objdump -d prints', (fn, kind) => {
+    const file = kind === 'executable' ? exe : obj
+    const decoded = decodeFunction(readFileSync(file), fn, 1000)
+    const rows = objdumpRows(file, fn)
+    expect(rows.length).toBeGreaterThan(2)
+    expect(decoded.instructions.map((i) => ({ address: i.address, word: encode(i) >>> 0, text: i.text.replace(/\s+/g, ' ') }))).toEqual(rows)
+  })
+
+  it('refuses a function of an object file whose bytes the linker still has to fill in (la of data)', () => {
+    expect(() => decodeFunction(readFileSync(obj), 'scale_table', 1000)).toThrow(/^scale_table\+0x0 needs the linker \(relocation type 23 against table\); link it first/)
+  })
+
+  it('names what is wrong with a truncated file, a 32-bit file, another machine and a file that is no ELF', () => {
+    const bytes = readFileSync(exe)
+    const codeOf = (b: Uint8Array) => {
+      try {
+        readElf(b)
+      } catch (err) {
+        return { code: (err as ElfError).code, message: (err as ElfError).message }
+      }
+      return null
+    }
+    expect(codeOf(bytes.subarray(0, 40))?.code).toBe('truncated')
+    expect(codeOf(bytes.subarray(0, bytes.length - 100))).toMatchObject({ code: 'truncated', message: expect.stringMatching(/^the file ends at byte \d+, inside the section header table/) })
+    const rv32 = join(dir, 'k32.o')
+    writeFileSync(join(dir, 'k32.s'), '  .text\n  .globl f\n  .type f, @function\nf:\n  ret\n')
+    run('as', ['-march=rv32gc', '-mabi=ilp32', join(dir, 'k32.s'), '-o', rv32])
+    expect(codeOf(readFileSync(rv32))).toEqual({ code: 'elf-class', message: 'a 32-bit ELF file; Chimeline reads 64-bit RISC-V (ELFCLASS64) only' })
+    const x86 = join(dir, 'x86.o')
+    writeFileSync(join(dir, 'x86.s'), '  .text\n  .globl f\nf:\n  ret\n')
+    execFileSync('as', ['--64', join(dir, 'x86.s'), '-o', x86])
+    expect(codeOf(readFileSync(x86))).toEqual({ code: 'elf-machine', message: 'built for x86-64 (e_machine 62), not RISC-V (e_machine 243)' })
+    expect(codeOf(new TextEncoder().encode('  vadd.vv v1, v2, v3\n'))?.code).toBe('not-elf')
+  })
+
+  it('stops at a compressed instruction with its address', () => {
+    const rvc = join(dir, 'rvc.o')
+    writeFileSync(join(dir, 'rvc.s'), '  .text\n  .globl f\n  .type f, @function\nf:\n  addi a0, a0, 1\n  ret\n  .size f, .-f\n')
+    run('as', ['-march=rv64gc', join(dir, 'rvc.s'), '-o', rvc])
+    expect(() => decodeFunction(readFileSync(rvc), 'f', 1000)).toThrow(/^f\+0x0 \(address 0x0\): 0x[0-9a-f]{8} is a 16-bit compressed instruction/)
+  })
+})
