@@ -1,50 +1,70 @@
 /**
  * Run-length encoding of what the lanes did: stall spans per lane and
- * resource-use spans per resource, in growable typed arrays, plus the totals
+ * resource-use spans per resource, in chunked typed arrays, plus the totals
  * the metrics need. Nothing here is per cycle and lane.
  */
 import type { ResourceInfo, StallSpans, UsageSpans } from '../trace/types'
 
-class Growable {
-  i32: Int32Array[]
-  u8: Uint8Array[]
-  u16: Uint16Array[]
-  u32: Uint32Array[]
+type Column = Int32Array | Uint8Array | Uint16Array | Uint32Array
+type ColumnType = new (n: number) => Column
+
+const CHUNK_BITS = 16
+const CHUNK = 1 << CHUNK_BITS
+
+/**
+ * Rows of spans in fixed-size chunks per column: appending never copies what
+ * is already stored, and `column` builds one exact-size, reordered column at a
+ * time, releasing its chunks, so a long run never holds its spans twice over.
+ */
+class Columns {
+  readonly chunks: Column[][]
   count = 0
-  cap: number
-  constructor(n32: number, n8: number, n16: number, nu32: number, cap = 1024) {
-    this.cap = cap
-    this.i32 = Array.from({ length: n32 }, () => new Int32Array(cap))
-    this.u8 = Array.from({ length: n8 }, () => new Uint8Array(cap))
-    this.u16 = Array.from({ length: n16 }, () => new Uint16Array(cap))
-    this.u32 = Array.from({ length: nu32 }, () => new Uint32Array(cap))
+  constructor(readonly types: ColumnType[]) {
+    this.chunks = types.map(() => [])
   }
   /** Index of a new row. */
   push(): number {
-    if (this.count === this.cap) {
-      const cap = this.cap * 2
-      const grow = <T extends Int32Array | Uint8Array | Uint16Array | Uint32Array>(a: T, make: (n: number) => T): T => {
-        const b = make(cap)
-        b.set(a)
-        return b
-      }
-      this.i32 = this.i32.map((a) => grow(a, (n) => new Int32Array(n)))
-      this.u8 = this.u8.map((a) => grow(a, (n) => new Uint8Array(n)))
-      this.u16 = this.u16.map((a) => grow(a, (n) => new Uint16Array(n)))
-      this.u32 = this.u32.map((a) => grow(a, (n) => new Uint32Array(n)))
-      this.cap = cap
-    }
+    if ((this.count & (CHUNK - 1)) === 0) this.types.forEach((T, k) => (this.chunks[k] as Column[]).push(new T(CHUNK)))
     return this.count++
   }
+  set(k: number, i: number, v: number): void {
+    ;((this.chunks[k] as Column[])[i >>> CHUNK_BITS] as Column)[i & (CHUNK - 1)] = v
+  }
+  get(k: number, i: number): number {
+    return ((this.chunks[k] as Column[])[i >>> CHUNK_BITS] as Column)[i & (CHUNK - 1)] ?? 0
+  }
+  /** Column k in the row order `idx`; its chunks are released. */
+  column<T extends Column>(k: number, idx: Uint32Array, Make: new (n: number) => T): T {
+    const out = new Make(idx.length)
+    const chunks = this.chunks[k] as Column[]
+    for (let i = 0; i < idx.length; i++) {
+      const j = idx[i] ?? 0
+      out[i] = (chunks[j >>> CHUNK_BITS] as Column)[j & (CHUNK - 1)] ?? 0
+    }
+    this.chunks[k] = []
+    return out
+  }
 }
+
+// Column numbers of the two span tables.
+const S_START = 0
+const S_LEN = 1
+const S_INST = 2
+const S_REASON = 3
+const S_LANE = 4
+const U_START = 0
+const U_LEN = 1
+const U_INST = 2
+const U_AMOUNT = 3
+const U_RESOURCE = 4
 
 export class Recorder {
   readonly resources: ResourceInfo[] = []
   /** Uses summed over the run, per resource. */
   readonly totals: Float64Array
   readonly recordUsage: boolean
-  private readonly stall = new Growable(3, 1, 1, 0) // start, length, instruction | reason | lane
-  private readonly usage = new Growable(3, 0, 1, 1) // start, length, instruction | amount | resource
+  private readonly stall = new Columns([Int32Array, Int32Array, Int32Array, Uint8Array, Uint16Array])
+  private readonly usage = new Columns([Int32Array, Int32Array, Int32Array, Uint16Array, Uint32Array])
   // Open stall span per lane.
   private readonly sReason: Int16Array
   private readonly sInst: Int32Array
@@ -104,13 +124,13 @@ export class Recorder {
   }
 
   private flushStall(lane: number): void {
-    const i = this.stall.push()
-    const [start, len, inst] = this.stall.i32 as [Int32Array, Int32Array, Int32Array]
-    start[i] = this.sStart[lane] ?? 0
-    len[i] = this.sLen[lane] ?? 0
-    inst[i] = this.sInst[lane] ?? 0
-    ;(this.stall.u8[0] as Uint8Array)[i] = this.sReason[lane] ?? 0
-    ;(this.stall.u16[0] as Uint16Array)[i] = lane
+    const t = this.stall
+    const i = t.push()
+    t.set(S_START, i, this.sStart[lane] ?? 0)
+    t.set(S_LEN, i, this.sLen[lane] ?? 0)
+    t.set(S_INST, i, this.sInst[lane] ?? 0)
+    t.set(S_REASON, i, this.sReason[lane] ?? 0)
+    t.set(S_LANE, i, lane)
     this.sReason[lane] = -1
   }
 
@@ -154,13 +174,13 @@ export class Recorder {
   }
 
   private flushUse(r: number): void {
-    const i = this.usage.push()
-    const [start, len, inst] = this.usage.i32 as [Int32Array, Int32Array, Int32Array]
-    start[i] = this.uStart[r] ?? 0
-    len[i] = this.uLen[r] ?? 0
-    inst[i] = this.uInst[r] ?? 0
-    ;(this.usage.u16[0] as Uint16Array)[i] = this.uAmt[r] ?? 0
-    ;(this.usage.u32[0] as Uint32Array)[i] = r
+    const t = this.usage
+    const i = t.push()
+    t.set(U_START, i, this.uStart[r] ?? 0)
+    t.set(U_LEN, i, this.uLen[r] ?? 0)
+    t.set(U_INST, i, this.uInst[r] ?? 0)
+    t.set(U_AMOUNT, i, this.uAmt[r] ?? 0)
+    t.set(U_RESOURCE, i, r)
     this.uInst[r] = -1
   }
 
@@ -169,52 +189,46 @@ export class Recorder {
     for (let l = 0; l < this.sReason.length; l++) if ((this.sReason[l] ?? -1) >= 0) this.flushStall(l)
     if (this.recordUsage) for (let r = 0; r < this.resources.length; r++) if ((this.uInst[r] ?? -1) >= 0) this.flushUse(r)
     const s = this.stall
-    const so = order(s.i32[0] as Int32Array, s.count)
+    const so = order(s, S_START)
     const u = this.usage
-    const uo = order(u.i32[0] as Int32Array, u.count)
+    const uo = order(u, U_START)
     return {
       stalls: {
         count: s.count,
-        start: pick(s.i32[0] as Int32Array, so, Int32Array),
-        length: pick(s.i32[1] as Int32Array, so, Int32Array),
-        instruction: pick(s.i32[2] as Int32Array, so, Int32Array),
-        reason: pick(s.u8[0] as Uint8Array, so, Uint8Array),
-        lane: pick(s.u16[0] as Uint16Array, so, Uint16Array),
+        start: s.column(S_START, so, Int32Array),
+        length: s.column(S_LEN, so, Int32Array),
+        instruction: s.column(S_INST, so, Int32Array),
+        reason: s.column(S_REASON, so, Uint8Array),
+        lane: s.column(S_LANE, so, Uint16Array),
       },
       usage: {
         count: u.count,
-        start: pick(u.i32[0] as Int32Array, uo, Int32Array),
-        length: pick(u.i32[1] as Int32Array, uo, Int32Array),
-        instruction: pick(u.i32[2] as Int32Array, uo, Int32Array),
-        amount: pick(u.u16[0] as Uint16Array, uo, Uint16Array),
-        resource: pick(u.u32[0] as Uint32Array, uo, Uint32Array),
+        start: u.column(U_START, uo, Int32Array),
+        length: u.column(U_LEN, uo, Int32Array),
+        instruction: u.column(U_INST, uo, Int32Array),
+        amount: u.column(U_AMOUNT, uo, Uint16Array),
+        resource: u.column(U_RESOURCE, uo, Uint32Array),
       },
     }
   }
 }
 
 /** Row order by start cycle, stable: a counting sort, as starts are cycle numbers. */
-function order(start: Int32Array, n: number): Uint32Array {
+function order(t: Columns, k: number): Uint32Array {
+  const n = t.count
   let max = 0
-  for (let i = 0; i < n; i++) if ((start[i] ?? 0) > max) max = start[i] ?? 0
+  for (let i = 0; i < n; i++) max = Math.max(max, t.get(k, i))
   const counts = new Uint32Array(max + 2)
-  for (let i = 0; i < n; i++) counts[(start[i] ?? 0) + 1] = (counts[(start[i] ?? 0) + 1] ?? 0) + 1
-  for (let k = 1; k < counts.length; k++) counts[k] = (counts[k] ?? 0) + (counts[k - 1] ?? 0)
+  for (let i = 0; i < n; i++) {
+    const b = t.get(k, i) + 1
+    counts[b] = (counts[b] ?? 0) + 1
+  }
+  for (let b = 1; b < counts.length; b++) counts[b] = (counts[b] ?? 0) + (counts[b - 1] ?? 0)
   const idx = new Uint32Array(n)
   for (let i = 0; i < n; i++) {
-    const k = start[i] ?? 0
-    idx[counts[k] ?? 0] = i
-    counts[k] = (counts[k] ?? 0) + 1
+    const b = t.get(k, i)
+    idx[counts[b] ?? 0] = i
+    counts[b] = (counts[b] ?? 0) + 1
   }
   return idx
-}
-
-function pick<T extends Int32Array | Uint8Array | Uint16Array | Uint32Array>(
-  a: T,
-  idx: Uint32Array,
-  Make: new (n: number) => T,
-): T {
-  const out = new Make(idx.length)
-  for (let i = 0; i < idx.length; i++) out[i] = a[idx[i] ?? 0] ?? 0
-  return out
 }
