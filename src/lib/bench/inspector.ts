@@ -6,7 +6,9 @@
  * - the instructions in each phase, the stall reason, and which resources are
  *   busy (and by whom) are exact;
  * - execute progress (beats issued so far) is exact when the run recorded
- *   resource use: the lane's unit spans count the beats per cycle;
+ *   resource use: the lane's unit spans count the beats per cycle (for a
+ *   reduction they include the operations that combine the partials, so the
+ *   total can exceed the element beats);
  * - read and write progress are bounded: the trace keeps a phase's first and
  *   last cycle, and a lane moves at most one word per operand a cycle, so by
  *   cycle c at least `b - (end - c)` and at most `c - start + 1` of `b` words
@@ -161,7 +163,9 @@ export function inspectCycle(idx: TraceIndex, cycle: number): CycleState {
         if (start === NO_CYCLE || end === NO_CYCLE || cycle < start || cycle > end) return
         const exact = phase === 'exec' ? exactExec(cycle) : null
         const done = exact === null ? phaseBounds(beats, start, end, cycle, rate) : { lo: exact, hi: exact }
-        phases[phase].push({ index: ins.index, text: ins.text, done, total: beats, start, end })
+        // A reduction's unit also combines partials after its element beats: count those operations too.
+        const total = exact === null ? beats : Math.max(beats, exactExec(Number.MAX_SAFE_INTEGER) ?? 0)
+        phases[phase].push({ index: ins.index, text: ins.text, done, total, start, end })
       })
       // Operand queues exist from the first read until the last beat has taken its words.
       const readEnd = field(trace, pos, lane, 3)
@@ -169,7 +173,7 @@ export function inspectCycle(idx: TraceIndex, cycle: number): CycleState {
       if (readStart === NO_CYCLE || readEnd === NO_CYCLE || cycle < readStart) return
       const exact = exactExec(cycle)
       const issueEnd = field(trace, pos, lane, 5) - (latencyTail(trace, ins.unit) ?? 0)
-      const consumed = exact === null ? phaseBounds(beats, execStart, issueEnd, cycle, rate) : { lo: exact, hi: exact }
+      const consumed = exact === null ? phaseBounds(beats, execStart, issueEnd, cycle, rate) : { lo: Math.min(exact, beats), hi: Math.min(exact, beats) }
       if (consumed.lo >= beats) return
       const read = phaseBounds(beats, readStart, readEnd, cycle, rate)
       // A beat in cycle + 1 needs its words read by now; a queue never holds more than its depth.

@@ -46,3 +46,28 @@ describe('clampCycle', () => {
     expect(clampCycle(c, cycles)).toBe(expected)
   })
 })
+
+describe('shortcutFor', async () => {
+  const { shortcutFor, isTypingTarget, SHORTCUTS } = await import('@/lib/bench/shortcuts')
+  it.each([
+    [{ key: ' ' }, 'play'],
+    [{ key: 'ArrowRight' }, 'step-forward'],
+    [{ key: 'ArrowRight', shiftKey: true }, 'next-event'],
+    [{ key: 'ArrowLeft', shiftKey: true }, 'previous-event'],
+    [{ key: '?', shiftKey: true }, 'help'],
+    [{ key: 'r', ctrlKey: true }, null],
+    [{ key: 'x' }, null],
+  ])('maps %j to %s', (e, action) => {
+    expect(shortcutFor(e)).toBe(action)
+  })
+
+  it('gives every action exactly one entry in the help table', () => {
+    expect(new Set(SHORTCUTS.map((s) => s.action)).size).toBe(SHORTCUTS.length)
+  })
+
+  it('leaves keys typed into fields alone', () => {
+    expect(isTypingTarget({ tagName: 'INPUT' })).toBe(true)
+    expect(isTypingTarget({ tagName: 'DIV', isContentEditable: true })).toBe(true)
+    expect(isTypingTarget({ tagName: 'BUTTON', closest: () => null })).toBe(false)
+  })
+})

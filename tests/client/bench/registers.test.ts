@@ -111,3 +111,40 @@ describe('lmulText', () => {
     expect(lmulText(l)).toBe(t)
   })
 })
+
+describe('exportFile', async () => {
+  const { exportFile, fileBase } = await import('@/lib/bench/exports')
+  const r = singleAdd(16, { lanes: 2 })
+
+  it('writes CSV with one row per instruction and lane under the header (RFC 4180 line ends)', () => {
+    const f = exportFile('csv', { trace: r.trace, source: '', name: 'one add' })
+    expect(f.name).toBe('one-add.csv')
+    const lines = f.text.trimEnd().split('\r\n')
+    expect(lines.length).toBe(1 + r.trace.instructions.length * 2)
+  })
+
+  it('writes JSON with the machine, the cycles and the model-estimate note', () => {
+    const j = JSON.parse(exportFile('json', { trace: r.trace, source: '', name: 'x' }).text)
+    expect(j.machine.lanes).toBe(2)
+    expect(j.cycles).toBe(r.trace.cycles)
+    expect(j.note).toMatch(/not sign-off for silicon/)
+  })
+
+  it('writes a VCD that starts with the IEEE 1364-2005 header sections', () => {
+    const f = exportFile('vcd', { trace: r.trace, source: '', name: 'x', date: new Date(0) })
+    expect(f.text).toMatch(/^\$date/)
+    expect(f.text).toContain('$enddefinitions $end')
+  })
+
+  it('writes the program text ending in a newline, and needs no run for it', () => {
+    expect(exportFile('s', { trace: null, source: 'nop', name: 'p' })).toEqual({ name: 'p.s', type: 'text/plain', text: 'nop\n' })
+  })
+
+  it('refuses to export a trace before a run', () => {
+    expect(() => exportFile('csv', { trace: null, source: '', name: 'p' })).toThrow(/run the program first/)
+  })
+
+  it.each([['../etc/passwd', 'etc-passwd'], ['', 'chimeline'], ['saxpy', 'saxpy']])('makes a file name of %j: %j', (n, b) => {
+    expect(fileBase(n)).toBe(b)
+  })
+})

@@ -18,3 +18,23 @@ describe('the RISC-V V tokenizer', () => {
     expect(tokenizeLine(line)).toEqual(expected)
   })
 })
+
+describe('editorDiagnostics', () => {
+  it('underlines the word at the assembler’s line and column', async () => {
+    const { editorDiagnostics } = await import('@/lib/bench/diagnostics')
+    const { assemble } = await import('@shared/sim/isa')
+    const text = '    li a0, 4\n    vadd.vv v1, v2, q3\n'
+    const r = assemble(text)
+    expect(r.ok).toBe(false)
+    if (r.ok) return
+    const [d] = editorDiagnostics(text, r.errors)
+    expect(d?.where).toBe('line 2, column 21')
+    expect(text.slice(d!.from, d!.to)).toBe('q3')
+  })
+
+  it('clamps a position past the end of the text', async () => {
+    const { editorDiagnostics } = await import('@/lib/bench/diagnostics')
+    const [d] = editorDiagnostics('ab', [{ line: 9, column: 40, code: 'x', message: 'm' }])
+    expect(d).toMatchObject({ from: 2, to: 2 })
+  })
+})

@@ -1,0 +1,222 @@
+/**
+ * The Bench's state: the program text, the machine, the run and the view
+ * (cursor, zoom window, selected instruction and register). Derivations live
+ * in src/lib/bench; this store holds the state, calls them and runs the
+ * simulator Worker through useSimulator.
+ */
+import { computed, ref, shallowRef, watch } from 'vue'
+import { defineStore } from 'pinia'
+import { assemble } from '@shared/sim/isa'
+import { checkMachine, defaultMachine, parseMachine, type Machine } from '@shared/schemas/machine'
+import { PRESETS } from '@shared/sim/presets'
+import { useSimulator, type UseSimulatorOptions } from '@/composables/useSimulator'
+import { clampCycle, nextEvent, previousEvent, scrubberEvents } from '@/lib/bench/events'
+import { exampleList, type Example } from '@/lib/bench/examples'
+import { indexTrace, inspectCycle } from '@/lib/bench/inspector'
+import { instructionRows } from '@/lib/bench/instructionRows'
+import { issuesByField, machineSummary, setField } from '@/lib/bench/machineFields'
+import { dependenciesOf, registerUse, writtenRegisters } from '@/lib/bench/registerUse'
+import { explainStalls } from '@/lib/bench/stallExplanation'
+import { EMPTY_VIEW, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
+
+const exampleFiles = import.meta.glob<string>('/examples/*.s', { query: '?raw', import: 'default', eager: true })
+export const EXAMPLES: Example[] = exampleList(exampleFiles)
+
+/** Milliseconds after the last edit before an automatic run. */
+export const AUTO_RUN_DELAY = 500
+/** Play speeds of the Cycle scrubber, in cycles a second. */
+export const PLAY_SPEEDS = [2, 5, 10, 25, 50, 100] as const
+
+/** Performance API marks: Run asked for, and the chart drawn for its trace (scripts/bench/ui-run.ts reads them). */
+export const RUN_MARK = 'chimeline:run'
+export const DRAWN_MARK = 'chimeline:chart-drawn'
+export const RUN_TO_CHART = 'chimeline:run-to-chart'
+
+export interface BenchStoreOptions {
+  simulator?: UseSimulatorOptions
+}
+
+let storeOptions: BenchStoreOptions = {}
+/** Lets tests give the store a Worker of their own before its first use. */
+export function configureBenchStore(options: BenchStoreOptions): void {
+  storeOptions = options
+}
+
+export const useBenchStore = defineStore('bench', () => {
+  const firstExample = EXAMPLES[0]
+  const exampleId = ref<string | null>(firstExample?.id ?? null)
+  const source = ref(firstExample?.source ?? '')
+  const presetId = ref<string | null>(PRESETS[1]?.id ?? null)
+  /** What the form holds: may be invalid (then it is not run). */
+  const machineDraft = ref<Machine>(parseMachine(PRESETS[1]?.machine ?? {}))
+  const autoRun = ref(true)
+  const sim = useSimulator(storeOptions.simulator)
+
+  const cursor = ref<number | null>(null)
+  const window = ref<CycleWindow | null>(null)
+  const selected = ref<number | null>(null)
+  const selectedRegister = ref<number | null>(null)
+  const subRows = ref(false)
+  const showDependencies = ref(false)
+  const playing = ref(false)
+  const speed = ref<number>(10)
+  /** performance.now() when the last run was asked for, for the Run-to-chart measurement. */
+  const runStartedAt = shallowRef<number | null>(null)
+  /** Runs that returned a trace: the view and the tests see a re-run by it. */
+  const runs = ref(0)
+
+  const assembled = computed(() => assemble(source.value))
+  const program = computed(() => (assembled.value.ok ? assembled.value.program : null))
+  const machineCheck = computed(() => checkMachine(machineDraft.value))
+  const machine = computed(() => (machineCheck.value.ok ? machineCheck.value.machine : null))
+  const fieldErrors = computed(() => (machineCheck.value.ok ? {} : issuesByField(machineCheck.value.issues)))
+  const summary = computed(() => machineSummary(machine.value ?? machineDraft.value))
+  const preset = computed(() => PRESETS.find((p) => p.id === presetId.value) ?? null)
+
+  const trace = sim.trace
+  const traceIndex = computed(() => (trace.value ? indexTrace(trace.value) : null))
+  const events = computed(() => (trace.value ? scrubberEvents(trace.value) : new Int32Array()))
+  const explanation = computed(() => (trace.value ? explainStalls(trace.value) : null))
+  const rows = computed(() => (trace.value ? instructionRows(trace.value) : []))
+  /** The program the trace came from: register use needs its operands. */
+  const tracedProgram = shallowRef<ReturnType<typeof assemble> | null>(null)
+  const uses = computed(() => {
+    const p = tracedProgram.value
+    return trace.value && p?.ok ? registerUse(trace.value, p.program) : []
+  })
+  const registers = computed(() => writtenRegisters(uses.value))
+  const dependencies = computed(() => (selected.value === null ? [] : dependenciesOf(uses.value, selected.value)))
+  const cycleState = computed(() => (traceIndex.value && cursor.value !== null ? inspectCycle(traceIndex.value, cursor.value) : null))
+
+  // Selecting an instruction shows its destination register's values in the inspector.
+  watch(selected, (index) => {
+    const first = uses.value.find((u) => u.index === index)?.writes[0]
+    if (first !== undefined) selectedRegister.value = first
+  })
+
+  async function run(): Promise<void> {
+    if (!machine.value) return
+    runStartedAt.value = performance.now()
+    performance.mark(RUN_MARK)
+    tracedProgram.value = assembled.value
+    await sim.run(source.value, machine.value)
+    const t = trace.value
+    if (!t) return
+    runs.value++
+    // Keep the view when it still fits the new run (a changed machine), else start at cycle 0.
+    if (cursor.value === null || cursor.value >= t.cycles) cursor.value = 0
+    if (selected.value !== null && !t.instructions.some((i) => i.index === selected.value)) selected.value = null
+    if (window.value && window.value.start >= t.cycles) window.value = null
+  }
+
+  let autoTimer: ReturnType<typeof setTimeout> | null = null
+  function scheduleRun(): void {
+    if (autoTimer) clearTimeout(autoTimer)
+    autoTimer = setTimeout(() => {
+      autoTimer = null
+      if (autoRun.value && assembled.value.ok && machine.value) void run()
+    }, AUTO_RUN_DELAY)
+  }
+  watch([source, machineDraft], scheduleRun, { deep: true })
+  watch(autoRun, (on) => {
+    if (on) scheduleRun()
+  })
+
+  function loadExample(id: string): void {
+    const ex = EXAMPLES.find((e) => e.id === id)
+    if (!ex) return
+    exampleId.value = id
+    source.value = ex.source
+    cursor.value = null
+    selected.value = null
+    window.value = null
+  }
+
+  function setSource(text: string): void {
+    source.value = text
+  }
+
+  function applyPreset(id: string): void {
+    const p = PRESETS.find((x) => x.id === id)
+    if (!p) return
+    presetId.value = id
+    machineDraft.value = parseMachine(p.machine)
+  }
+
+  /** Back to the chosen preset's values, or the handbook defaults without one. */
+  function resetMachine(): void {
+    machineDraft.value = preset.value ? parseMachine(preset.value.machine) : structuredClone(defaultMachine)
+  }
+
+  function setMachineField(path: string, value: unknown): void {
+    machineDraft.value = setField(machineDraft.value, path, value)
+  }
+
+  const cycles = computed(() => trace.value?.cycles ?? 0)
+  function setCursor(c: number | null): void {
+    cursor.value = c === null ? null : clampCycle(c, cycles.value)
+  }
+  function step(delta: number): void {
+    setCursor((cursor.value ?? 0) + delta)
+  }
+  function toNextEvent(): void {
+    const n = nextEvent(events.value, cursor.value ?? -1)
+    if (n !== null) setCursor(n)
+  }
+  function toPreviousEvent(): void {
+    const p = previousEvent(events.value, cursor.value ?? 0)
+    if (p !== null) setCursor(p)
+  }
+
+  let playTimer: ReturnType<typeof setInterval> | null = null
+  function stopTimer(): void {
+    if (playTimer) clearInterval(playTimer)
+    playTimer = null
+  }
+  function play(): void {
+    stopTimer()
+    if (!trace.value) return
+    if ((cursor.value ?? 0) >= cycles.value - 1) setCursor(0)
+    playing.value = true
+    playTimer = setInterval(() => {
+      if ((cursor.value ?? 0) >= cycles.value - 1) pause()
+      else step(1)
+    }, 1000 / speed.value)
+  }
+  function pause(): void {
+    stopTimer()
+    playing.value = false
+  }
+  function togglePlay(): void {
+    if (playing.value) pause()
+    else play()
+  }
+  watch(speed, () => {
+    if (playing.value) play()
+  })
+
+  const view = computed<BenchView>(() => ({ cursor: cursor.value, window: window.value, selected: selected.value }))
+  function setView(v: BenchView): void {
+    cursor.value = v.cursor
+    window.value = v.window
+    selected.value = v.selected
+  }
+
+  function $reset(): void {
+    pause()
+    if (autoTimer) clearTimeout(autoTimer)
+    loadExample(firstExample?.id ?? '')
+    applyPreset(PRESETS[1]?.id ?? '')
+    setView(EMPTY_VIEW)
+    autoRun.value = true
+    selectedRegister.value = null
+  }
+
+  return {
+    exampleId, source, presetId, machineDraft, autoRun, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
+    assembled, program, machine, fieldErrors, summary, preset, trace, traceIndex, events, explanation, rows, uses, registers, dependencies, cycleState, cycles, view,
+    functional: sim.functional, error: sim.error, progress: sim.progress, running: sim.running,
+    run, cancel: sim.cancel, scheduleRun, loadExample, setSource, applyPreset, resetMachine, setMachineField,
+    setCursor, step, toNextEvent, toPreviousEvent, play, pause, togglePlay, setView, $reset,
+  }
+})
