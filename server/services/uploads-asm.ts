@@ -36,7 +36,9 @@ export function instructionsToAssembly(instructions: Instruction[], header: stri
     if (label) lines.push(`${label}:`)
     const info = opInfo(ins.op) as OpInfo
     const target = ins.address + (ins.operands.imm ?? 0)
-    lines.push(`  ${formatInstruction(info, ins.operands, ins.address, targets.get(target))}`)
+    // formatInstruction writes a target as objdump does ("1c <name>"); the assembler takes the bare label.
+    const text = formatInstruction(info, ins.operands, ins.address, targets.get(target)).replace(/[0-9a-f]+ <([^>]+)>$/, '$1')
+    lines.push(`  ${text}`)
   }
   const text = `${lines.join('\n')}\n`
   const again = assemble(text)
