@@ -97,7 +97,7 @@ export interface ChartLayout {
   readonly stallBands: IndexLists
   /** Groups of each instruction (by position in trace.instructions). */
   readonly groupsByInstruction: IndexLists
-  /** Colour slot of each instruction: the rank of its static instruction among those drawn; -1 when it has no bars. */
+  /** Colour slot of each instruction: the rank of its static instruction among those drawn; -1 when it has no phase bars. */
   readonly colourOf: Int32Array
   /** The static instructions in colour order: position of their first dynamic instance. */
   readonly colourInstruction: Int32Array
@@ -280,12 +280,15 @@ export function buildLayout(trace: TimingTrace, options: LayoutOptions = {}): Ch
 
   const groupsByInstruction = lists(n, (g) => gInstr[g]!, groupCount)
 
-  // Only instructions with bars take a colour: a vset* drawn nowhere would waste a colour-blind-safe slot.
+  // Only instructions with phase bars take a colour: a vset* drawn nowhere, or only as
+  // the grey of a stall, would waste a colour-blind-safe slot.
+  const hasPhase = new Uint8Array(n)
+  for (let b = 0; b < count; b++) if (bars.kind[b] !== STALL_KIND) hasPhase[gInstr[bars.group[b]!]!] = 1
   const colourOf = new Int32Array(n).fill(-1)
   const slotOfStatic = new Map<number, number>()
   const colourInstruction: number[] = []
   trace.instructions.forEach((ins, pos) => {
-    if (groupsByInstruction.offsets[pos] === groupsByInstruction.offsets[pos + 1]) return
+    if (!hasPhase[pos]) return
     let slot = slotOfStatic.get(ins.staticIndex)
     if (slot === undefined) {
       slot = colourInstruction.push(pos) - 1
@@ -340,4 +343,30 @@ export function bandCount(layout: ChartLayout): number {
 
 export function stallReasonName(code: number): string {
   return STALL_REASONS[code] ?? 'unknown'
+}
+
+/** The same bars with another track height (the chart fits its height to the lanes it shows). */
+export function withTrackHeight(layout: ChartLayout, trackHeight: number): ChartLayout {
+  if (!(trackHeight > 0)) throw new RangeError(`trackHeight must be positive, got ${trackHeight}`)
+  if (trackHeight === layout.trackHeight) return layout
+  const rowHeight = layout.tracks * trackHeight
+  const laneHeight = rowHeight * layout.rowsPerLane
+  return {
+    ...layout,
+    trackHeight,
+    laneHeight,
+    height: layout.laneCount === 0 ? 0 : layout.laneCount * laneHeight + (layout.laneCount - 1) * layout.laneGap,
+    rows: layout.rows.map((r, i) => ({ ...r, y: r.lane * (laneHeight + layout.laneGap) + (i % layout.rowsPerLane) * rowHeight, height: rowHeight })),
+  }
+}
+
+/**
+ * A track height that fits the lanes into about `target` pixels, between 4
+ * and 14 pixels a track (below 4 a bar cannot be hovered, above 14 it only
+ * takes room).
+ */
+export function fittedTrackHeight(layout: ChartLayout, target: number): number {
+  const tracks = layout.laneCount * layout.rowsPerLane * layout.tracks
+  const gaps = Math.max(0, layout.laneCount - 1) * layout.laneGap
+  return Math.max(4, Math.min(14, Math.floor((target - gaps) / Math.max(1, tracks))))
 }

@@ -160,3 +160,18 @@ export function instructionBars(layout: ChartLayout, position: number): number[]
   }
   return out
 }
+
+/** Given bars (e.g. one instruction's) as they are, without merging: for drawing a selection on top. */
+export function barsDrawList(layout: ChartLayout, scale: CycleScale, bars: readonly number[]): DrawList {
+  const out = new Builder()
+  const { start: w0, end: w1 } = scale.window
+  for (const b of bars) {
+    const s = layout.bars.start[b]!
+    const e = layout.bars.end[b]!
+    if (e <= w0 || s >= w1) continue
+    const slot = layout.colourOf[layout.groups.instruction[layout.bars.group[b]!]!]! + 1
+    const x0 = scale.toPx(s)
+    out.push(x0, bandY(layout, layout.bars.band[b]!), Math.max(1, scale.toPx(e) - x0), layout.trackHeight, colourKey(slot, layout.bars.kind[b]!), b)
+  }
+  return out.done()
+}

@@ -15,7 +15,12 @@ export interface Tick {
   /** Pixel of the middle of the cycle column. */
   x: number
   label: string
+  /** How to anchor the label so that it stays on the plot: at the edges it hangs inwards. */
+  anchor: 'start' | 'middle' | 'end'
 }
+
+/** Half the width of a label, in pixels, taken as 7 px a character of the 11 px mono face. */
+const halfLabel = (label: string) => label.length * 3.5
 
 export function formatCycle(cycle: number): string {
   return Math.round(cycle).toLocaleString('en-US')
@@ -28,7 +33,10 @@ export function cycleTicks(scale: CycleScale, spacing = 80): Tick[] {
   const out: Tick[] = []
   for (const c of ticks(Math.ceil(start), Math.floor(end - 1e-9), count)) {
     if (!Number.isInteger(c) || c < start || c >= end) continue
-    out.push({ cycle: c, x: scale.toPx(c + 0.5), label: formatCycle(c) })
+    const x = scale.toPx(c + 0.5)
+    const label = formatCycle(c)
+    const anchor = x < halfLabel(label) ? 'start' : x > scale.width - halfLabel(label) ? 'end' : 'middle'
+    out.push({ cycle: c, x, label, anchor })
   }
   return out
 }

@@ -104,7 +104,7 @@ export function exportScene(trace: TimingTrace, layout: ChartLayout, window: Cyc
   items.push({ type: 'line', x1: plotX, y1: rulerY, x2: plotX + plotWidth, y2: rulerY, stroke: theme.grid, width: 1 })
   for (const tick of cycleTicks(scale)) {
     items.push({ type: 'line', x1: plotX + tick.x, y1: rulerY - 4, x2: plotX + tick.x, y2: plotY + layout.height, stroke: theme.grid, width: 0.5 })
-    text(plotX + tick.x, rulerY - 7, tick.label, 11, 'mono', theme.muted, { anchor: 'middle' })
+    text(plotX + tick.x, rulerY - 7, tick.label, 11, 'mono', theme.muted, { anchor: tick.anchor })
   }
 
   for (const row of layout.rows) {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { bandY, buildLayout, STALL_KIND, type ChartLayout } from '@/lib/lanechart/layout'
+import { bandY, buildLayout, fittedTrackHeight, STALL_KIND, withTrackHeight, type ChartLayout } from '@/lib/lanechart/layout'
 import { buildTrace, twoLaneTrace } from './buildTrace'
 
 /** Bars of one (instruction position, lane) as [kind, start, end] sorted, for readable expectations. */
@@ -82,6 +82,13 @@ describe('lane chart layout', () => {
     expect(Array.from(layout.colourInstruction)).toEqual([0, 1, 3])
   })
 
+  it('gives no colour to an instruction drawn only as a stall', () => {
+    const trace = buildTrace({ lanes: 1, cycles: 10, instructions: [{ lanes: [null] }, { lanes: [[1, 1, 4, 4, null, null, null, null]] }], stalls: [[0, 0, 3, 'frontend', 0]] })
+    const layout = buildLayout(trace)
+    expect(layout.groups.count).toBe(2)
+    expect(Array.from(layout.colourOf)).toEqual([-1, 0])
+  })
+
   it('stacks lanes with a gap and tracks inside them', () => {
     const layout = buildLayout(twoLaneTrace(), { trackHeight: 10, laneGap: 4 })
     expect(layout.tracks).toBe(2)
@@ -97,5 +104,24 @@ describe('lane chart layout', () => {
 
   it('refuses a track height of zero', () => {
     expect(() => buildLayout(twoLaneTrace(), { trackHeight: 0 })).toThrow(/trackHeight must be positive/)
+  })
+})
+
+describe('track height', () => {
+  it('re-heights a layout without moving its bars between bands', () => {
+    const layout = buildLayout(twoLaneTrace(), { trackHeight: 10 })
+    const taller = withTrackHeight(layout, 20)
+    expect(taller.bars).toBe(layout.bars)
+    expect(taller.height).toBe(2 * 40 + 4)
+    expect(taller.rows.map((r) => r.y)).toEqual([0, 44])
+    expect(bandY(taller, 3)).toBe(44 + 20)
+  })
+
+  it.each([
+    { lanes: 2, target: 400, expected: 14, why: 'few tracks stop at 14 px' },
+    { lanes: 2, target: 44, expected: 10, why: 'a tight target shares the height out' },
+    { lanes: 2, target: 10, expected: 4, why: 'a tiny target stops at 4 px' },
+  ])('fits the track height to the target: $why', ({ target, expected }) => {
+    expect(fittedTrackHeight(buildLayout(twoLaneTrace()), target)).toBe(expected)
   })
 })

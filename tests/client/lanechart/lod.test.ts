@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { bandCount, buildLayout } from '@/lib/lanechart/layout'
-import { colourKey, drawList, instructionBars, keyKind, keySlot, MIXED_SLOT } from '@/lib/lanechart/lod'
+import { barsDrawList, colourKey, drawList, instructionBars, keyKind, keySlot, MIXED_SLOT } from '@/lib/lanechart/lod'
 import { cycleScale } from '@/lib/lanechart/window'
 import { buildTrace, twoLaneTrace } from './buildTrace'
 
@@ -77,5 +77,15 @@ describe('level of detail', () => {
 
   it('refuses a minimum width of zero', () => {
     expect(() => drawList(buildLayout(twoLaneTrace()), cycleScale({ start: 0, end: 20 }, 200), { minWidth: 0 })).toThrow(/minWidth must be positive/)
+  })
+})
+
+describe('selection draw list', () => {
+  it('gives the visible bars of an instruction unmerged, at least a pixel wide', () => {
+    const layout = buildLayout(twoLaneTrace())
+    const list = barsDrawList(layout, cycleScale({ start: 0, end: 2000 }, 200), instructionBars(layout, 1))
+    expect(list.count).toBe(7)
+    expect(Math.min(...list.w)).toBe(1)
+    expect(barsDrawList(layout, cycleScale({ start: 15, end: 20 }, 200), instructionBars(layout, 1)).count).toBe(0)
   })
 })

@@ -13,8 +13,18 @@ describe('cycle ruler', () => {
 
   it('places a tick in the middle of its cycle column', () => {
     const [tick] = cycleTicks(cycleScale({ start: 0, end: 4 }, 400))
-    expect(tick).toEqual({ cycle: 0, x: 50, label: '0' })
+    expect(tick).toEqual({ cycle: 0, x: 50, label: '0', anchor: 'middle' })
   })
+
+  it.each([
+    // Cycle 0 sits at x = 0.015 px: a centred label would hang off the left edge.
+    ['the first label, at the left edge', { start: 0, end: 40_000 }, 0, 'start'],
+    // Cycle 38,000 sits 18 px from the right edge of 1,200 px over 38,600 cycles: too close to centre.
+    ['the last label, near the right edge', { start: 0, end: 38_600 }, -1, 'end'],
+  ] as const)('hangs %s inwards', (_what, w, at, anchor) => {
+    expect(cycleTicks(cycleScale(w, 1200)).at(at)!.anchor).toBe(anchor)
+  })
+
 
   it.each([
     [7, '7'],
