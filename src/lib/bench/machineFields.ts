@@ -138,18 +138,19 @@ export function getField(machine: MachineInput | Machine, path: string): unknown
   return v
 }
 
-/** A copy of `machine` with one dotted field set; the input is not changed. */
+/**
+ * A copy of `machine` with one dotted field set; the input is not changed.
+ * Only the objects along the path are copied (spread), so this works on
+ * reactive proxies too, which structuredClone refuses.
+ */
 export function setField<T extends MachineInput | Machine>(machine: T, path: string, value: unknown): T {
   const keys = path.split('.')
-  const copy = structuredClone(machine) as Record<string, unknown>
-  let o = copy
-  keys.slice(0, -1).forEach((k) => {
-    const next = o[k]
-    o[k] = next && typeof next === 'object' ? { ...(next as object) } : {}
-    o = o[k] as Record<string, unknown>
-  })
-  o[keys[keys.length - 1] as string] = value
-  return copy as T
+  const set = (o: unknown, i: number): unknown => {
+    const obj = o && typeof o === 'object' ? (o as Record<string, unknown>) : {}
+    const k = keys[i] as string
+    return { ...obj, [k]: i === keys.length - 1 ? value : set(obj[k], i + 1) }
+  }
+  return set(machine, 0) as T
 }
 
 /** Validation issues by dotted field name, for messages under each field. */

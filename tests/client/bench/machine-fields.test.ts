@@ -45,6 +45,13 @@ describe('setField', () => {
     expect(defaultMachine.units.fpu.latency).toBe(4)
     expect(changedFields(defaultMachine, m)).toEqual(['units.fpu.latency'])
   })
+
+  it('works on a reactive proxy, which structuredClone cannot copy', async () => {
+    const { reactive } = await import('vue')
+    const m = setField(reactive(structuredClone(defaultMachine)), 'lanes', 4)
+    expect(m.lanes).toBe(4)
+    expect(m.units.fpu.latency).toBe(4)
+  })
 })
 
 describe('validation messages by field', () => {
