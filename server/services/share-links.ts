@@ -117,10 +117,17 @@ export async function emailShareLink(ctx: AppContext, user: User, workspaceId: s
  */
 export async function openShare(token: string, reader: User | null): Promise<SharedScenario> {
   const tokenHash = hashToken(token)
-  const link = await ShareLink.findOne({ where: { tokenHash }, include: [{ model: ScenarioVersion, as: 'version', required: true }] })
+  // One query (joins) for the link, its version, scenario and live workspace: the endpoint is the hot path of every shared URL.
+  const link = (await ShareLink.findOne({
+    where: { tokenHash },
+    include: [
+      { model: ScenarioVersion, as: 'version', required: true },
+      { model: Scenario, as: 'scenario', required: false, attributes: ['id', 'deletedAt', 'workspaceId'], include: [{ model: Workspace, as: 'workspace', required: false, attributes: ['id', 'name'] }] },
+    ],
+  })) as (ShareLink & { scenario?: (Scenario & { workspace?: Workspace | null }) | null }) | null
   if (!link) throw errors.notFound('share link')
-  const scenario = await Scenario.findByPk(link.scenarioId, { include: [{ model: Workspace, as: 'workspace', required: false }] })
-  const workspace = (scenario as (Scenario & { workspace?: Workspace | null }) | null)?.workspace
+  const scenario = link.scenario
+  const workspace = scenario?.workspace
   if (link.revokedAt || !scenario || scenario.deletedAt || !workspace) {
     throw new ApiError(410, 'share_revoked', 'This share link was revoked; ask its sender for a new one')
   }
