@@ -64,3 +64,42 @@ test.describe('the Scenarios page', () => {
     expect(problems.filter((p) => !(p.includes('status of 400') && p.endsWith('/uploads)')))).toEqual([])
   })
 })
+
+test.describe('versions and workspace settings', () => {
+  test('the history panel shows what a version changed: program lines, machine fields, metrics', async ({ page, request }) => {
+    const run = `e2e${Date.now().toString(36)}`
+    const token = await accessToken(request, DEMO.owner)
+    const ws = await workspaceId(request, token)
+    const s = await createScenario(request, token, ws, { title: `${run} history`, program: SAXPY })
+    const res = await request.post(`/api/workspaces/${ws}/scenarios/${s.id}/versions`, {
+      headers: { Authorization: `Bearer ${token}` },
+      data: { baseVersion: 1, message: 'four lanes', content: { title: `${run} history`, program: SAXPY.replace('# elements left', '# elements to go'), machine: { lanes: 4 } } },
+    })
+    expect(res.status()).toBe(201)
+
+    await signIn(page, DEMO.owner)
+    await page.goto(`/bench?scenario=${s.id}`)
+    await expect(page.getByTestId('scenario-title')).toHaveText(`${run} history`)
+    await page.getByRole('button', { name: 'History' }).click()
+    const diff = page.getByTestId('version-diff')
+    await expect(diff).toContainText('# elements to go')
+    await expect(diff).toContainText('lanes')
+    await expect(diff).toContainText('cycles')
+    await expect(page.getByTestId('version-list')).toContainText('four lanes')
+    await expect(diff).not.toContainText('did not run')
+    await screenshot(page, 'scenario-history')
+  })
+
+  test('the owner sees members with their roles and can invite by e-mail', async ({ page }) => {
+    await signIn(page, DEMO.owner)
+    await page.goto('/workspace/settings')
+    const members = page.getByTestId('members-table')
+    for (const who of [DEMO.owner, DEMO.editor, DEMO.viewer]) await expect(members).toContainText(who)
+    const invitee = `new-${Date.now().toString(36)}@example.org`
+    await page.getByLabel('E-mail').fill(invitee)
+    await page.getByRole('button', { name: 'Send invitation' }).click()
+    await expect(page.getByText(`Invitation sent to ${invitee}.`)).toBeVisible()
+    await expect(page.getByTestId('pending-invitations')).toContainText(invitee)
+    await screenshot(page, 'workspace-settings')
+  })
+})
