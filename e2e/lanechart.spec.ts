@@ -7,7 +7,9 @@
  */
 import { expect, test, type Locator, type Page } from '@playwright/test'
 import { createServer, type ViteDevServer } from 'vite'
-import { screenshot } from './helpers/screenshots'
+import fs from 'node:fs'
+import path from 'node:path'
+import { screenshot, SCREENSHOT_DIR } from './helpers/screenshots'
 
 let server: ViteDevServer
 let base: string
@@ -123,6 +125,7 @@ test('the dependency overlay draws arrows from producers to consumers of the sel
   await chart.locator('g[data-lane="0"][data-instruction="3"] rect').first().click()
   // vfmacc.vf v16, fa0, v8 reads v8 (load 1) and v16 (load 2); the store (4) reads its v16: 3 pairs, in each of 8 lanes.
   await expect(chart.getByTestId('lane-chart-arrow')).toHaveCount(24)
+  await screenshot(page, 'lanechart-dependencies-light')
   await page.locator('#deps').uncheck()
   await expect(chart.getByTestId('lane-chart-arrow')).toHaveCount(0)
 })
@@ -212,7 +215,12 @@ test('the chart exports a standalone SVG with a legend and the machine summary, 
   expect(parsed).toBe(true)
   await page.locator('#export-png').click()
   // A PNG starts with the 8-byte signature 137 80 78 71 13 10 26 10 (ISO/IEC 15948, section 5.2).
-  await expect(page.locator('#exported')).toHaveValue(/^image\/png \d+ 137,80,78,71,13,10,26,10$/)
+  // Encoding a 2x picture takes a moment on a busy machine.
+  await expect(page.locator('#exported')).toHaveValue(/^image\/png \d+ 137,80,78,71,13,10,26,10$/, { timeout: 20_000 })
+  // Saved with the screenshots, to be looked at.
+  fs.mkdirSync(SCREENSHOT_DIR, { recursive: true })
+  fs.writeFileSync(path.join(SCREENSHOT_DIR, 'lanechart-export.png'), Buffer.from(await page.locator('#png-base64').inputValue(), 'base64'))
+  fs.writeFileSync(path.join(SCREENSHOT_DIR, 'lanechart-export.svg'), svg)
 })
 
 test('the chart takes focus with a visible ring and says what it shows', async ({ page }) => {
@@ -230,7 +238,14 @@ test('light and dark themes (screenshots to look at)', async ({ page }) => {
     const chart = await probe(page, `example=stencil&lanes=8&theme=${theme}`)
     await pointAt(page, chart.locator('g[data-lane="1"][data-instruction="3"] rect').first())
     await screenshot(page, `lanechart-stencil-${theme}`)
-    await probe(page, `example=long-stream&lanes=8&theme=${theme}`)
+    const long = await probe(page, `example=long-stream&lanes=8&theme=${theme}`)
+    // Zoomed in, with an instruction selected on the canvas.
+    await long.focus()
+    for (let i = 0; i < 8; i++) await page.keyboard.press('+')
+    const box = (await long.locator('.lc-bars').boundingBox())!
+    // Try a few places on lane 0's first track until one lands on a bar.
+    for (let k = 0; k < 10 && !(await page.locator('#selected').textContent()); k++) await page.mouse.click(box.x + box.width * (0.4 + k * 0.02), box.y + 4)
+    await expect(page.locator('#selected')).not.toHaveText('')
     await screenshot(page, `lanechart-long-${theme}`)
   }
 })

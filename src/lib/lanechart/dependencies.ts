@@ -2,8 +2,9 @@
  * Arrows of the dependency overlay: for the selected instruction, from each
  * producer to each consumer it takes part in, drawn in every lane where both
  * are active, from the producer's first written word (its write phase start,
- * else the end of its last phase) to the consumer's first read (its read
- * phase start, else its first phase). The trace carries no register operands,
+ * else the end of its last phase) to the consumer's first read that can take
+ * it: the cycle after that write, kept within the consumer's read phase (or
+ * the consumer's first phase when it has no reads). The trace carries no register operands,
  * so the pairs come from the caller (the Bench derives them from the program).
  *
  * @example
@@ -26,7 +27,7 @@ export interface Arrow {
   /** Middle of the producer's first written cycle. */
   fromCycle: number
   fromY: number
-  /** Middle of the consumer's first read cycle. */
+  /** Middle of the consumer's first read cycle that can take the produced word. */
   toCycle: number
   toY: number
 }
@@ -66,13 +67,16 @@ export function dependencyArrows(trace: TimingTrace, layout: ChartLayout, pairs:
       const produced = tp.writeStart !== null ? { cycle: tp.writeStart, row: 2 } : { cycle: tp.execEnd ?? tp.readEnd, row: tp.execEnd !== null ? 1 : 0 }
       const consumed = tc.readStart !== null ? { cycle: tc.readStart, row: 0 } : { cycle: tc.execStart ?? tc.writeStart, row: tc.execStart !== null ? 1 : 2 }
       if (produced.cycle === null || consumed.cycle === null) continue
+      // A consumer reads a word at the earliest the cycle after its producer wrote it (chaining),
+      // so the arrow points there, within the consumer's reads; its first read may be of another operand.
+      const toCycle = tc.readStart !== null && tc.readEnd !== null ? Math.min(tc.readEnd, Math.max(consumed.cycle, produced.cycle + 1)) : consumed.cycle
       out.push({
         from: pair.from,
         to: pair.to,
         lane,
         fromCycle: produced.cycle + 0.5,
         fromY: centreY(layout, gp, produced.row),
-        toCycle: consumed.cycle + 0.5,
+        toCycle: toCycle + 0.5,
         toY: centreY(layout, gc, consumed.row),
       })
     }

@@ -135,7 +135,7 @@ export function exportScene(trace: TimingTrace, layout: ChartLayout, window: Cyc
     }
     // Phases, shown on the first colour, and the stall hatching.
     PHASES.forEach((phase, k) => swatch(PAD + k * 110, y, palette.keyColour(colourKey(1, k)), phase))
-    swatch(PAD + 330, y, theme.stall, 'stall (reason on hover)', true)
+    swatch(PAD + 330, y, theme.stall, 'stall', true)
     y += 20
     const max = options.legendEntries ?? 16
     const columns = Math.max(1, Math.floor((options.width - 2 * PAD) / 260))

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { dependencyArrows } from '@/lib/lanechart/dependencies'
 import { buildLayout } from '@/lib/lanechart/layout'
-import { twoLaneTrace } from './buildTrace'
+import { buildTrace, twoLaneTrace } from './buildTrace'
 
 const trace = twoLaneTrace()
 const pairs = [{ from: 1, to: 2 }, { from: 2, to: 3 }]
@@ -25,6 +25,19 @@ describe('dependency arrows', () => {
     const [arrow] = dependencyArrows(trace, layout, [{ from: 1, to: 3 }], 1)
     // Lane 0: 2 tracks a sub-row; write row starts at 40, read row at 0.
     expect(arrow).toMatchObject({ fromY: 45, toY: 5, fromCycle: 7.5, toCycle: 12.5 })
+  })
+
+  it('points at the first read after the producer wrote, not at an earlier read of another operand', () => {
+    const t = buildTrace({
+      lanes: 1, cycles: 30,
+      instructions: [
+        { lanes: [[1, 1, null, null, 2, 9, 10, 12]] },
+        { lanes: [[1, 1, 4, 20, 5, 22, 23, 24]] },
+      ],
+    })
+    const [arrow] = dependencyArrows(t, buildLayout(t), [{ from: 0, to: 1 }], 1)
+    // The consumer starts reading at 4 (its other operand); the produced word is first written at 10, read at 11.
+    expect(arrow).toMatchObject({ fromCycle: 10.5, toCycle: 11.5 })
   })
 
   it('skips pairs that name instructions the trace does not have', () => {
