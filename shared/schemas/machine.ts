@@ -37,8 +37,8 @@ function bool(def: boolean, help: string) {
 
 export const ISSUE_POLICIES = ['serial', 'lockstep', 'staggered'] as const
 export type IssuePolicy = (typeof ISSUE_POLICIES)[number]
-// The handbook's optional 'tree' combine is not offered (yet): only what the engine times is accepted.
-export const INTER_LANE = ['ring'] as const
+/** How an unordered reduction combines its lane partials (timing model section 8): a ring walk, or a log2 L tree. */
+export const INTER_LANE = ['ring', 'tree'] as const
 
 const unitLatency = (def: number, what: string) =>
   z.object({ latency: intIn(1, 32, def, `Pipeline latency of the ${what} unit in cycles.`) }).prefault({})

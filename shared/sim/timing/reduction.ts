@@ -2,7 +2,8 @@
  * Reductions (handbook section 8). Unordered: each lane folds its beats into
  * `reductionAccumulators` partials used round-robin, combines them pairwise,
  * then the lane partials walk down the ring from the highest active lane to
- * lane 0, where vs1[0] is added and vd[0] written. Ordered (vfredosum): one
+ * lane 0 (or, with `interLane: 'tree'`, meet pairwise in log2 L levels, a level
+ * k hop crossing 2^k links), where vs1[0] is added and vd[0] written. Ordered (vfredosum): one
  * running value visits the elements in order, lane to lane over the ring.
  */
 import type { VectorOp } from '../exec/stream'
@@ -33,6 +34,18 @@ export class ReductionInst extends Inst {
   private stage = STAGE_LANES
   private pos = 0
   private valueAt = 0
+  /**
+   * `interLane: 'tree'`: per lane, its level (0..levels), the cycle its running
+   * value is ready (-1 before its lane partial), and per lane and level the cycle
+   * the partner's value arrives (-1 while none is on its way; a value that arrives
+   * before the lane reached that level waits in its input for that level). At level k lane l sends to l - 2^k when
+   * bit k of l is set, and otherwise adds what lane l + 2^k sends, if that lane is active.
+   */
+  private readonly tree: boolean
+  private readonly levels: number
+  private readonly tLevel: Int8Array
+  private readonly tVal: Int32Array
+  private readonly tIn: Int32Array
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
     super(ctx, op, 'arith')
@@ -58,6 +71,11 @@ export class ReductionInst extends Inst {
     this.acc = new Int32Array(L * this.A).fill(-1)
     this.partials = new Int32Array(L)
     this.laneValue = new Int32Array(L).fill(-1)
+    this.tree = ctx.m.interLane === 'tree'
+    this.levels = Math.ceil(Math.log2(Math.max(1, this.activeLanes())))
+    this.tLevel = new Int8Array(this.tree ? L : 0)
+    this.tVal = new Int32Array(this.tree ? L : 0).fill(-1)
+    this.tIn = new Int32Array(this.tree ? L * this.levels : 0).fill(-1)
     this.writeCounts()
   }
 
@@ -97,6 +115,18 @@ export class ReductionInst extends Inst {
     if ((this.laneValue[lane] ?? -1) < 0 && b > 0) {
       this.combine(lane, uk, c)
       return
+    }
+    if (this.tree) {
+      const v = this.tVal[lane] ?? -1
+      const k = this.tLevel[lane] ?? 0
+      const arrives = k < this.levels ? (this.tIn[lane * this.levels + k] ?? -1) : -1
+      if (arrives >= 0 && c >= arrives && v >= 0 && v <= c) {
+        this.beat(lane, uk, c)
+        this.tVal[lane] = c + this.D
+        this.tLevel[lane] = k + 1
+        this.settle(lane)
+        return
+      }
     }
     const own = this.laneValue[lane] ?? -1
     if (this.stage === STAGE_ADD && this.pos === lane && c >= this.valueAt && own >= 0 && own <= c) {
@@ -143,7 +173,11 @@ export class ReductionInst extends Inst {
     if (left <= 1) {
       if (!pending && i1 >= 0) this.laneValue[lane] = this.acc[base + i1] ?? c
       else this.ctx.busyLane(lane)
-      if ((this.laneValue[lane] ?? -1) >= 0) this.maybeStartRing()
+      const v = this.laneValue[lane] ?? -1
+      if (v >= 0 && this.tree) {
+        this.tVal[lane] = v
+        this.settle(lane)
+      } else if (v >= 0) this.maybeStartRing()
       return
     }
     if (i1 < 0 || i2 < 0) {
@@ -171,6 +205,44 @@ export class ReductionInst extends Inst {
     this.stage = top === 0 ? this.afterRing() : STAGE_SEND
   }
 
+  /** Tree: skips the levels where the lane has no active partner; lane 0 past the last level goes on to vs1[0]. */
+  private settle(lane: number): void {
+    const top = this.activeLanes()
+    let k = this.tLevel[lane] ?? 0
+    while (k < this.levels && ((lane >> k) & 1) === 0 && lane + (1 << k) >= top) k++
+    this.tLevel[lane] = k
+    if (k === this.levels && lane === 0) {
+      this.valueAt = this.tVal[0] ?? 0
+      this.stage = this.afterRing()
+    }
+  }
+
+  /** Tree: a lane whose value is ready sends it 2^k lanes down, over 2^k links, hop after hop. */
+  private treeSend(c: number): void {
+    const ctx = this.ctx
+    const hop = ctx.m.ringHopLatency
+    const top = this.activeLanes()
+    for (let l = 1; l < top; l++) {
+      const k = this.tLevel[l] ?? 0
+      const v = this.tVal[l] ?? -1
+      if (k >= this.levels || ((l >> k) & 1) === 0 || v < 0 || c < v) continue
+      const dist = 1 << k
+      let free = true
+      for (let j = 0; j < dist && free; j++) free = ctx.linkFree(false, l - 1 - j, c + j * hop)
+      if (!free) {
+        ctx.block(l, this.seq, REASON.ring)
+        continue
+      }
+      for (let j = 0; j < dist; j++) ctx.bookLink(false, l - 1 - j, c + j * hop, this.seq)
+      ctx.busyLane(l)
+      this.setTime(l, F_WRITE_START, c)
+      this.setTime(l, F_WRITE_END, c)
+      this.tLevel[l] = this.levels
+      this.finishLane(l, c)
+      this.tIn[(l - dist) * this.levels + k] = c + dist * hop
+    }
+  }
+
   private afterRing(): number {
     if (this.hasVs1) return STAGE_FINAL
     this.toWrite()
@@ -183,6 +255,10 @@ export class ReductionInst extends Inst {
   }
 
   override global(c: number): void {
+    if (this.tree) {
+      if (this.stage === STAGE_LANES) this.treeSend(c)
+      return
+    }
     if (this.stage !== STAGE_SEND || c < this.valueAt) return
     const from = this.pos
     if (!this.ctx.bookLink(false, from - 1, c, this.seq)) {

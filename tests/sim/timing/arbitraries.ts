@@ -44,6 +44,6 @@ export const caseArb = fc
   })
   .chain((c) => fc.record({ c: fc.constant(c as RandomMachine), ops: fc.array(opArb(c.vl), { minLength: 1, maxLength: 12 }) }))
 
-export function machineOf(c: RandomMachine) {
-  return parseMachine({ lanes: c.lanes, vlen: 4096, issue: c.issue, chaining: c.chaining, rfBanks: c.rfBanks, rfPortsPerBank: c.rfPortsPerBank, memLatency: 5 })
+export function machineOf(c: RandomMachine, interLane: 'ring' | 'tree' = 'ring') {
+  return parseMachine({ lanes: c.lanes, vlen: 4096, issue: c.issue, chaining: c.chaining, rfBanks: c.rfBanks, rfPortsPerBank: c.rfPortsPerBank, memLatency: 5, interLane })
 }

@@ -21,11 +21,11 @@ function usePerCycle(trace: TimingTrace): Map<number, Map<number, number>> {
   return byRes
 }
 
-describe('timing invariants on random streams (fast-check)', () => {
+describe.each(['ring', 'tree'] as const)('timing invariants on random streams (fast-check), interLane %s', (interLane) => {
   it('finishes every run, with every lane phase ordered: read before execute before write', () => {
     fc.assert(
       fc.property(caseArb, ({ c, ops }) => {
-        const { trace, error } = simulate(buildStream(ops), machineOf(c))
+        const { trace, error } = simulate(buildStream(ops), machineOf(c, interLane))
         expect(error).toBeUndefined()
         for (const ins of trace.instructions) {
           expect(ins.complete).not.toBeNull()
@@ -50,7 +50,7 @@ describe('timing invariants on random streams (fast-check)', () => {
   it('never uses a port, unit, bus or ring link beyond its capacity in any cycle', () => {
     fc.assert(
       fc.property(caseArb, ({ c, ops }) => {
-        const { trace } = simulate(buildStream(ops), machineOf(c))
+        const { trace } = simulate(buildStream(ops), machineOf(c, interLane))
         for (const [r, cycles] of usePerCycle(trace)) {
           const cap = trace.resources[r]!.capacity
           for (const used of cycles.values()) expect(used).toBeLessThanOrEqual(cap)
@@ -64,7 +64,7 @@ describe('timing invariants on random streams (fast-check)', () => {
     fc.assert(
       fc.property(caseArb, ({ c, ops }) => {
         const stream = buildStream(ops)
-        const { trace } = simulate(stream, machineOf(c))
+        const { trace } = simulate(stream, machineOf(c, interLane))
         const lastWriter = new Map<number, number>()
         for (const op of stream.ops) {
           for (const g of op.srcRegs) {
