@@ -22,10 +22,18 @@ export class ExecFault extends Error {
 /**
  * A summation order for the unordered FP sum reduction (vfredusum), e.g. the one
  * a machine's lanes, accumulators and ring imply. It receives the start value
- * vs1[0], the active elements with their element indices, and the correctly
- * rounded addition of the current SEW; it returns the sum.
+ * vs1[0], the active elements with their element indices, the correctly
+ * rounded addition of the current SEW, and vl and SEW (where masked-off
+ * elements sit decides how a machine groups the active ones); it returns the sum.
  */
-export type UnorderedSum = (input: { start: number; values: Float64Array; indices: Int32Array; add: (a: number, b: number) => number }) => number
+export type UnorderedSum = (input: {
+  start: number
+  values: Float64Array
+  indices: Int32Array
+  add: (a: number, b: number) => number
+  vl: number
+  sew: 32 | 64
+}) => number
 
 export type IntView = Int8Array | Int16Array | Int32Array | Uint8Array | Uint16Array | Uint32Array
 

@@ -76,7 +76,7 @@ function fpReduction(kind: FpReductionKind): Handler {
         for (let i = 0; i < m.vl; i++) if (m.active(ins.operands.vm, i)) indices.push(i)
         const values = Float64Array.from(indices, (i) => v[s2 + i]!)
         active = indices.length
-        acc = m.unorderedSum({ start, values, indices: Int32Array.from(indices), add })
+        acc = m.unorderedSum({ start, values, indices: Int32Array.from(indices), add, vl: m.vl, sew })
       } else {
         for (let i = 0; i < m.vl; i++) {
           if (!m.active(ins.operands.vm, i)) continue
