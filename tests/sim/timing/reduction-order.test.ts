@@ -120,7 +120,7 @@ const programArb = fc.record({
   vl: fc.integer({ min: 1, max: 32 }),
   body: fc.array(fc.tuple(fc.integer({ min: 0, max: OPS.length - 1 }), fc.integer({ min: 1, max: 7 }), fc.integer({ min: 1, max: 7 }), fc.integer({ min: 1, max: 7 })), { minLength: 1, maxLength: 12 }),
 })
-const textOf = ({ data, vl, body }: fc.RecordValue<{ data: number[]; vl: number; body: [number, number, number, number][] }>) => `
+const textOf = ({ data, vl, body }: { data: number[]; vl: number; body: [number, number, number, number][] }) => `
     .data
     .balign 8
 xs: .double ${data.map((v) => (Object.is(v, -0) ? '-0.0' : String(v))).join(', ')}
