@@ -7,6 +7,7 @@ import type { Machine } from '../../schemas/machine'
 import type { StallReason } from '../trace/types'
 import { STALL_REASONS } from '../trace/types'
 import type { Derived } from './config'
+import type { Inst } from './inst'
 import { UNITS } from './config'
 import type { Recorder } from './recorder'
 import type { RegFile } from './regfile'
@@ -45,6 +46,8 @@ export class Ctx {
   /** Link bookings: [link][cycle mod RING_HORIZON] = cycle booked. */
   readonly upBook: Int32Array
   readonly downBook: Int32Array
+  /** Per lane: the instructions started and not finished there, oldest first (kept by Inst). */
+  readonly laneActive: Inst[][]
   sink!: CompletionSink
 
   constructor(
@@ -87,6 +90,7 @@ export class Ctx {
     this.blockReason = new Int8Array(L)
     this.upBook = new Int32Array(links * RING_HORIZON).fill(-1)
     this.downBook = new Int32Array(links * RING_HORIZON).fill(-1)
+    this.laneActive = Array.from({ length: L }, () => [])
   }
 
   /** Notes that `seq` could not advance in `lane` this cycle; the oldest such instruction names the stall. */

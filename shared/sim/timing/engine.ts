@@ -352,11 +352,10 @@ export function step(s: TimingState): boolean {
   // Per lane, only instructions started and not finished there take part (most of the queue waits).
   const act = s.active
   for (let l = 0; l < L; l++) {
+    // A snapshot: instructions that finish in this lane during the cycle still take their turns.
+    const list = ctx.laneActive[l] as Inst[]
     let na = 0
-    for (let i = 0; i < fl.length; i++) {
-      const inst = fl[i] as Inst
-      if (inst.started[l] === 1 && inst.laneDone[l] !== 1) act[na++] = inst
-    }
+    for (let i = 0; i < list.length; i++) act[na++] = list[i] as Inst
     for (let i = 0; i < na; i++) (act[i] as Inst).write(l, c)
     for (let i = 0; i < na; i++) (act[i] as Inst).exec(l, c)
     if (!together) {

@@ -74,6 +74,7 @@ export abstract class Inst {
   /** Lanes where the instruction holds a lane slot. */
   readonly tookSlot: Uint8Array
   protected readonly base: number
+  private readonly chaining: boolean
 
   constructor(
     readonly ctx: Ctx,
@@ -91,6 +92,7 @@ export abstract class Inst {
     this.laneDone = new Uint8Array(L)
     this.tookSlot = new Uint8Array(L)
     this.base = op.seq * L * LANE_FIELD_COUNT
+    this.chaining = ctx.m.chaining
   }
 
   /** Sets up results storage once dstWords is known. */
@@ -135,6 +137,15 @@ export abstract class Inst {
       this.checkAllRead()
       return
     }
+    // Join the lane's active list in program order (memory and arithmetic instructions start independently).
+    const list = this.ctx.laneActive[lane] as Inst[]
+    let k = list.length
+    list.push(this)
+    while (k > 0 && (list[k - 1] as Inst).seq > this.seq) {
+      list[k] = list[k - 1] as Inst
+      k--
+    }
+    list[k] = this
     let anyWords = false
     for (const s of this.srcs) if ((s.words[lane] ?? 0) > 0) anyWords = true
     if (!anyWords) {
@@ -162,8 +173,13 @@ export abstract class Inst {
   /** Read lane words into the operand queues: one word per operand per cycle, oldest instruction first. */
   read(lane: number, c: number): void {
     if (this.started[lane] !== 1 || this.readDone[lane] === 1) return
-    const { rf, rec, d } = this.ctx
+    const ctx = this.ctx
+    const { rf, rec } = ctx
+    const wpr = rf.wpr
+    const depth = ctx.d.queueDepth
+    const bankBase = lane * rf.banks
     let all = true
+    let readAny = false
     const srcs = this.srcs
     for (let k = 0; k < srcs.length; k++) {
       const s = srcs[k] as Operand
@@ -171,27 +187,34 @@ export abstract class Inst {
       const words = s.words[lane] ?? 0
       if (w >= words) continue
       all = false
-      if (w - (s.cons[lane] ?? 0) >= d.queueDepth) {
-        this.ctx.block(lane, this.seq, R_QUEUE)
+      if (w - (s.cons[lane] ?? 0) >= depth) {
+        ctx.block(lane, this.seq, R_QUEUE)
         continue
       }
-      const p = rf.physOf(s.group, w)
-      const off = w % rf.wpr
-      if ((rf.ready[(p * this.L + lane) * rf.wpr + off] ?? 0) > c) {
-        this.ctx.block(lane, this.seq, R_RAW)
+      const g = s.group
+      const r = (w / wpr) | 0
+      const p = g[r < g.length ? r : g.length - 1] ?? 0
+      const off = w - r * wpr
+      if ((rf.ready[(p * this.L + lane) * wpr + off] ?? 0) > c) {
+        ctx.block(lane, this.seq, R_RAW)
         continue
       }
       const bank = (p + off) % rf.banks
       if (!rf.grant(lane, bank, c)) {
-        this.ctx.block(lane, this.seq, R_BANK)
+        ctx.block(lane, this.seq, R_BANK)
         continue
       }
-      rec.use(this.ctx.bankRes[lane * d.banks + bank] ?? 0, c, 1, this.seq)
+      rec.use(ctx.bankRes[bankBase + bank] ?? 0, c, 1, this.seq)
       s.readCnt[lane] = w + 1
-      this.ctx.busyLane(lane)
-      if (this.time(lane, F_READ_START) === NO_CYCLE) this.setTime(lane, F_READ_START, c)
-      this.setTime(lane, F_READ_END, c)
+      readAny = true
       if (w + 1 >= words) all = true
+    }
+    if (readAny) {
+      ctx.busyLane(lane)
+      const t = ctx.laneTimes
+      const at = this.base + lane * LANE_FIELD_COUNT
+      if (t[at + F_READ_START] === NO_CYCLE) t[at + F_READ_START] = c
+      t[at + F_READ_END] = c
     }
     if (all) all = this.allRead(lane)
     if (all) {
@@ -224,29 +247,36 @@ export abstract class Inst {
     if (this.laneDone[lane] === 1 || this.started[lane] !== 1) return
     const total = this.dstWords[lane] ?? 0
     let w = this.wrCnt[lane] ?? 0
-    const { rf, rec, d } = this.ctx
+    const ctx = this.ctx
+    const { rf, rec } = ctx
+    const row = lane * this.maxDstWords
+    const wrote = w
     for (let k = 0; k < this.writesPerCycle && w < total; k++) {
-      const at = this.readyAt[lane * this.maxDstWords + w] ?? -1
+      const at = this.readyAt[row + w] ?? -1
       if (at < 0) break
       if (at > c) {
-        this.ctx.busyLane(lane) // the result is still in the unit's pipeline
+        ctx.busyLane(lane) // the result is still in the unit's pipeline
         break
       }
       if (!this.scalarDst) {
         const bank = rf.bankOf(this.dst, w)
         if (!rf.grant(lane, bank, c)) {
-          this.ctx.block(lane, this.seq, R_BANK)
+          ctx.block(lane, this.seq, R_BANK)
           break
         }
-        rec.use(this.ctx.bankRes[lane * d.banks + bank] ?? 0, c, 1, this.seq)
-        if (this.ctx.m.chaining) rf.ready[rf.slot(this.dst, lane, w)] = c + 1
+        rec.use(ctx.bankRes[lane * rf.banks + bank] ?? 0, c, 1, this.seq)
+        if (this.chaining) rf.ready[rf.slot(this.dst, lane, w)] = c + 1
       }
-      this.ctx.busyLane(lane)
-      if (this.time(lane, F_WRITE_START) === NO_CYCLE) this.setTime(lane, F_WRITE_START, c)
-      this.setTime(lane, F_WRITE_END, c)
       w++
     }
-    this.wrCnt[lane] = w
+    if (w > wrote) {
+      ctx.busyLane(lane)
+      const t = ctx.laneTimes
+      const at = this.base + lane * LANE_FIELD_COUNT
+      if (t[at + F_WRITE_START] === NO_CYCLE) t[at + F_WRITE_START] = c
+      t[at + F_WRITE_END] = c
+      this.wrCnt[lane] = w
+    }
     if (w >= total && this.lanePhasesDone(lane)) this.finishLane(lane, c)
   }
 
@@ -259,6 +289,9 @@ export abstract class Inst {
     if (this.laneDone[lane] === 1) return
     this.laneDone[lane] = 1
     this.doneCount++
+    const list = this.ctx.laneActive[lane] as Inst[]
+    const at = list.indexOf(this)
+    if (at >= 0) list.splice(at, 1)
     if ((this.n[lane] ?? 0) > 0) {
       const ws = this.time(lane, F_WRITE_END)
       const es = this.time(lane, F_EXEC_START)
