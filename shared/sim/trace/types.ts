@@ -145,14 +145,21 @@ export interface TimingResult {
 export interface SimulateOptions {
   /** Stop with a 'cycle-limit' error after this many cycles (default 5,000,000). */
   cycleLimit?: number
-  /** Stop with a 'trace-limit' error once stall + usage spans exceed this (default 8,000,000). */
+  /** Stop with a 'trace-limit' error once stall + usage spans exceed this (default 16,000,000). */
   traceLimit?: number
   /** Record resource-use spans (default true); totals in the metrics are kept either way. */
   recordUsage?: boolean
 }
 
 export const DEFAULT_CYCLE_LIMIT = 5_000_000
-export const DEFAULT_TRACE_LIMIT = 8_000_000
+/**
+ * 16 million spans, about 290 MB of typed arrays (18 bytes a span). A
+ * 100,000-instruction strip-mined run on the default machine needs 13.9
+ * million, nearly all of them bank-port uses: with single-port banks
+ * consecutive words sit in consecutive banks, so each word read or written is
+ * a span of its own.
+ */
+export const DEFAULT_TRACE_LIMIT = 16_000_000
 
 /** The record of instruction `index` in `lane`, with nulls where the lane has no active element. */
 export function laneTiming(trace: TimingTrace, index: number, lane: number): LaneTiming {
