@@ -12,7 +12,6 @@
 import type { ResourceInfo, StallSpans, UsageSpans } from '../trace/types'
 
 type Column = Int32Array | Uint8Array | Uint16Array | Uint32Array
-type ColumnType = new (n: number) => Column
 
 const CHUNK_BITS = 16
 const CHUNK = 1 << CHUNK_BITS
@@ -22,42 +21,47 @@ const LOW = CHUNK - 1
  * Rows in fixed-size chunks per column: appending never copies what is
  * already stored, and `column` builds one exact-size column at a time,
  * releasing its chunks, so that a long run never holds its spans twice over.
+ * Every column is stored as Int32 (one element type keeps each store site
+ * monomorphic, which matters at a few stores per simulated cycle) and takes
+ * its trace type only in `column`.
  */
 class Columns {
-  readonly chunks: Column[][]
+  readonly chunks: Int32Array[][]
   count = 0
   /** Whether rows were opened in order of their start cycle (column 0). */
   sorted = true
   private lastStart = 0
-  constructor(readonly types: ColumnType[]) {
-    this.chunks = types.map(() => [])
+  constructor(columns: number) {
+    this.chunks = Array.from({ length: columns }, () => [])
   }
   /** A new row starting at cycle `start`; returns its index. */
   push(start: number): number {
     const i = this.count++
-    if ((i & LOW) === 0) this.types.forEach((T, k) => (this.chunks[k] as Column[]).push(new T(CHUNK)))
+    if ((i & LOW) === 0) for (const col of this.chunks) col.push(new Int32Array(CHUNK))
     if (start < this.lastStart) this.sorted = false
     this.lastStart = start
-    ;((this.chunks[0] as Column[])[i >>> CHUNK_BITS] as Column)[i & LOW] = start
+    ;((this.chunks[0] as Int32Array[])[i >>> CHUNK_BITS] as Int32Array)[i & LOW] = start
     return i
   }
   set(k: number, i: number, v: number): void {
-    ;((this.chunks[k] as Column[])[i >>> CHUNK_BITS] as Column)[i & LOW] = v
+    ;((this.chunks[k] as Int32Array[])[i >>> CHUNK_BITS] as Int32Array)[i & LOW] = v
   }
   get(k: number, i: number): number {
-    return ((this.chunks[k] as Column[])[i >>> CHUNK_BITS] as Column)[i & LOW] ?? 0
+    return ((this.chunks[k] as Int32Array[])[i >>> CHUNK_BITS] as Int32Array)[i & LOW] ?? 0
   }
-  /** Column k in row order `idx` (null: as stored); its chunks are released. */
+  /** Column k in row order `idx` (null: as stored), as a `Make`; its chunks are released. */
   column<T extends Column>(k: number, idx: Uint32Array | null, Make: new (n: number) => T): T {
     const out = new Make(this.count)
-    const chunks = this.chunks[k] as Column[]
+    const chunks = this.chunks[k] as Int32Array[]
     if (idx === null) {
       chunks.forEach((ch, n) => out.set(ch.subarray(0, Math.min(CHUNK, this.count - n * CHUNK)), n * CHUNK))
     } else {
+      const tmp = new Int32Array(this.count)
       for (let i = 0; i < idx.length; i++) {
         const j = idx[i] ?? 0
-        out[i] = (chunks[j >>> CHUNK_BITS] as Column)[j & LOW] ?? 0
+        tmp[i] = (chunks[j >>> CHUNK_BITS] as Int32Array)[j & LOW] ?? 0
       }
+      out.set(tmp)
     }
     this.chunks[k] = []
     return out
@@ -99,8 +103,8 @@ export class Recorder {
   /** Uses summed over the run, per resource. */
   readonly totals: Float64Array
   readonly recordUsage: boolean
-  private readonly stall = new Columns([Int32Array, Int32Array, Int32Array, Uint8Array, Uint16Array])
-  private readonly usage = new Columns([Int32Array, Int32Array, Int32Array, Uint16Array, Uint32Array])
+  private readonly stall = new Columns(5)
+  private readonly usage = new Columns(5)
   // Open stall span per lane (reason -1: none) and its row.
   private readonly sReason: Int16Array
   private readonly sInst: Int32Array
