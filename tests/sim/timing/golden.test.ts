@@ -24,7 +24,6 @@ import { assemble } from '../../../shared/sim/isa/assembler'
 import { PRESETS } from '../../../shared/sim/presets'
 import { simulate } from '../../../shared/sim/timing/simulate'
 import type { SimulateOptions } from '../../../shared/sim/trace/types'
-import { stripMined } from '../../../scripts/bench/programs'
 import { caseArb, machineOf } from './arbitraries'
 import { buildStream } from './factories'
 import { digestRun } from './digest'
@@ -78,7 +77,7 @@ describe('golden corpus: every cycle the engine computed before its speed work',
 
   it('times a 1,600-instruction strip-mined run, with and without usage spans, and runs cut short by each limit, as recorded', () => {
     const machine = parseMachine({})
-    const stream = streamOf(stripMined(1600), machine)
+    const stream = streamOf(readFileSync(new URL('./fixtures/strip-mined-1600.s', import.meta.url), 'utf8'), machine)
     check('strip-mined 1600', stream, machine)
     check('strip-mined 1600 without usage', stream, machine, { recordUsage: false })
     check('strip-mined 1600 cycle limit 5000', stream, machine, { cycleLimit: 5000 })
