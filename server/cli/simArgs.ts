@@ -3,12 +3,14 @@
  * Kept apart from sim.ts so that the tests can drive it without a process.
  */
 import { parseArgs } from 'node:util'
+import { parseDumpRequest, type DumpRequest } from '../../shared/sim/exec/dump'
+import { FP_REDUCTION_ORDERS, type FpReductionOrder } from '../../shared/sim/run'
 
 export const FORMATS = ['summary', 'json', 'csv', 'vcd'] as const
 export type Format = (typeof FORMATS)[number]
 
 export const USAGE =
-  'usage: npm run -s sim -- FILE.s [--preset NAME] [--config FILE.json] [--set path=value]... [--format summary|json|csv|vcd] [--out FILE]'
+  'usage: npm run -s sim -- FILE.s [--preset NAME] [--config FILE.json] [--set path=value]... [--format summary|json|csv|vcd] [--out FILE] [--fp-order element|machine] [--dump LABEL:COUNT:TYPE]...'
 
 /** A mistake in the command line itself: exit code 2. */
 export class UsageError extends Error {
@@ -22,6 +24,10 @@ export interface SimArgs {
   sets: { path: string[]; raw: string; text: string }[]
   format: Format
   out?: string
+  /** The summation order of vfredusum: element order (as QEMU) or the machine's. */
+  fpOrder: FpReductionOrder
+  /** Data to print after the run (summary format only). */
+  dumps: DumpRequest[]
 }
 
 export function parseSimArgs(argv: string[]): SimArgs {
@@ -37,6 +43,8 @@ export function parseSimArgs(argv: string[]): SimArgs {
         set: { type: 'string', multiple: true },
         format: { type: 'string' },
         out: { type: 'string' },
+        'fp-order': { type: 'string' },
+        dump: { type: 'string', multiple: true },
         help: { type: 'boolean', short: 'h' },
       },
     })
@@ -53,13 +61,23 @@ export function parseSimArgs(argv: string[]): SimArgs {
   if (!(FORMATS as readonly string[]).includes(format)) {
     throw new UsageError(`--format must be one of ${FORMATS.join(', ')} (got "${format}")`)
   }
+  const fpOrder = values['fp-order'] ?? 'element'
+  if (!(FP_REDUCTION_ORDERS as readonly string[]).includes(fpOrder)) {
+    throw new UsageError(`--fp-order must be one of ${FP_REDUCTION_ORDERS.join(', ')} (got "${fpOrder}")`)
+  }
+  const dumps = (values.dump ?? []).map((text) => {
+    const r = parseDumpRequest(text)
+    if (!r.ok) throw new UsageError(r.message)
+    return r.request
+  })
+  if (dumps.length > 0 && format !== 'summary') throw new UsageError(`--dump adds data to the summary; it cannot be used with --format ${format}`)
   const sets = (values.set ?? []).map((text) => {
     const eq = text.indexOf('=')
     const path = eq > 0 ? text.slice(0, eq).split('.') : []
     if (eq <= 0 || path.some((p) => p === '')) throw new UsageError(`--set expects path=value with a dotted machine field name, e.g. units.fpu.latency=6 (got "${text}")`)
     return { path, raw: text.slice(eq + 1), text }
   })
-  return { file: positionals[0] as string, preset: values.preset, config: values.config, sets, format: format as Format, out: values.out }
+  return { file: positionals[0] as string, preset: values.preset, config: values.config, sets, format: format as Format, out: values.out, fpOrder: fpOrder as FpReductionOrder, dumps }
 }
 
 /** "4" -> 4, "true" -> true, "serial" -> "serial": the schema then judges the value. */

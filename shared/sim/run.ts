@@ -17,6 +17,7 @@ import { checkMachine, type Machine, type MachineFieldIssue } from '../schemas/m
 import { assemble, type AssembleOptions } from './isa/assembler'
 import type { Program, SimDiagnostic } from './isa/types'
 import { execute, type ExecuteOptions, type ExecuteSuccess } from './exec/execute'
+import { machineReductionOrder } from './timing/reduction-order'
 import { advance, createTimingState, finish } from './timing/simulate'
 import type { SimulateOptions, TimingTrace } from './trace/types'
 
@@ -40,10 +41,20 @@ export interface RunInput {
   machine: unknown
 }
 
+/**
+ * The order `vfredusum` adds in: 'element' is element order, as QEMU does
+ * (the default); 'machine' is the order the machine's lanes, accumulators and
+ * ring or tree imply (machineReductionOrder). Only the rounding differs.
+ */
+export const FP_REDUCTION_ORDERS = ['element', 'machine'] as const
+export type FpReductionOrder = (typeof FP_REDUCTION_ORDERS)[number]
+
 export interface RunOptions {
   assemble?: AssembleOptions
-  /** Execution options; VLEN always comes from the machine. */
+  /** Execution options; VLEN always comes from the machine, and `fpReductionOrder` below overrides theirs when it is 'machine'. */
   execute?: Omit<ExecuteOptions, 'vlen'>
+  /** The summation order of vfredusum (default 'element'). */
+  fpReductionOrder?: FpReductionOrder
   timing?: SimulateOptions
   /** Cycles simulated between two pauses of runPipelineSteps (default 20,000). */
   batchCycles?: number
@@ -98,7 +109,8 @@ export function* runPipelineSteps(input: RunInput, options: RunOptions = {}): Ge
   } else program = input.program
   yield { stage: 'execute', cycle: 0, dispatched: 0, total: 0 }
 
-  const run = execute(program, { ...options.execute, vlen: machine.vlen })
+  const machineOrder = options.fpReductionOrder === 'machine' ? { fpReductionOrder: machineReductionOrder(machine) } : {}
+  const run = execute(program, { ...options.execute, ...machineOrder, vlen: machine.vlen })
   if (!run.ok) {
     return { ok: false, error: { stage: 'execute', code: run.error.code, message: run.error.message, diagnostics: [run.error] } }
   }

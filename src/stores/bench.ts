@@ -9,6 +9,7 @@ import { defineStore } from 'pinia'
 import { assemble } from '@shared/sim/isa'
 import { checkMachine, defaultMachine, parseMachine, type Machine } from '@shared/schemas/machine'
 import { PRESETS } from '@shared/sim/presets'
+import type { FpReductionOrder } from '@shared/sim/run'
 import { useSimulator, type UseSimulatorOptions } from '@/composables/useSimulator'
 import { clampCycle, nextEvent, previousEvent, scrubberEvents } from '@/lib/bench/events'
 import { exampleList, type Example } from '@/lib/bench/examples'
@@ -50,6 +51,8 @@ export const useBenchStore = defineStore('bench', () => {
   /** What the form holds: may be invalid (then it is not run). */
   const machineDraft = ref<Machine>(parseMachine(PRESETS[1]?.machine ?? {}))
   const autoRun = ref(true)
+  /** The order vfredusum sums in: element order (as QEMU) or this machine's; only the rounding differs. */
+  const fpOrder = ref<FpReductionOrder>('element')
   const sim = useSimulator(storeOptions.simulator)
 
   const cursor = ref<number | null>(null)
@@ -99,7 +102,7 @@ export const useBenchStore = defineStore('bench', () => {
     runStartedAt.value = performance.now()
     performance.mark(RUN_MARK)
     tracedProgram.value = assembled.value
-    await sim.run(source.value, machine.value)
+    await sim.run(source.value, machine.value, { fpReductionOrder: fpOrder.value })
     const t = trace.value
     if (!t) return
     runs.value++
@@ -117,7 +120,7 @@ export const useBenchStore = defineStore('bench', () => {
       if (autoRun.value && assembled.value.ok && machine.value) void run()
     }, AUTO_RUN_DELAY)
   }
-  watch([source, machineDraft], scheduleRun, { deep: true })
+  watch([source, machineDraft, fpOrder], scheduleRun, { deep: true })
   watch(autoRun, (on) => {
     if (on) scheduleRun()
   })
@@ -209,11 +212,12 @@ export const useBenchStore = defineStore('bench', () => {
     applyPreset(PRESETS[1]?.id ?? '')
     setView(EMPTY_VIEW)
     autoRun.value = true
+    fpOrder.value = 'element'
     selectedRegister.value = null
   }
 
   return {
-    exampleId, source, presetId, machineDraft, autoRun, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
+    exampleId, source, presetId, machineDraft, autoRun, fpOrder, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
     assembled, program, machine, fieldErrors, summary, preset, trace, traceIndex, events, explanation, rows, uses, registers, dependencies, cycleState, cycles, view,
     functional: sim.functional, error: sim.error, progress: sim.progress, running: sim.running,
     run, cancel: sim.cancel, scheduleRun, loadExample, setSource, applyPreset, resetMachine, setMachineField,

@@ -11,6 +11,7 @@ import { describe, expect, it } from 'vitest'
 import { parse } from 'csv-parse/sync'
 import { parseVcd } from '../sim/trace/vcdReader'
 import { traceJsonSchema } from '../../shared/sim/trace/schema'
+import { elementSum, machine as fpMachine, machineSum, program as fpProgram } from '../sim/fpOrderFixture'
 
 const root = join(import.meta.dirname, '..', '..')
 const examples = readdirSync(join(root, 'examples')).filter((f) => f.endsWith('.s')).sort()
@@ -47,6 +48,10 @@ describe('sim usage errors exit with code 2 and one line on stderr', () => {
     ['an unknown preset', ['examples/dot.s', '--preset', 'huge'], /unknown preset "huge"/],
     ['a config file that is not JSON', ['examples/dot.s', '--config', file('bad.json', '{lanes: 4')], /is not JSON/],
     ['a config file with a bad field', ['examples/dot.s', '--config', file('lanes.json', '{"lanes": 0}')], /lanes: 0 is outside the range/],
+    ['an unknown FP reduction order', ['examples/dot.s', '--fp-order', 'tree'], /--fp-order must be one of element, machine \(got "tree"\)/],
+    ['a malformed --dump', ['examples/dot.s', '--dump', 'result:eight:f64'], /COUNT 'eight' must be a positive integer/],
+    ['--dump with a format other than summary', ['examples/dot.s', '--dump', 'result:1:f64', '--format', 'csv'], /--dump adds data to the summary; it cannot be used with --format csv/],
+    ['--dump of a label the program lacks', ['examples/dot.s', '--dump', 'nowhere:1:f64'], /no label 'nowhere'/],
   ])('%s', (_what, args, message) => {
     const r = sim(...args)
     expect(r.code).toBe(2)
@@ -114,5 +119,29 @@ describe('sim options', () => {
     expect(r.code).toBe(0)
     const f = parseVcd(r.stdout)
     expect(new Set(f.vars.map((v) => v.scope.join('.')))).toEqual(new Set(['chimeline.lane0', 'chimeline.lane1']))
+  })
+})
+
+describe('sim --fp-order', () => {
+  // Expected sums computed in tests/sim/fpOrderFixture.ts with Math.fround (IEEE 754 binary32, round to nearest even).
+  const prog = file('fp-order.s', fpProgram)
+  const config = file('fp-order.json', JSON.stringify(fpMachine))
+  const sumWith = (...extra: string[]) => {
+    const r = sim(prog, '--config', config, '--dump', 'sum:1:f32', ...extra)
+    expect(r.stderr).toBe('')
+    expect(r.code).toBe(0)
+    return JSON.parse(r.stdout).dumps['sum:f32'][0]
+  }
+
+  it.each([
+    ['element order by default, as QEMU', [], elementSum],
+    ['element order with --fp-order element', ['--fp-order', 'element'], elementSum],
+    ["this machine's order with --fp-order machine", ['--fp-order', 'machine'], machineSum],
+  ])('sums vfredusum in %s', (_what, extra, expected) => {
+    expect(sumWith(...extra)).toBe(expected)
+  })
+
+  it('gives different sums for the two orders on this program (16777216 vs 16777218)', () => {
+    expect(sumWith('--fp-order', 'machine')).not.toBe(sumWith())
   })
 })

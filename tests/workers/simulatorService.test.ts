@@ -9,7 +9,10 @@ import { describe, expect, it } from 'vitest'
 import { defaultMachine } from '../../shared/schemas/machine'
 import { runPipeline } from '../../shared/sim/run'
 import { decodeTrace } from '../../shared/sim/trace/compact'
+import { readDump } from '../../shared/sim/exec/dump'
+import { assemble } from '../../shared/sim/isa/assembler'
 import { createSimulatorService } from '../../src/workers/simulatorService'
+import { elementSum, machine as fpMachine, machineSum, program as fpProgram } from '../sim/fpOrderFixture'
 
 const longStream = readFileSync(join(import.meta.dirname, '..', '..', 'examples', 'long-stream.s'), 'utf8')
 const saxpy = readFileSync(join(import.meta.dirname, '..', '..', 'examples', 'saxpy.s'), 'utf8')
@@ -68,5 +71,16 @@ describe('the simulator Worker service', () => {
     expect(r.error.stage).toBe(stage)
     if (stage === 'assemble') expect(r.error.diagnostics?.[0]).toMatchObject({ line: 1 })
     if (stage === 'machine') expect(r.error.fields?.[0]?.field).toBe('lanes')
+  })
+
+  it.each([
+    ['element order by default (as QEMU)', {}, elementSum],
+    ["the machine's order with fpReductionOrder 'machine'", { fpReductionOrder: 'machine' as const }, machineSum],
+  ])('sums vfredusum in %s (binary32 sums from tests/sim/fpOrderFixture.ts)', async (_what, options, expected) => {
+    const r = await eager().simulate(fpProgram, fpMachine, options)
+    if (!r.ok) throw new Error(r.error.message)
+    const asm = assemble(fpProgram)
+    if (!asm.ok) throw new Error('fixture does not assemble')
+    expect(readDump(asm.program, r.functional.memory, { label: 'sum', count: 1, type: 'f32' })).toEqual({ ok: true, values: [expected] })
   })
 })
