@@ -4,6 +4,7 @@
  */
 import crypto from 'node:crypto'
 import fs from 'node:fs'
+import os from 'node:os'
 import path from 'node:path'
 import { dataDir, databaseUrl, mainCluster } from './db/cluster'
 
@@ -27,7 +28,12 @@ export interface ServerConfig {
   /** Set the Secure flag on the refresh cookie (behind HTTPS). */
   secureCookies: boolean
   seedDemo: boolean
+  /** The worker threads that compute saved versions' run summaries (services/run-pool.ts). */
+  saveRuns: { threads: number; queue: number; timeLimitMs: number }
 }
+
+/** One thread per core the request thread does not need, at least one, at most four. */
+const defaultRunThreads = () => Math.min(4, Math.max(1, os.availableParallelism() - 1))
 
 function intEnv(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
   const raw = env[name]
@@ -81,5 +87,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     clientDir: env.CLIENT_DIR === '' ? null : path.resolve(env.CLIENT_DIR ?? 'dist'),
     secureCookies: (env.PUBLIC_URL ?? '').startsWith('https:'),
     seedDemo: !production || env.CHIMELINE_SEED_DEMO === '1',
+    saveRuns: {
+      threads: Math.max(1, intEnv(env, 'SAVE_RUN_THREADS', defaultRunThreads())),
+      queue: intEnv(env, 'SAVE_RUN_QUEUE', 16),
+      timeLimitMs: Math.max(1, intEnv(env, 'SAVE_RUN_TIME_LIMIT_MS', 20_000)),
+    },
   }
 }

@@ -2,6 +2,7 @@ import type { Logger } from 'pino'
 import type { Sequelize } from 'sequelize'
 import type { ServerConfig } from './config'
 import type { Mailer } from './services/mailer'
+import type { RunPool } from './services/run-pool'
 
 /** What routes and services need from the running server; built once in runtime.ts. */
 export interface AppContext {
@@ -9,4 +10,6 @@ export interface AppContext {
   sequelize: Sequelize
   mailer: Mailer
   logger: Logger
+  /** Computes saved versions' run summaries on worker threads. */
+  runs: RunPool
 }

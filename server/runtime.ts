@@ -7,6 +7,7 @@ import type { ServerConfig } from './config'
 import type { AppContext } from './context'
 import { connect } from './db/connection'
 import { createMailer, sinkSmtpUrl } from './services/mailer'
+import { createRunPool } from './services/run-pool'
 import { startSmtpSink, type SmtpSink } from './services/smtp-sink'
 
 export interface Runtime {
@@ -32,7 +33,8 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   const sequelize = options.sequelize ?? connect(config.databaseUrl)
   const sink = config.smtpUrl ? null : await startSmtpSink(config.smtpSinkPort, logger)
   const mailer = createMailer(config.smtpUrl ?? sinkSmtpUrl((sink as SmtpSink).port), config.mailFrom)
-  const ctx: AppContext = { config, sequelize, mailer, logger }
+  const runs = createRunPool(config.saveRuns)
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs }
   const app = buildApp(ctx)
   return {
     ctx,
@@ -40,6 +42,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
     sink,
     async close() {
       mailer.close()
+      await runs.close()
       await sink?.close()
       if (!options.sequelize) await sequelize.close()
     },

@@ -7,16 +7,21 @@
  * Limits are tighter than the Bench's, since a save waits for the run:
  * SAVE_RUN_LIMITS below. A program over them is saved all the same, with a
  * 'failed' summary that says which limit it hit.
+ *
+ * This module is pure work with no I/O: the server runs it in a worker thread
+ * (run-worker.ts through run-pool.ts), never on the thread that answers requests.
  */
 import type { InitialDataEntry, RunSummary, ScenarioContent } from '../../shared/schemas/scenario'
 import { assemble } from '../../shared/sim/isa/assembler'
 import type { Program } from '../../shared/sim/isa/types'
 import { runPipeline } from '../../shared/sim/run'
-import { errors } from '../http/errors'
 
 export const SAVE_RUN_LIMITS = { steps: 1_000_000, cycles: 1_000_000 } as const
 
-type DataProblem = { index: number; message: string }
+export type DataProblem = { index: number; message: string }
+
+/** What one run gives back across the thread boundary: a summary, or the initial data's problems (a 400). */
+export type RunOutcome = { ok: true; run: RunSummary } | { ok: false; problems: DataProblem[] }
 
 const INT_RANGE: Record<string, [bigint, bigint, number]> = {
   i8: [-(1n << 7n), (1n << 7n) - 1n, 1], i16: [-(1n << 15n), (1n << 15n) - 1n, 2], i32: [-(1n << 31n), (1n << 31n) - 1n, 4], i64: [-(1n << 63n), (1n << 63n) - 1n, 8],
@@ -82,28 +87,24 @@ export function applyInitialData(program: Program, entries: InitialDataEntry[]):
 /**
  * Runs a scenario's content once and keeps the summary. A program that does
  * not assemble or run still gets a summary (it may be saved half-written);
- * initial data that names a missing label or does not fit is a 400, since
- * that is a mistake in the request itself.
+ * initial data that names a missing label or does not fit comes back as
+ * problems, since that is a mistake in the request itself (run-pool.ts makes
+ * it a 400).
  */
-export function summarizeRun(content: Pick<ScenarioContent, 'program' | 'machine' | 'initialData'>): RunSummary {
+export function computeRunSummary(content: Pick<ScenarioContent, 'program' | 'machine' | 'initialData'>): RunOutcome {
   const asm = assemble(content.program)
   if (!asm.ok) {
     const first = asm.errors[0]
     const where = first ? `line ${first.line}, column ${first.column}: ` : ''
-    return { status: 'failed', stage: 'assemble', code: first?.code ?? 'assemble', message: `${where}${first?.message ?? 'the program does not assemble'}` }
+    return { ok: true, run: { status: 'failed', stage: 'assemble', code: first?.code ?? 'assemble', message: `${where}${first?.message ?? 'the program does not assemble'}` } }
   }
   const applied = applyInitialData(asm.program, content.initialData)
-  if (!applied.ok) {
-    throw errors.validation(
-      Object.fromEntries(applied.problems.map((p) => [`content.initialData.${p.index}`, p.message])),
-      'Some initial data does not fit the program',
-    )
-  }
+  if (!applied.ok) return { ok: false, problems: applied.problems }
   const r = runPipeline(
     { program: applied.program, machine: content.machine },
     { execute: { stepLimit: SAVE_RUN_LIMITS.steps }, timing: { cycleLimit: SAVE_RUN_LIMITS.cycles, recordUsage: false } },
   )
-  if (!r.ok) return { status: 'failed', stage: r.error.stage, code: r.error.code, message: r.error.message }
+  if (!r.ok) return { ok: true, run: { status: 'failed', stage: r.error.stage, code: r.error.code, message: r.error.message } }
   const m = r.trace.metrics
-  return { status: 'ok', cycles: m.cycles, flopsPerCycle: m.flopsPerCycle, stallCycles: { ...m.stallCycles } }
+  return { ok: true, run: { status: 'ok', cycles: m.cycles, flopsPerCycle: m.flopsPerCycle, stallCycles: { ...m.stallCycles } } }
 }

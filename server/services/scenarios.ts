@@ -10,7 +10,6 @@ import type { AppContext } from '../context'
 import { DetailedApiError } from '../http/detailed-error'
 import { ApiError, errors } from '../http/errors'
 import { Scenario, ScenarioVersion, User, Workspace } from '../models'
-import { summarizeRun } from './scenario-run'
 
 const DAY_MS = 86_400_000
 export const UNDO_MS = UNDO_DAYS * DAY_MS
@@ -144,7 +143,7 @@ export interface NewScenarioOptions {
 
 /** Creates a scenario with its version 1. */
 export async function createScenario(ctx: AppContext, user: User, workspaceId: string, body: CreateScenarioBody, options: NewScenarioOptions = {}): Promise<Scenario> {
-  const run = options.run ?? summarizeRun(body.content)
+  const run = options.run ?? (await ctx.runs.summarize(body.content))
   const work = async (transaction: Transaction) => {
     const c = body.content
     const scenario = await Scenario.create(
@@ -171,9 +170,9 @@ async function latestVersion(scenarioId: string, transaction?: Transaction): Pro
  * client can offer "keep mine as a new version" or "reload theirs".
  */
 export async function saveScenario(ctx: AppContext, user: User, workspaceId: string, scenarioId: string, body: SaveScenarioBody): Promise<{ scenario: Scenario; version: ScenarioVersion }> {
-  // The run is CPU work: do it before taking the row lock.
+  // The run is CPU work on a worker thread: do it before taking the row lock.
   await findScenario(workspaceId, scenarioId)
-  const run = summarizeRun(body.content)
+  const run = await ctx.runs.summarize(body.content)
   return ctx.sequelize.transaction(async (transaction) => {
     const scenario = await findScenario(workspaceId, scenarioId, { transaction, lock: true })
     if (scenario.version !== body.baseVersion) {

@@ -20,7 +20,6 @@ import { Scenario, Upload, type User } from '../models'
 import { ElfError, readElf } from './elf/reader'
 import { decodeFunction, listFunctions } from './elf/import'
 import { importBundle } from './scenario-bundles'
-import { summarizeRun } from './scenario-run'
 import { createScenario } from './scenarios'
 import { instructionsToAssembly } from './uploads-asm'
 
@@ -179,7 +178,7 @@ export function uploadDto(upload: Upload, uploader: User | null, scenarioIds: st
 export async function importUpload(ctx: AppContext, user: User, workspaceId: string, file: ReceivedFile, fields: UploadFields): Promise<{ upload: Upload; scenarios: Scenario[] }> {
   const kind = detectKind(file, fields.kind)
   const read = readUpload(file, kind, fields)
-  const run = 'content' in read ? summarizeRun(read.content) : undefined
+  const run = 'content' in read ? await ctx.runs.summarize(read.content) : undefined
   return ctx.sequelize.transaction(async (transaction) => {
     const upload = await Upload.create(
       {

@@ -21,6 +21,7 @@ export const errorCodeSchema = z.enum([
   'payload_too_large', // 413
   'rate_limited', // 429
   'internal', // 500: nothing internal is leaked
+  'server_busy', // 503: the run summaries of saves are queued to their limit; nothing was saved, try again
 ])
 export type ErrorCode = z.infer<typeof errorCodeSchema>
 
