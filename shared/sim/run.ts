@@ -17,6 +17,7 @@ import { checkMachine, type Machine, type MachineFieldIssue } from '../schemas/m
 import { assemble, type AssembleOptions } from './isa/assembler'
 import type { Program, SimDiagnostic } from './isa/types'
 import { execute, type ExecuteOptions, type ExecuteSuccess } from './exec/execute'
+import { registerGroupsOf, type RegisterGroups } from './registerGroups'
 import { machineReductionOrder } from './timing/reduction-order'
 import { advance, createTimingState, finish } from './timing/simulate'
 import type { SimulateOptions, TimingTrace } from './trace/types'
@@ -70,12 +71,16 @@ export type RunResult =
       program: Program
       functional: FunctionalResult
       trace: TimingTrace
+      /** Registers each dynamic vector instruction wrote and the groups it read, by trace position. */
+      registers: RegisterGroups
     }
   | {
       ok: false
       error: RunError
       /** The partial trace of a timing run cut short (cycle limit, trace limit). */
       trace?: TimingTrace
+      /** With a partial trace: the register use of the whole stream. */
+      registers?: RegisterGroups
     }
 
 export interface RunProgress {
@@ -122,8 +127,9 @@ export function* runPipelineSteps(input: RunInput, options: RunOptions = {}): Ge
   const batch = options.batchCycles ?? DEFAULT_BATCH_CYCLES
   while (advance(state, batch)) yield { stage: 'simulate', cycle: state.cycle, dispatched: state.opIdx, total }
   const { trace, error } = finish(state)
-  if (error) return { ok: false, error: { stage: 'simulate', code: error.code, message: error.message }, trace }
-  return { ok: true, machine, program, functional, trace }
+  const registers = registerGroupsOf(stream)
+  if (error) return { ok: false, error: { stage: 'simulate', code: error.code, message: error.message }, trace, registers }
+  return { ok: true, machine, program, functional, trace, registers }
 }
 
 /** Runs the whole pipeline at once. */

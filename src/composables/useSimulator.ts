@@ -9,9 +9,11 @@
  *   const sim = useSimulator()
  *   await sim.run(source, machine)
  *   sim.trace.value?.cycles
+ *   sim.registers.value?.writes // per traced instruction, the registers it wrote
  */
 import * as Comlink from 'comlink'
 import { getCurrentScope, onScopeDispose, readonly, ref, shallowRef } from 'vue'
+import type { RegisterGroups } from '@shared/sim/registerGroups'
 import type { FunctionalResult, RunError, RunInput, RunOptions, RunProgress } from '@shared/sim/run'
 import { decodeTrace } from '@shared/sim/trace/compact'
 import type { TimingTrace } from '@shared/sim/trace/types'
@@ -31,6 +33,8 @@ export function useSimulator(options: UseSimulatorOptions = {}) {
   const progress = shallowRef<RunProgress | null>(null)
   /** Registers, memory and output of the last successful run. */
   const functional = shallowRef<FunctionalResult | null>(null)
+  /** Registers each traced instruction wrote and the groups it read (with `trace`). */
+  const registers = shallowRef<RegisterGroups | null>(null)
   const running = ref(false)
   let worker: Worker | null = null
   let api: Comlink.Remote<SimulatorService> | null = null
@@ -57,6 +61,7 @@ export function useSimulator(options: UseSimulatorOptions = {}) {
       const result = await service().simulate(program, machine, runOptions, onProgress)
       if (id !== runId) return
       trace.value = result.trace ? decodeTrace(result.trace) : null
+      registers.value = result.trace ? (result.registers ?? null) : null
       functional.value = result.ok ? result.functional : null
       error.value = result.ok ? null : result.error
     } catch (e) {
@@ -81,5 +86,5 @@ export function useSimulator(options: UseSimulatorOptions = {}) {
 
   if (getCurrentScope()) onScopeDispose(dispose)
 
-  return { trace, functional, error, progress, running: readonly(running), run, cancel, dispose }
+  return { trace, functional, registers, error, progress, running: readonly(running), run, cancel, dispose }
 }

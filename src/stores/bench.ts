@@ -16,7 +16,7 @@ import { exampleList, type Example } from '@/lib/bench/examples'
 import { indexTrace, inspectCycle } from '@/lib/bench/inspector'
 import { instructionRows } from '@/lib/bench/instructionRows'
 import { issuesByField, machineSummary, setField } from '@/lib/bench/machineFields'
-import { dependenciesOf, registerUse, writtenRegisters } from '@/lib/bench/registerUse'
+import { dependenciesOf, firstWritten, writtenRegisters } from '@/lib/bench/registerUse'
 import { explainStalls } from '@/lib/bench/stallExplanation'
 import { EMPTY_VIEW, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
 
@@ -81,27 +81,22 @@ export const useBenchStore = defineStore('bench', () => {
   const events = computed(() => (trace.value ? scrubberEvents(trace.value) : new Int32Array()))
   const explanation = computed(() => (trace.value ? explainStalls(trace.value) : null))
   const rows = computed(() => (trace.value ? instructionRows(trace.value) : []))
-  /** The program the trace came from: register use needs its operands. */
-  const tracedProgram = shallowRef<ReturnType<typeof assemble> | null>(null)
-  const uses = computed(() => {
-    const p = tracedProgram.value
-    return trace.value && p?.ok ? registerUse(trace.value, p.program) : []
-  })
-  const registers = computed(() => writtenRegisters(uses.value))
-  const dependencies = computed(() => (selected.value === null ? [] : dependenciesOf(uses.value, selected.value)))
+  /** Per traced instruction, the registers it wrote and the groups it read (from the run's dynamic stream). */
+  const registerGroups = sim.registers
+  const registers = computed(() => writtenRegisters(registerGroups.value))
+  const dependencies = computed(() => (selected.value === null ? [] : dependenciesOf(registerGroups.value, selected.value)))
   const cycleState = computed(() => (traceIndex.value && cursor.value !== null ? inspectCycle(traceIndex.value, cursor.value) : null))
 
   // Selecting an instruction shows its destination register's values in the inspector.
   watch(selected, (index) => {
-    const first = uses.value.find((u) => u.index === index)?.writes[0]
-    if (first !== undefined) selectedRegister.value = first
+    const first = index === null ? null : firstWritten(registerGroups.value, index)
+    if (first !== null) selectedRegister.value = first
   })
 
   async function run(): Promise<void> {
     if (!machine.value) return
     runStartedAt.value = performance.now()
     performance.mark(RUN_MARK)
-    tracedProgram.value = assembled.value
     await sim.run(source.value, machine.value, { fpReductionOrder: fpOrder.value })
     const t = trace.value
     if (!t) return
@@ -218,7 +213,7 @@ export const useBenchStore = defineStore('bench', () => {
 
   return {
     exampleId, source, presetId, machineDraft, autoRun, fpOrder, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
-    assembled, program, machine, fieldErrors, summary, preset, trace, traceIndex, events, explanation, rows, uses, registers, dependencies, cycleState, cycles, view,
+    assembled, program, machine, fieldErrors, summary, preset, trace, traceIndex, events, explanation, rows, registerGroups, registers, dependencies, cycleState, cycles, view,
     functional: sim.functional, error: sim.error, progress: sim.progress, running: sim.running,
     run, cancel: sim.cancel, scheduleRun, loadExample, setSource, applyPreset, resetMachine, setMachineField,
     setCursor, step, toNextEvent, toPreviousEvent, play, pause, togglePlay, setView, $reset,

@@ -3,16 +3,23 @@
  * Worker entry so that tests can call it directly. It drives the pure pipeline
  * (shared/sim/run.ts) step by step, and between steps gives the event loop a
  * turn once a time budget is spent: that is where progress is reported and a
- * cancel call gets through. The trace goes back in its compact form, its
- * buffers transferred, not copied.
+ * cancel call gets through. The trace goes back in its compact form, with the
+ * register use of each dynamic instruction, their buffers transferred, not copied.
  */
 import * as Comlink from 'comlink'
 import { runPipelineSteps, type FunctionalResult, type RunError, type RunInput, type RunOptions, type RunProgress } from '@shared/sim/run'
+import { registerGroupTransferables, type RegisterGroups } from '@shared/sim/registerGroups'
 import { encodeTrace, transferablesOf, type CompactTrace } from '@shared/sim/trace/compact'
 
 export type WorkerRunResult =
-  | { ok: true; trace: CompactTrace; functional: FunctionalResult; error?: undefined }
-  | { ok: false; error: RunError; /** The partial trace of a run cut short by a limit. */ trace?: CompactTrace }
+  | { ok: true; trace: CompactTrace; functional: FunctionalResult; registers: RegisterGroups; error?: undefined }
+  | {
+      ok: false
+      error: RunError
+      /** The partial trace of a run cut short by a limit, and the register use of its stream. */
+      trace?: CompactTrace
+      registers?: RegisterGroups
+    }
 
 export type ProgressCallback = (progress: RunProgress) => void
 
@@ -33,6 +40,7 @@ export function createSimulatorService(options: SimulatorServiceOptions = {}) {
 
   const withTransfer = (r: WorkerRunResult): WorkerRunResult => {
     const buffers = new Set<ArrayBuffer>(r.trace ? transferablesOf(r.trace) : [])
+    for (const b of r.registers ? registerGroupTransferables(r.registers) : []) buffers.add(b)
     if (r.ok) {
       for (const a of [...r.functional.v, r.functional.memory, r.functional.output]) {
         if (a.buffer instanceof ArrayBuffer) buffers.add(a.buffer)
@@ -54,8 +62,9 @@ export function createSimulatorService(options: SimulatorServiceOptions = {}) {
           const step = steps.next()
           if (step.done) {
             const r = step.value
-            if (r.ok) return withTransfer({ ok: true, trace: encodeTrace(r.trace), functional: r.functional })
-            return withTransfer({ ok: false, error: r.error, ...(r.trace ? { trace: encodeTrace(r.trace) } : {}) })
+            if (r.ok) return withTransfer({ ok: true, trace: encodeTrace(r.trace), functional: r.functional, registers: r.registers })
+            const partial = r.trace ? { trace: encodeTrace(r.trace), ...(r.registers ? { registers: r.registers } : {}) } : {}
+            return withTransfer({ ok: false, error: r.error, ...partial })
           }
           if (now() - sliceStart >= sliceMs) {
             // A proxied callback answers with a promise; progress is best effort, never awaited.

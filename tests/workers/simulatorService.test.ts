@@ -5,13 +5,16 @@
  */
 import { readFileSync } from 'node:fs'
 import { join } from 'node:path'
+import * as Comlink from 'comlink'
 import { describe, expect, it } from 'vitest'
 import { defaultMachine } from '../../shared/schemas/machine'
 import { runPipeline } from '../../shared/sim/run'
 import { decodeTrace } from '../../shared/sim/trace/compact'
 import { readDump } from '../../shared/sim/exec/dump'
+import { execute } from '../../shared/sim/exec/execute'
+import { registerGroupsOf } from '../../shared/sim/registerGroups'
 import { assemble } from '../../shared/sim/isa/assembler'
-import { createSimulatorService } from '../../src/workers/simulatorService'
+import { createSimulatorService, type SimulatorService } from '../../src/workers/simulatorService'
 import { elementSum, machine as fpMachine, machineSum, program as fpProgram } from '../sim/fpOrderFixture'
 
 const longStream = readFileSync(join(import.meta.dirname, '..', '..', 'examples', 'long-stream.s'), 'utf8')
@@ -82,5 +85,35 @@ describe('the simulator Worker service', () => {
     const asm = assemble(fpProgram)
     if (!asm.ok) throw new Error('fixture does not assemble')
     expect(readDump(asm.program, r.functional.memory, { label: 'sum', count: 1, type: 'f32' })).toEqual({ ok: true, values: [expected] })
+  })
+
+  it('returns each dynamic instruction\'s registers, equal to those of the dynamic stream, across a real message channel', async () => {
+    // Comlink over a MessageChannel, as the page talks to the Worker: the typed arrays must survive structured cloning or transfer.
+    const { port1, port2 } = new MessageChannel()
+    Comlink.expose(eager(), port1)
+    const remote = Comlink.wrap<SimulatorService>(port2)
+    try {
+      const r = await remote.simulate(saxpy, defaultMachine)
+      if (!r.ok) throw new Error(r.error.message)
+      const asm = assemble(saxpy)
+      if (!asm.ok) throw new Error('saxpy does not assemble')
+      const run = execute(asm.program, { vlen: defaultMachine.vlen })
+      if (!run.ok) throw new Error(run.error.message)
+      const expected = registerGroupsOf(run.stream)
+      expect(r.registers.count).toBe(r.trace.instructions.count)
+      expect(r.registers.writes).toBeInstanceOf(Uint32Array)
+      expect(r.registers).toEqual(expected)
+    } finally {
+      port1.close()
+      port2.close()
+    }
+  })
+
+  it('returns the register use with a partial trace cut short by the cycle limit', async () => {
+    const r = await eager().simulate(longStream, defaultMachine, { timing: { cycleLimit: 50 } })
+    expect(r).toMatchObject({ ok: false, error: { code: 'cycle-limit' } })
+    if (r.ok) return
+    expect(r.trace).toBeDefined()
+    expect(r.registers?.count).toBe(r.trace?.instructions.count)
   })
 })

@@ -1,98 +1,71 @@
 /**
- * Which architectural vector registers each traced instruction writes and
- * reads, from its static instruction (operands and the instruction table's
- * register-group sizes) and the LMUL it ran with. This feeds the dependency
- * overlay and the register picker of the Cycle inspector; the Worker returns
- * the trace, not the dynamic stream, so the Bench derives it here.
+ * Producers, consumers and written registers of a run, from the register use
+ * of each dynamic instruction that the Worker returns with the trace
+ * (shared/sim/registerGroups.ts). This feeds the dependency overlay and the
+ * register picker of the Cycle inspector. Instructions are trace positions
+ * (InstructionTrace.index).
+ *
+ * A source group's producer is the last earlier instruction that wrote any
+ * register of that group; a mask read is the group {v0}.
  *
  * @example
- *   const use = registerUse(trace, program)
- *   dependenciesOf(use, 3) // [{ from: 1, to: 3 }, { from: 3, to: 4 }]
+ *   dependenciesOf(sim.registers.value, 3) // [{ from: 1, to: 3 }, { from: 3, to: 4 }]
  */
-import { opInfo, type VGroup } from '@shared/sim/isa'
-import type { Program } from '@shared/sim/isa/types'
-import type { InstructionTrace, TimingTrace } from '@shared/sim/trace/types'
+import { registersIn, type RegisterGroups } from '@shared/sim/registerGroups'
+import type { DependencyPair } from '@/lib/lanechart/dependencies'
 
-export interface RegisterUse {
-  /** InstructionTrace.index */
-  index: number
-  writes: number[]
-  reads: number[]
-}
+const groupsOf = (g: RegisterGroups, i: number) => g.sources.subarray(g.sourceStart[i], g.sourceStart[i + 1])
 
-function groupSize(group: VGroup | undefined, ins: InstructionTrace, eew: number | undefined): number {
-  if (!group || group === 'single') return 1
-  const lmul = group === 'eew' && eew ? (eew / ins.sew) * ins.lmul : ins.lmul
-  return Math.max(1, Math.min(8, lmul))
-}
-
-const range = (base: number, n: number) => Array.from({ length: n }, (_, k) => base + k).filter((r) => r < 32)
-
-export function registerUse(trace: TimingTrace, program: Program): RegisterUse[] {
-  return trace.instructions.map((ins) => {
-    const st = program.instructions[ins.staticIndex]
-    const info = st ? opInfo(st.op) : undefined
-    if (!st || !info || ins.isConfig) return { index: ins.index, writes: [], reads: [] }
-    const o = st.operands
-    const g = info.groups
-    const reads: number[] = []
-    const writes: number[] = []
-    const isStore = info.memory?.isStore ?? false
-    if (o.vd !== undefined && g.vd) {
-      const regs = range(o.vd, groupSize(g.vd, ins, info.eew))
-      if (isStore || info.readsVd) reads.push(...regs)
-      if (!isStore && ins.shape !== 'scalar-result') writes.push(...regs)
-    }
-    if (o.vs1 !== undefined && g.vs1) reads.push(...range(o.vs1, groupSize(g.vs1, ins, info.eew)))
-    if (o.vs2 !== undefined && g.vs2) reads.push(...range(o.vs2, groupSize(g.vs2, ins, info.eew)))
-    if (ins.masked) reads.push(0)
-    return { index: ins.index, writes: [...new Set(writes)], reads: [...new Set(reads)] }
-  })
+/** The producer of one source group read by instruction `at`: the last earlier writer of any of its registers, or -1. */
+function producerOf(g: RegisterGroups, at: number, group: number): number {
+  for (let i = at - 1; i >= 0; i--) if ((g.writes[i]! & group) !== 0) return i
+  return -1
 }
 
 /**
- * Producer -> consumer arrows through registers (read after write) for one
- * instruction: from the last earlier writer of each register it reads, and to
- * each later reader of a register it writes, until that register is written again.
+ * Producer -> consumer arrows for one instruction: from the producer of each
+ * group it reads, and to each later instruction that reads a group it is the
+ * producer of.
  */
-export function dependenciesOf(uses: RegisterUse[], index: number): { from: number; to: number }[] {
-  const at = uses.findIndex((u) => u.index === index)
-  const me = uses[at]
-  if (!me) return []
-  const out: { from: number; to: number }[] = []
-  const seen = new Set<string>()
-  const add = (from: number, to: number) => {
-    const key = `${from}>${to}`
-    if (!seen.has(key)) {
-      seen.add(key)
-      out.push({ from, to })
+export function dependenciesOf(g: RegisterGroups | null, index: number): DependencyPair[] {
+  if (!g || !Number.isInteger(index) || index < 0 || index >= g.count) return []
+  const out: DependencyPair[] = []
+  const seen = new Set<number>()
+  for (const group of groupsOf(g, index)) {
+    const p = producerOf(g, index, group)
+    if (p >= 0 && !seen.has(p)) {
+      seen.add(p)
+      out.push({ from: p, to: index })
     }
   }
-  for (const r of me.reads) {
-    for (let i = at - 1; i >= 0; i--) {
-      if (uses[i]?.writes.includes(r)) {
-        add(uses[i]!.index, me.index)
-        break
-      }
-    }
-  }
-  for (const r of me.writes) {
-    for (let i = at + 1; i < uses.length; i++) {
-      const u = uses[i]!
-      if (u.reads.includes(r)) add(me.index, u.index)
-      if (u.writes.includes(r)) break
-    }
+  const mine = g.writes[index]!
+  // Registers written after `index` so far: a group touching one of them has a younger producer.
+  let since = 0
+  for (let u = index + 1; u < g.count && (mine & ~since) !== 0; u++) {
+    if (groupsOf(g, u).some((group) => (group & mine) !== 0 && (group & since) === 0)) out.push({ from: index, to: u })
+    since |= g.writes[u]!
   }
   return out
 }
 
-/** The last instruction writing register `reg` (position in the trace), or -1. */
-export function lastWriter(uses: RegisterUse[], reg: number): number {
-  for (let i = uses.length - 1; i >= 0; i--) if (uses[i]?.writes.includes(reg)) return i
+/** The last instruction writing register `reg`, or -1. */
+export function lastWriter(g: RegisterGroups | null, reg: number): number {
+  if (!g) return -1
+  const bit = 1 << reg
+  for (let i = g.count - 1; i >= 0; i--) if ((g.writes[i]! & bit) !== 0) return i
   return -1
 }
 
 /** Registers written anywhere in the run, ascending. */
-export function writtenRegisters(uses: RegisterUse[]): number[] {
-  return [...new Set(uses.flatMap((u) => u.writes))].sort((a, b) => a - b)
+export function writtenRegisters(g: RegisterGroups | null): number[] {
+  if (!g) return []
+  let all = 0
+  for (let i = 0; i < g.count; i++) all |= g.writes[i]!
+  return registersIn(all >>> 0)
+}
+
+/** The lowest register an instruction writes (the base of its destination group), or null. */
+export function firstWritten(g: RegisterGroups | null, index: number): number | null {
+  if (!g || index < 0 || index >= g.count) return null
+  return registersIn(g.writes[index]!)[0] ?? null
 }

@@ -5,7 +5,7 @@
  * else the end of its last phase) to the consumer's first read that can take
  * it: the cycle after that write, kept within the consumer's read phase (or
  * the consumer's first phase when it has no reads). The trace carries no register operands,
- * so the pairs come from the caller (the Bench derives them from the program).
+ * so the pairs come from the caller (from the register use the run returns).
  *
  * @example
  *   dependencyArrows(trace, layout, [{ from: 3, to: 5 }], 5)

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
-import { assemble } from '@shared/sim/isa'
+import { registersIn } from '@shared/sim/registerGroups'
 import { elementWriteStates, formatElements, halfToNumber, writesFloat } from '@/lib/bench/registerValues'
-import { dependenciesOf, lastWriter, registerUse, writtenRegisters } from '@/lib/bench/registerUse'
+import { dependenciesOf, firstWritten, lastWriter, writtenRegisters } from '@/lib/bench/registerUse'
 import { instructionRows, lmulText } from '@/lib/bench/instructionRows'
 import { run, singleAdd } from './fixtures'
 
@@ -61,41 +61,45 @@ describe('elementWriteStates', () => {
   })
 })
 
-describe('registerUse and dependencies', () => {
-  const src = `    li a0, 8
+describe('register use and dependencies from the dynamic stream', () => {
+  const src = `    la a1, d
+    li a0, 8
     vsetvli t0, a0, e64, m1, ta, ma
     vle64.v v8, (a1)
     vfadd.vv v4, v8, v8
     vfmacc.vv v4, v8, v8
     vse64.v v4, (a1)
+    .data
+d: .zero 64
 `
-  const r = run(src.replace('vle64.v v8, (a1)', 'la a1, d\n    vle64.v v8, (a1)') + '    .data\nd: .zero 64\n')
-  const a = assemble(src.replace('vle64.v v8, (a1)', 'la a1, d\n    vle64.v v8, (a1)') + '    .data\nd: .zero 64\n')
-  if (!a.ok) throw new Error('fixture does not assemble')
-  const uses = registerUse(r.trace, a.program)
+  const r = run(src)
+  const g = r.registers
+  const use = (i: number) => [registersIn(g.writes[i]!), Array.from(g.sources.subarray(g.sourceStart[i], g.sourceStart[i + 1]), registersIn)]
 
   it('reads vd for multiply-accumulate and stores, writes it otherwise (RISC-V V 1.0 sections 7, 13.6)', () => {
-    expect(uses.map((u) => [u.writes, u.reads])).toEqual([
+    expect([0, 1, 2, 3, 4].map(use)).toEqual([
       [[], []],
       [[8], []],
-      [[4], [8]],
-      [[4], [4, 8]],
-      [[], [4]],
+      [[4], [[8], [8]]],
+      [[4], [[8], [8], [4]]],
+      [[], [[4]]],
     ])
   })
 
   it('links producers and consumers of the selected instruction through registers', () => {
-    expect(dependenciesOf(uses, 3)).toEqual([
-      { from: 2, to: 3 },
+    expect(dependenciesOf(g, 3)).toEqual([
       { from: 1, to: 3 },
+      { from: 2, to: 3 },
       { from: 3, to: 4 },
     ])
   })
 
-  it('finds the last writer of a register and the registers written', () => {
-    expect(lastWriter(uses, 4)).toBe(3)
-    expect(lastWriter(uses, 30)).toBe(-1)
-    expect(writtenRegisters(uses)).toEqual([4, 8])
+  it('finds the last writer of a register, the registers written and an instruction\'s first destination', () => {
+    expect(lastWriter(g, 4)).toBe(3)
+    expect(lastWriter(g, 30)).toBe(-1)
+    expect(writtenRegisters(g)).toEqual([4, 8])
+    expect(firstWritten(g, 1)).toBe(8)
+    expect(firstWritten(g, 4)).toBeNull()
   })
 
   it('gives table rows with first read, last write and the vtype', () => {
@@ -103,6 +107,50 @@ describe('registerUse and dependencies', () => {
     expect(rows[3]).toMatchObject({ index: 3, vtype: 'e64/m1', vl: 8 })
     expect(rows[3]!.firstRead).toBeLessThanOrEqual(rows[3]!.lastWrite!)
     expect(rows[0]).toMatchObject({ firstRead: null, lastWrite: null })
+  })
+
+  // Register groups: with LMUL = 2, v8 names the group v8..v9 (RISC-V V 1.0 section 3.4.2).
+  const grouped = run(`    li a0, 4
+    vsetvli t0, a0, e64, m2, ta, ma
+    vid.v v8
+    vsetvli t0, a0, e64, m1, ta, ma
+    vid.v v9
+    vsetvli t0, a0, e64, m2, ta, ma
+    vadd.vv v12, v8, v8
+    vadd.vv v8, v10, v10
+    vadd.vv v14, v8, v8
+`).registers
+
+  it('takes as producer of a group the last instruction that wrote any of its registers (the m1 write of v9, not the m2 write of v8..v9)', () => {
+    expect(registersIn(grouped.writes[1]!)).toEqual([8, 9])
+    expect(dependenciesOf(grouped, 5)).toEqual([{ from: 3, to: 5 }])
+    expect(dependenciesOf(grouped, 1)).toEqual([])
+  })
+
+  it('stops linking consumers once every register the instruction wrote was written again', () => {
+    expect(dependenciesOf(grouped, 3)).toEqual([{ from: 3, to: 5 }])
+    expect(dependenciesOf(grouped, 6)).toEqual([{ from: 6, to: 7 }])
+  })
+
+  // A masked instruction reads v0 as its mask (RISC-V V 1.0 section 5.3).
+  const masked = run(`    li a0, 4
+    vsetvli t0, a0, e64, m1, ta, mu
+    vid.v v4
+    vmsgt.vi v0, v4, 1
+    vadd.vv v8, v4, v4, v0.t
+`).registers
+
+  it('counts the mask as a source group {v0}', () => {
+    expect(dependenciesOf(masked, 3)).toEqual([
+      { from: 1, to: 3 },
+      { from: 2, to: 3 },
+    ])
+    expect(dependenciesOf(masked, 2)).toEqual([{ from: 1, to: 2 }, { from: 2, to: 3 }])
+  })
+
+  it.each([[-1], [99], [1.5]])('has no dependencies for an instruction %s outside the run', (i) => {
+    expect(dependenciesOf(g, i)).toEqual([])
+    expect(dependenciesOf(null, 0)).toEqual([])
   })
 })
 
