@@ -3,7 +3,8 @@
  * instruction, so that a reload or a shared URL shows the same view.
  * Query keys: `cycle`, `from` and `to` (the zoom window's start and end
  * cycles as the Lane chart reports them), `sel` (an InstructionTrace.index).
- * Anything malformed is dropped, never guessed.
+ * Anything malformed is dropped, never guessed. Other keys of the query (e.g.
+ * `scenario`, which the Scenarios page sets) belong to others and are kept.
  *
  * @example
  *   encodeView({ cursor: 40, window: { start: 0, end: 120 }, selected: 3 }) // { cycle: '40', from: '0', to: '120', sel: '3' }
@@ -55,6 +56,16 @@ export function encodeView(view: BenchView): Record<string, string> {
   }
   if (view.selected !== null) q.sel = String(view.selected)
   return q
+}
+
+/** The query keys the view owns. */
+export const VIEW_KEYS = ['cycle', 'from', 'to', 'sel'] as const
+
+/** `query` with the view's keys replaced by `view`'s entries, every other key kept as it is. */
+export function withView(query: Record<string, QueryValue>, view: BenchView): Record<string, QueryValue> {
+  const out: Record<string, QueryValue> = {}
+  for (const [key, value] of Object.entries(query)) if (!(VIEW_KEYS as readonly string[]).includes(key)) out[key] = value
+  return { ...out, ...encodeView(view) }
 }
 
 /** True when two views would write the same query. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { decodeView, encodeView, sameView, EMPTY_VIEW } from '@/lib/bench/viewState'
+import { decodeView, encodeView, sameView, withView, EMPTY_VIEW } from '@/lib/bench/viewState'
 
 describe('the view in the URL', () => {
   it('round-trips cursor, window and selection', () => {
@@ -32,5 +32,14 @@ describe('the view in the URL', () => {
   it('compares views by what they write', () => {
     expect(sameView({ cursor: 4.2, window: null, selected: null }, { cursor: 4, window: null, selected: null })).toBe(true)
     expect(sameView({ cursor: 4, window: null, selected: 1 }, { cursor: 4, window: null, selected: 2 })).toBe(false)
+  })
+
+  it('keeps query keys it does not own (scenario, repeated values) and replaces its own', () => {
+    const query = { scenario: 'abc-123', cycle: '7', sel: '2', tag: ['a', 'b'], from: '1', to: '9' }
+    expect(withView(query, { cursor: 40, window: null, selected: null })).toEqual({ scenario: 'abc-123', tag: ['a', 'b'], cycle: '40' })
+  })
+
+  it('leaves only the other keys when the view is empty', () => {
+    expect(withView({ scenario: 'abc-123', cycle: '7' }, EMPTY_VIEW)).toEqual({ scenario: 'abc-123' })
   })
 })
