@@ -15,7 +15,7 @@ import { clampCycle, nextEvent, previousEvent, scrubberEvents } from '@/lib/benc
 import { exampleList, type Example } from '@/lib/bench/examples'
 import { indexTrace, inspectCycle } from '@/lib/bench/inspector'
 import { instructionRows } from '@/lib/bench/instructionRows'
-import { issuesByField, machineSummary, setField } from '@/lib/bench/machineFields'
+import { issuesByField, machineSummary, matchingPreset, setField } from '@/lib/bench/machineFields'
 import { dependenciesOf, firstWritten, writtenRegisters } from '@/lib/bench/registerUse'
 import { explainStalls } from '@/lib/bench/stallExplanation'
 import { EMPTY_VIEW, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
@@ -74,7 +74,10 @@ export const useBenchStore = defineStore('bench', () => {
   const machine = computed(() => (machineCheck.value.ok ? machineCheck.value.machine : null))
   const fieldErrors = computed(() => (machineCheck.value.ok ? {} : issuesByField(machineCheck.value.issues)))
   const summary = computed(() => machineSummary(machine.value ?? machineDraft.value))
+  /** The preset last chosen: what "Reset to preset" goes back to. */
   const preset = computed(() => PRESETS.find((p) => p.id === presetId.value) ?? null)
+  /** The preset the machine equals now (the preset box shows it), or null for a machine of the user's own. */
+  const currentPreset = computed(() => matchingPreset(machine.value, PRESETS))
 
   const trace = sim.trace
   const traceIndex = computed(() => (trace.value ? indexTrace(trace.value) : null))
@@ -213,7 +216,7 @@ export const useBenchStore = defineStore('bench', () => {
 
   return {
     exampleId, source, presetId, machineDraft, autoRun, fpOrder, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
-    assembled, program, machine, fieldErrors, summary, preset, trace, traceIndex, events, explanation, rows, registerGroups, registers, dependencies, cycleState, cycles, view,
+    assembled, program, machine, fieldErrors, summary, preset, currentPreset, trace, traceIndex, events, explanation, rows, registerGroups, registers, dependencies, cycleState, cycles, view,
     functional: sim.functional, error: sim.error, progress: sim.progress, running: sim.running,
     run, cancel: sim.cancel, scheduleRun, loadExample, setSource, applyPreset, resetMachine, setMachineField,
     setCursor, step, toNextEvent, toPreviousEvent, play, pause, togglePlay, setView, $reset,

@@ -10,7 +10,8 @@
  *   machineFields().find((f) => f.path === 'lanes') // { kind: 'integer', min: 1, max: 64, default: 8, help: 'Number of lanes; ...' }
  */
 import { z } from 'zod'
-import { machineSchema, type Machine, type MachineFieldIssue, type MachineInput } from '@shared/schemas/machine'
+import { machineSchema, parseMachine, type Machine, type MachineFieldIssue, type MachineInput } from '@shared/schemas/machine'
+import type { Preset } from '@shared/sim/presets'
 
 export type FieldKind = 'integer' | 'enum' | 'boolean'
 
@@ -165,6 +166,12 @@ export function changedFields(a: Machine, b: Machine): string[] {
   return machineFields()
     .map((f) => f.path)
     .filter((p) => getField(a, p) !== getField(b, p))
+}
+
+/** The preset whose machine equals `m` field for field, or null (a machine of the user's own, or an invalid draft). */
+export function matchingPreset(m: Machine | null, presets: readonly Preset[]): Preset | null {
+  if (!m) return null
+  return presets.find((p) => changedFields(m, parseMachine(p.machine)).length === 0) ?? null
 }
 
 /**

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
-import { GROUPS, changedFields, getField, issuesByField, machineFields, machineSummary, setField } from '@/lib/bench/machineFields'
+import { GROUPS, changedFields, getField, issuesByField, machineFields, machineSummary, matchingPreset, setField } from '@/lib/bench/machineFields'
 import { checkMachine, defaultMachine, parseMachine } from '@shared/schemas/machine'
+import { PRESETS } from '@shared/sim/presets'
 
 describe('machineFields', () => {
   const fields = machineFields()
@@ -69,5 +70,19 @@ describe('machineSummary', () => {
     [{ lanes: 1, vlen: 4096, issue: 'serial' as const, chaining: false, rfPortsPerBank: 2 }, '1 lane, VLEN 4096, serial, 6x2 banks, no chaining'],
   ])('summarises %j', (input, expected) => {
     expect(machineSummary(parseMachine(input))).toBe(expected)
+  })
+})
+
+describe('matchingPreset', () => {
+  it.each(PRESETS.map((p) => [p.name, p] as const))('finds %s from its machine, whatever the order of its fields', (_name, p) => {
+    const m = parseMachine(p.machine)
+    const reordered = Object.fromEntries(Object.entries(m).reverse()) as typeof m
+    expect(matchingPreset(reordered, PRESETS)?.id).toBe(p.id)
+  })
+
+  it('finds none for a machine of the user\'s own (one field changed), nor for an invalid draft', () => {
+    const p = PRESETS[1]!
+    expect(matchingPreset(setField(parseMachine(p.machine), 'units.fpu.latency', 7), PRESETS)).toBeNull()
+    expect(matchingPreset(null, PRESETS)).toBeNull()
   })
 })
