@@ -8,6 +8,7 @@ import type { AppContext } from './context'
 import { connect } from './db/connection'
 import { createMailer, sinkSmtpUrl } from './services/mailer'
 import { createRunPool } from './services/run-pool'
+import { createShareBodyCache } from './services/share-bodies'
 import { startSmtpSink, type SmtpSink } from './services/smtp-sink'
 
 export interface Runtime {
@@ -34,7 +35,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   const sink = config.smtpUrl ? null : await startSmtpSink(config.smtpSinkPort, logger)
   const mailer = createMailer(config.smtpUrl ?? sinkSmtpUrl((sink as SmtpSink).port), config.mailFrom)
   const runs = createRunPool(config.saveRuns)
-  const ctx: AppContext = { config, sequelize, mailer, logger, runs }
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs, shareBodies: createShareBodyCache() }
   const app = buildApp(ctx)
   return {
     ctx,

@@ -5,6 +5,7 @@ import type { Runtime } from '../../server/runtime'
 import { createShareLinkResponseSchema, shareLinkListResponseSchema, sharedScenarioResponseSchema } from '../../shared/schemas/share-link'
 import { scenarioResponseSchema } from '../../shared/schemas/scenario'
 import { buildUser, startTestServer, waitForMail } from './helpers'
+import { createShareBodyCache, type SharedBody } from '../../server/services/share-bodies'
 import { buildScenario, buildTeam, content, type Team } from './scenario-helpers'
 
 let runtime: Runtime
@@ -138,6 +139,54 @@ describe('share links', () => {
     expect(copied.workspaceId).toBe(own.id)
     expect(copied.content).toEqual({ ...scenario.content, view: { cursor: 7, window: null, selected: null } })
     expect(copied.author.name).toBe('Rita Reader')
+  })
+})
+
+describe('the cache of shared versions', () => {
+  it('keeps a link\'s version body after the first open and serves the same body from it', async () => {
+    const { token, link } = await makeLink()
+    expect(runtime.ctx.shareBodies.has(link.id)).toBe(false)
+    const first = sharedScenarioResponseSchema.parse((await api().get(`/api/shares/${token}`).expect(200)).body).share
+    expect(runtime.ctx.shareBodies.get(link.id)?.content).toEqual(first.content)
+    const second = sharedScenarioResponseSchema.parse((await api().get(`/api/shares/${token}`).expect(200)).body).share
+    expect(second).toEqual(first)
+  })
+
+  it('a revoke takes effect at once for a cached link, through the API and from another process alike', async () => {
+    const byApi = await makeLink()
+    await api().get(`/api/shares/${byApi.token}`).expect(200)
+    await api().post(`/api/workspaces/${team.workspace.id}/share-links/${byApi.link.id}/revoke`).set(team.owner.auth).expect(200)
+    expect((await api().get(`/api/shares/${byApi.token}`)).body.error.code).toBe('share_revoked')
+    expect(runtime.ctx.shareBodies.has(byApi.link.id)).toBe(false)
+
+    // Another server process revoking writes only the row: this process checks it on every open.
+    const elsewhere = await makeLink()
+    await api().get(`/api/shares/${elsewhere.token}`).expect(200)
+    expect(runtime.ctx.shareBodies.has(elsewhere.link.id)).toBe(true)
+    await ShareLink.update({ revokedAt: new Date() }, { where: { id: elsewhere.link.id } })
+    expect((await api().get(`/api/shares/${elsewhere.token}`)).body.error.code).toBe('share_revoked')
+  })
+
+  it('counts only the opens it allows', async () => {
+    const { token, link } = await makeLink({ accessMode: 'workspace' })
+    await api().get(`/api/shares/${token}`).expect(401)
+    await api().get(`/api/shares/${token}`).set(team.outsider.auth).expect(404)
+    await api().get(`/api/shares/${token}`).set(team.viewer.auth).expect(200)
+    const row = await ShareLink.findByPk(link.id)
+    expect(row?.openCount).toBe(1)
+  })
+
+  it('is bounded by entries and by size, dropping the least recently used first', () => {
+    const cache = createShareBodyCache({ entries: 2, size: 10_000 })
+    const body = (title: string, program = '') => ({ number: 1, message: '', author: { id: null, name: 'A' }, createdAt: new Date(0).toISOString(), content: { ...content({ title, program }), description: '', initialData: [], view: { cursor: null, window: null, selected: null } }, run: { status: 'failed', stage: 'assemble', code: 'x', message: '' } }) as SharedBody
+    cache.set('a', body('A'))
+    cache.set('b', body('B'))
+    cache.get('a')
+    cache.set('c', body('C'))
+    expect([...cache.keys()].sort()).toEqual(['a', 'c'])
+    // One body over the whole size budget is not kept at all.
+    cache.set('big', body('Big', 'x'.repeat(20_000)))
+    expect(cache.has('big')).toBe(false)
   })
 })
 

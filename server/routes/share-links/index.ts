@@ -27,7 +27,7 @@ export function shareLinkRoutes(ctx: AppContext, r: SecureRouter): void {
   })
 
   r.post('/workspaces/:id/share-links/:linkId/revoke', { access: access.workspace(shareLinkPermissions.revoke) }, async (req, res) => {
-    res.json({ link: await links.revokeShareLink(currentUser(req), currentMembership(req), String(req.params.linkId)) })
+    res.json({ link: await links.revokeShareLink(ctx, currentUser(req), currentMembership(req), String(req.params.linkId)) })
   })
 
   r.post('/workspaces/:id/share-links/:linkId/email', { access: access.workspace(shareLinkPermissions.email), body: emailShareLinkBodySchema }, async (req, res) => {

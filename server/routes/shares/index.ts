@@ -16,6 +16,6 @@ export function shareRoutes(ctx: AppContext, r: SecureRouter): void {
   r.get('/shares/:token', { access: access.public, before: [optionalAuth(ctx)] }, async (req, res) => {
     // A shared version never changes, but revocation must take effect at once.
     res.setHeader('Cache-Control', 'no-store')
-    res.json({ share: await openShare(String(req.params.token), optionalUser(req)) })
+    res.json({ share: await openShare(ctx, String(req.params.token), optionalUser(req)) })
   })
 }
