@@ -371,6 +371,10 @@ test.describe('layout from a 1280x800 laptop to 4K', () => {
       await expect(page.getByTestId('scenario-table').locator('tbody tr').first()).toBeVisible()
       await screenshot(page, `layout-scenarios-${name}`)
       expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(size.width)
+      // A row is read across: on a wide screen the table stops at 2000 px, centred, so a title stays near its Open button.
+      const table = (await page.getByTestId('scenario-table').boundingBox())!
+      expect(table.width).toBeLessThanOrEqual(2000)
+      expect(Math.abs(table.x - (size.width - table.x - table.width))).toBeLessThan(40)
     })
   }
 })
