@@ -42,7 +42,7 @@ export const DOCUMENTED_ROUTES: DocumentedRoute[] = [
   { method: 'get', path: '/api/health', summary: 'Version and database state', access: 'anyone', ok: 200, response: healthResponseSchema },
   { method: 'post', path: '/api/auth/signup', summary: 'Create an account; sets the refresh cookie', access: 'anyone (rate limited)', body: auth.signUpBodySchema, ok: 201, response: auth.authResponseSchema },
   { method: 'post', path: '/api/auth/signin', summary: 'Sign in; sets the refresh cookie', access: 'anyone (rate limited)', body: auth.signInBodySchema, ok: 200, response: auth.authResponseSchema },
-  { method: 'post', path: '/api/auth/refresh', summary: 'New access token from the refresh cookie (rotated)', access: 'refresh cookie', ok: 200, response: auth.authResponseSchema },
+  { method: 'post', path: '/api/auth/refresh', summary: 'New access token from the refresh cookie (rotated); `{ user: null }` without any cookie; 401 for a cookie that is unknown, expired or reused', access: 'refresh cookie', ok: 200, response: auth.refreshResponseSchema },
   { method: 'post', path: '/api/auth/signout', summary: 'End the session', access: 'anyone', ok: 204 },
   { method: 'post', path: '/api/auth/forgot', summary: 'E-mail a reset link (always 202)', access: 'anyone (rate limited)', body: auth.forgotBodySchema, ok: 202 },
   { method: 'post', path: '/api/auth/reset', summary: 'Set a new password with a reset token', access: 'anyone (rate limited)', body: auth.resetBodySchema, ok: 200, response: auth.authResponseSchema },

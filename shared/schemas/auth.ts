@@ -58,6 +58,18 @@ export type ResetBody = z.infer<typeof resetBodySchema>
 export const authResponseSchema = z.object({ user: userSchema, accessToken: z.string().min(1) })
 export type AuthResponse = z.infer<typeof authResponseSchema>
 
+/**
+ * Answer of refresh when the request carries no refresh cookie at all: nobody
+ * is signed in, which is no error (every signed-out page load asks). A cookie
+ * that is present but unknown, expired or reused is still a 401.
+ */
+export const noSessionResponseSchema = z.object({ user: z.null() })
+export type NoSessionResponse = z.infer<typeof noSessionResponseSchema>
+
+/** Answer of POST /api/auth/refresh: a new session, or none. */
+export const refreshResponseSchema = z.union([authResponseSchema, noSessionResponseSchema])
+export type RefreshResponse = z.infer<typeof refreshResponseSchema>
+
 /** The refresh cookie (httpOnly, SameSite=Strict, path /api/auth). */
 export const REFRESH_COOKIE_NAME = 'chimeline_refresh'
 export const ACCESS_TOKEN_TTL_SECONDS = 15 * 60

@@ -1,4 +1,4 @@
-import { authResponseSchema, type ForgotBody, type ResetBody, type SignInBody, type SignUpBody } from '@shared/schemas/auth'
+import { authResponseSchema, refreshResponseSchema, type ForgotBody, type ResetBody, type SignInBody, type SignUpBody } from '@shared/schemas/auth'
 import type { Http } from './http'
 
 /** /api/auth: these calls carry the refresh cookie, never the access token, and never retry. */
@@ -8,7 +8,8 @@ export function createAuthApi(http: Http) {
       http.request('/api/auth/signin', { method: 'POST', body, schema: authResponseSchema, auth: false }),
     signUp: (body: SignUpBody) =>
       http.request('/api/auth/signup', { method: 'POST', body, schema: authResponseSchema, auth: false }),
-    refresh: () => http.request('/api/auth/refresh', { method: 'POST', schema: authResponseSchema, auth: false }),
+    /** A new session from the refresh cookie, or `{ user: null }` when the browser has no cookie. */
+    refresh: () => http.request('/api/auth/refresh', { method: 'POST', schema: refreshResponseSchema, auth: false }),
     signOut: () => http.request('/api/auth/signout', { method: 'POST', auth: false }),
     forgot: (body: ForgotBody) => http.request('/api/auth/forgot', { method: 'POST', body, auth: false }),
     reset: (body: ResetBody) =>

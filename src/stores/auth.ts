@@ -38,13 +38,18 @@ export const useAuthStore = defineStore('auth', () => {
    * Trades the refresh cookie for a new access token. Concurrent callers (several
    * requests meeting a 401 at once) share one call, because the server rotates
    * the cookie and a second call with the old one would fail.
-   * Resolves false, signed out, when the cookie is missing, expired or revoked.
+   * Resolves false, signed out, when the cookie is missing (an answer without
+   * a user), or expired or revoked (a 401).
    */
   function refresh(): Promise<boolean> {
     refreshing ??= api.auth
       .refresh()
       .then(
         (session) => {
+          if (session.user === null) {
+            clearSession('expiry')
+            return false
+          }
           setSession(session)
           return true
         },

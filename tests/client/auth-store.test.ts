@@ -15,7 +15,8 @@ afterEach(() => {
 })
 
 const session = (token: string) => json(200, { user: editor, accessToken: token })
-const noCookie = () => apiError(401, 'unauthenticated', 'No session')
+// The server's answer to a refresh without any cookie (tests/server/auth.test.ts checks it).
+const noCookie = () => json(200, { user: null })
 
 describe('the auth store', () => {
   it('restores the session on load from the refresh cookie', async () => {
@@ -33,6 +34,27 @@ describe('the auth store', () => {
     await auth.restore()
     expect(auth.signedIn).toBe(false)
     expect(auth.endedBy).toBeNull()
+  })
+
+  it('stays signed out after load when the refresh cookie is present but refused with 401', async () => {
+    installFakeServer({ 'POST /api/auth/refresh': () => apiError(401, 'unauthenticated', 'Your session has ended; sign in again') })
+    const auth = useAuthStore()
+    await auth.restore()
+    expect(auth.signedIn).toBe(false)
+    expect(auth.endedBy).toBeNull()
+  })
+
+  it('ends a session, marked as expired, when a refresh finds the cookie gone', async () => {
+    installFakeServer({
+      'POST /api/auth/signin': () => session('t1'),
+      'POST /api/auth/refresh': noCookie,
+      'GET /api/me': () => apiError(401, 'unauthenticated', 'expired'),
+    })
+    const auth = useAuthStore()
+    await auth.signIn({ email: editor.email, password: 'chimeline-demo-2026' })
+    await expect(auth.api.workspaces.me()).rejects.toMatchObject({ status: 401 })
+    expect(auth.signedIn).toBe(false)
+    expect(auth.endedBy).toBe('expiry')
   })
 
   it('restores only once however many navigations wait for it', async () => {

@@ -1,7 +1,7 @@
 import request from 'supertest'
 import jwt from 'jsonwebtoken'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { REFRESH_COOKIE_NAME, authResponseSchema } from '../../shared/schemas/auth'
+import { REFRESH_COOKIE_NAME, authResponseSchema, refreshResponseSchema } from '../../shared/schemas/auth'
 import { errorBodySchema } from '../../shared/schemas/errors'
 import { meResponseSchema } from '../../shared/schemas/workspace'
 import { PasswordReset, RefreshToken, User } from '../../server/models'
@@ -170,10 +170,26 @@ describe('refresh and sign-out', () => {
     await api().post('/api/auth/refresh').set('Cookie', next).expect(401)
   })
 
-  it('refuses a refresh without a cookie', async () => {
+  it('answers a refresh without any cookie with 200 and no user (signed out is no error), setting no cookie', async () => {
     const res = await api().post('/api/auth/refresh')
+    expect(res.status).toBe(200)
+    expect(refreshResponseSchema.parse(res.body)).toEqual({ user: null })
+    expect(cookieFrom(res.headers['set-cookie'], REFRESH_COOKIE_NAME)).toBeUndefined()
+  })
+
+  it.each([
+    ['an unknown token', `${REFRESH_COOKIE_NAME}=not-a-token-we-issued`],
+    ['an empty value', `${REFRESH_COOKIE_NAME}=`],
+  ])('still refuses a refresh cookie that is present but invalid (%s) with 401', async (_what, cookie) => {
+    const res = await api().post('/api/auth/refresh').set('Cookie', cookie)
     expect(res.status).toBe(401)
     expect(res.body.error.code).toBe('unauthenticated')
+  })
+
+  it('refuses an expired refresh cookie with 401', async () => {
+    const { user, cookie } = await signIn()
+    await RefreshToken.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { userId: user.id } })
+    await api().post('/api/auth/refresh').set('Cookie', cookie).expect(401)
   })
 
   it('signs out with 204, clears the cookie and revokes the refresh token', async () => {

@@ -8,6 +8,7 @@ import {
   signInBodySchema,
   signUpBodySchema,
   type ForgotBody,
+  type NoSessionResponse,
   type ResetBody,
   type SignInBody,
   type SignUpBody,
@@ -54,7 +55,13 @@ export function authRoutes(ctx: AppContext, r: SecureRouter): void {
   })
 
   r.post('/auth/refresh', { access: access.public }, async (req, res) => {
-    sendSession(ctx, res, await auth.refresh(ctx, refreshCookie(req.cookies)))
+    const token = refreshCookie(req.cookies)
+    // No cookie at all: simply signed out (200, so browsers log no error on every signed-out load).
+    if (token === undefined) {
+      res.json({ user: null } satisfies NoSessionResponse)
+      return
+    }
+    sendSession(ctx, res, await auth.refresh(ctx, token))
   })
 
   r.post('/auth/signout', { access: access.public }, async (req, res) => {
