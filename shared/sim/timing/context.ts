@@ -40,9 +40,17 @@ export class Ctx {
   readonly storeBusRes: Int32Array
   /** Per lane, this cycle: did the lane read, execute, write or hold results in flight. */
   readonly progress: Uint8Array
-  /** Per lane, this cycle: the oldest blocked instruction and why. */
-  readonly blockSeq: Int32Array
-  readonly blockReason: Int8Array
+  /** The cycle being stepped (notes are only valid within it). */
+  cycle = 0
+  /** Per lane, this cycle: the instructions denied something (each holds its reason in `noteReason`), in note order. */
+  readonly denied: Inst[][]
+  readonly deniedCount: Int32Array
+  /** Per lane, this cycle: the oldest instruction waiting out a latency (load data, ring values) and why. */
+  readonly waitSeq: Int32Array
+  readonly waitReason: Int8Array
+  /** Per lane, this cycle: the oldest instruction in its read phase, and the arithmetic instruction refused a start. */
+  readonly reader: (Inst | null)[]
+  readonly refused: (Inst | null)[]
   /** Link bookings: [link][cycle mod RING_HORIZON] = cycle booked. */
   readonly upBook: Int32Array
   readonly downBook: Int32Array
@@ -86,18 +94,39 @@ export class Ctx {
     }
     rec.seal()
     this.progress = new Uint8Array(L)
-    this.blockSeq = new Int32Array(L)
-    this.blockReason = new Int8Array(L)
+    this.denied = Array.from({ length: L }, () => [])
+    this.deniedCount = new Int32Array(L)
+    this.waitSeq = new Int32Array(L)
+    this.waitReason = new Int8Array(L)
+    this.reader = new Array<Inst | null>(L).fill(null)
+    this.refused = new Array<Inst | null>(L).fill(null)
     this.upBook = new Int32Array(links * RING_HORIZON).fill(-1)
     this.downBook = new Int32Array(links * RING_HORIZON).fill(-1)
     this.laneActive = Array.from({ length: L }, () => [])
   }
 
-  /** Notes that `seq` could not advance in `lane` this cycle; the oldest such instruction names the stall. */
-  block(lane: number, seq: number, reason: number): void {
-    if (seq < (this.blockSeq[lane] ?? 0)) {
-      this.blockSeq[lane] = seq
-      this.blockReason[lane] = reason
+  /**
+   * `inst` asked for something in `lane` this cycle and was refused (a port, a
+   * queue entry, a word not yet written, a start, a link). An instruction
+   * refused several things in one lane-cycle keeps the strongest reason
+   * (`RANK`).
+   */
+  deny(lane: number, inst: Inst, reason: number): void {
+    const c = this.cycle
+    if (inst.noteCycle[lane] !== c) {
+      inst.noteCycle[lane] = c
+      inst.noteReason[lane] = reason
+      const n = this.deniedCount[lane] ?? 0
+      ;(this.denied[lane] as Inst[])[n] = inst
+      this.deniedCount[lane] = n + 1
+    } else if ((RANK[reason] ?? 0) < (RANK[inst.noteReason[lane] ?? 0] ?? 0)) inst.noteReason[lane] = reason
+  }
+
+  /** `inst` waits out a latency in `lane` (load data, values from other lanes): a stall only of a lane that did nothing. */
+  wait(lane: number, seq: number, reason: number): void {
+    if (seq < (this.waitSeq[lane] ?? 0)) {
+      this.waitSeq[lane] = seq
+      this.waitReason[lane] = reason
     }
   }
 
@@ -119,6 +148,15 @@ export class Ctx {
     return (up ? this.upBook : this.downBook)[link * RING_HORIZON + (c % RING_HORIZON)] !== c
   }
 }
+
+/**
+ * Which reason an instruction refused several things in one lane-cycle is
+ * given (lower wins): a denied port first (the cycle went to another access),
+ * then a missing word, a busy link, the memory unit, the lane's issue, and a
+ * full operand queue last (it only says the unit is behind).
+ */
+const RANK = new Int8Array(9)
+;(['bank', 'raw', 'ring', 'memory', 'slot', 'barrier', 'queue', 'rename', 'frontend'] as const).forEach((r, k) => (RANK[REASON[r]] = k))
 
 /** Bookings reach at most lanes x ringHopLatency (64 x 16) cycles ahead. */
 export const RING_HORIZON = 2048

@@ -63,6 +63,8 @@ export interface TimingState {
   readonly memPorts: (MemInst | null)[]
   /** Scratch list of the instructions active in one lane this cycle. */
   readonly active: Inst[]
+  /** Per lane, this cycle: the oldest instruction started there before the cycle (null: none). */
+  readonly oldest: (Inst | null)[]
 }
 
 export function createTimingState(stream: DynamicStream, machine: Machine, options: SimulateOptions = {}): TimingState {
@@ -107,6 +109,7 @@ export function createTimingState(stream: DynamicStream, machine: Machine, optio
     slotRelease: new Int32Array(L),
     memPorts: Array.from({ length: machine.memoryPorts }, () => null),
     active: [],
+    oldest: new Array<Inst | null>(L).fill(null),
   }
   for (let i = 0; i < ops.length; i++) {
     if ((ops[i] as VectorOp).seq !== i) {
@@ -254,12 +257,19 @@ function issueStaggered(s: TimingState, lane: number, c: number): void {
     const prev = k > 0 ? s.arith.at(k - 1) : undefined
     if (prev && (prev.readDone[lane] !== 1 || readEnd(prev, lane, ctx) >= c)) return
     if (inst.hasWorkIn(lane) && (s.slotsUsed[lane] ?? 0) >= s.machine.laneSlots) {
-      ctx.block(lane, inst.seq, REASON.slot)
+      ctx.deny(lane, inst, REASON.slot)
+      ctx.refused[lane] = inst
       return
     }
     startInLane(s, inst, lane, c)
     if (inst.hasWorkIn(lane)) return
   }
+}
+
+/** The lane's next arithmetic instruction may not start this cycle. */
+function refuse(ctx: Ctx, lane: number, inst: Inst, reason: number): void {
+  ctx.deny(lane, inst, reason)
+  ctx.refused[lane] = inst
 }
 
 /** Policies `lockstep` and `serial`: the next instruction starts in every lane at once. */
@@ -280,12 +290,12 @@ function issueTogether(s: TimingState, c: number): void {
       }
     }
     if (!ok) {
-      for (let l = 0; l < L; l++) ctx.block(l, inst.seq, REASON.barrier)
+      for (let l = 0; l < L; l++) refuse(ctx, l, inst, REASON.barrier)
       return
     }
     for (let l = 0; l < L; l++) {
       if (inst.hasWorkIn(l) && (s.slotsUsed[l] ?? 0) >= s.machine.laneSlots) {
-        for (let q = 0; q < L; q++) ctx.block(q, inst.seq, q === l ? REASON.slot : REASON.barrier)
+        for (let q = 0; q < L; q++) refuse(ctx, q, inst, q === l ? REASON.slot : REASON.barrier)
         return
       }
     }
@@ -321,7 +331,7 @@ function memoryStart(s: TimingState, c: number): void {
       }
     }
     if (!ok) {
-      for (let l = 0; l < s.ctx.L; l++) s.ctx.block(l, inst.seq, REASON.memory)
+      for (let l = 0; l < s.ctx.L; l++) s.ctx.deny(l, inst, REASON.memory)
       return
     }
     ports[port] = inst
@@ -329,6 +339,81 @@ function memoryStart(s: TimingState, c: number): void {
     s.memNext++
     s.memQueued--
   }
+}
+
+/**
+ * The lane's instruction on the critical path this cycle: the oldest one in
+ * its read phase or refused its start (every issue policy starts the next
+ * instruction only after the lane finished reading this one, so each cycle it
+ * loses delays all younger ones); with none, the oldest still in flight.
+ */
+function critical(s: TimingState, lane: number): Inst | null {
+  const ctx = s.ctx
+  const reader = ctx.reader[lane] ?? null
+  const refused = ctx.refused[lane] ?? null
+  if (reader && refused) return reader.seq < refused.seq ? reader : refused
+  return reader ?? refused ?? s.oldest[lane] ?? null
+}
+
+/**
+ * Gives the lane-cycle at most one stall reason (docs/model.md, "Stalls") and
+ * counts, per instruction, every lane-cycle it was refused something.
+ */
+function classify(s: TimingState, l: number, c: number, feWaiting: boolean, nextSeq: number): void {
+  const ctx = s.ctx
+  const denied = ctx.denied[l] as Inst[]
+  const nd = ctx.deniedCount[l] ?? 0
+  let reason = -1
+  let seq = -1
+  // Whether the lane's reason is one of the refusals counted below.
+  let refusal = false
+  if (ctx.progress[l] === 1) {
+    s.laneBusy[l] = (s.laneBusy[l] ?? 0) + 1
+    const crit = critical(s, l)
+    if (crit && crit.noteCycle[l] === c) {
+      reason = crit.noteReason[l] ?? 0
+      seq = crit.seq
+      refusal = true
+    }
+  } else {
+    let oldest: Inst | null = null
+    for (let i = 0; i < nd; i++) {
+      const inst = denied[i] as Inst
+      if (!oldest || inst.seq < oldest.seq) oldest = inst
+    }
+    const waitSeq = ctx.waitSeq[l] ?? NONE
+    if (waitSeq !== NONE && (!oldest || waitSeq < oldest.seq)) {
+      reason = ctx.waitReason[l] ?? 0
+      seq = waitSeq
+    } else if (oldest) {
+      reason = oldest.noteReason[l] ?? 0
+      seq = oldest.seq
+      refusal = true
+    } else {
+      const fl = s.inflight
+      for (let i = 0; i < fl.length; i++) {
+        const inst = fl[i] as Inst
+        if (inst.dispatch < c && inst.pending(l)) {
+          reason = inst.waitReason
+          seq = inst.seq
+          break
+        }
+      }
+      if (reason < 0 && feWaiting && nextSeq >= 0) {
+        reason = s.feReason
+        seq = nextSeq
+      }
+    }
+  }
+  const st = s.opStalls
+  for (let i = 0; i < nd; i++) {
+    const inst = denied[i] as Inst
+    const k = inst.seq * 9 + (inst.noteReason[l] ?? 0)
+    st[k] = (st[k] ?? 0) + 1
+  }
+  if (reason < 0) return
+  ctx.rec.stallAt(l, c, reason, seq)
+  if (!refusal) st[seq * 9 + reason] = (st[seq * 9 + reason] ?? 0) + 1
 }
 
 /** Advances the machine by one cycle. Returns false once the run is over (finished or stopped by a limit). */
@@ -342,8 +427,12 @@ export function step(s: TimingState): boolean {
   }
   const ctx = s.ctx
   const L = ctx.L
+  ctx.cycle = c
   ctx.progress.fill(0)
-  ctx.blockSeq.fill(NONE)
+  ctx.deniedCount.fill(0)
+  ctx.waitSeq.fill(NONE)
+  ctx.reader.fill(null)
+  ctx.refused.fill(null)
   memoryStart(s, c)
   const fl = s.inflight
   for (let i = 0; i < fl.length; i++) (fl[i] as Inst).global(c)
@@ -356,6 +445,7 @@ export function step(s: TimingState): boolean {
     const list = ctx.laneActive[l] as Inst[]
     let na = 0
     for (let i = 0; i < list.length; i++) act[na++] = list[i] as Inst
+    s.oldest[l] = na > 0 ? (act[0] as Inst) : null
     for (let i = 0; i < na; i++) (act[i] as Inst).write(l, c)
     for (let i = 0; i < na; i++) (act[i] as Inst).exec(l, c)
     if (!together) {
@@ -376,34 +466,8 @@ export function step(s: TimingState): boolean {
   const feWaiting = s.opIdx < ops.length || s.hold >= 0
   const nextSeq = s.hold >= 0 ? s.hold : (ops[s.opIdx]?.seq ?? -1)
   for (let l = 0; l < L; l++) {
-    if (ctx.progress[l] === 1) {
-      busy = true
-      s.laneBusy[l] = (s.laneBusy[l] ?? 0) + 1
-    } else {
-      let reason = -1
-      let seq = -1
-      if ((ctx.blockSeq[l] ?? NONE) !== NONE) {
-        reason = ctx.blockReason[l] ?? 0
-        seq = ctx.blockSeq[l] ?? 0
-      } else {
-        for (let i = 0; i < fl.length; i++) {
-          const inst = fl[i] as Inst
-          if (inst.dispatch < c && inst.pending(l)) {
-            reason = inst.waitReason
-            seq = inst.seq
-            break
-          }
-        }
-        if (reason < 0 && feWaiting && nextSeq >= 0) {
-          reason = s.feReason
-          seq = nextSeq
-        }
-      }
-      if (reason >= 0) {
-        ctx.rec.stallAt(l, c, reason, seq)
-        s.opStalls[seq * 9 + reason] = (s.opStalls[seq * 9 + reason] ?? 0) + 1
-      }
-    }
+    if (ctx.progress[l] === 1) busy = true
+    classify(s, l, c, feWaiting, nextSeq)
     s.slotsUsed[l] = (s.slotsUsed[l] ?? 0) - (s.slotRelease[l] ?? 0)
     s.slotRelease[l] = 0
   }

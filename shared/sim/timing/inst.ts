@@ -73,6 +73,9 @@ export abstract class Inst {
   complete = -1
   /** Lanes where the instruction holds a lane slot. */
   readonly tookSlot: Uint8Array
+  /** Per lane: the last cycle the instruction was refused something there (Ctx.deny), and the reason. */
+  readonly noteCycle: Int32Array
+  readonly noteReason: Int8Array
   protected readonly base: number
   private readonly chaining: boolean
 
@@ -91,6 +94,8 @@ export abstract class Inst {
     this.readDone = new Uint8Array(L)
     this.laneDone = new Uint8Array(L)
     this.tookSlot = new Uint8Array(L)
+    this.noteCycle = new Int32Array(L).fill(-1)
+    this.noteReason = new Int8Array(L)
     this.base = op.seq * L * LANE_FIELD_COUNT
     this.chaining = ctx.m.chaining
   }
@@ -174,12 +179,15 @@ export abstract class Inst {
   read(lane: number, c: number): void {
     if (this.started[lane] !== 1 || this.readDone[lane] === 1) return
     const ctx = this.ctx
+    const reader = ctx.reader[lane]
+    if (!reader || this.seq < reader.seq) ctx.reader[lane] = this
     const { rf, rec } = ctx
     const wpr = rf.wpr
     const depth = ctx.d.queueDepth
     const bankBase = lane * rf.banks
     let all = true
     let readAny = false
+    let full = false
     const srcs = this.srcs
     for (let k = 0; k < srcs.length; k++) {
       const s = srcs[k] as Operand
@@ -188,7 +196,7 @@ export abstract class Inst {
       if (w >= words) continue
       all = false
       if (w - (s.cons[lane] ?? 0) >= depth) {
-        ctx.block(lane, this.seq, R_QUEUE)
+        full = true
         continue
       }
       const g = s.group
@@ -196,12 +204,12 @@ export abstract class Inst {
       const p = g[r < g.length ? r : g.length - 1] ?? 0
       const off = w - r * wpr
       if ((rf.ready[(p * this.L + lane) * wpr + off] ?? 0) > c) {
-        ctx.block(lane, this.seq, R_RAW)
+        ctx.deny(lane, this, R_RAW)
         continue
       }
       const bank = (p + off) % rf.banks
       if (!rf.grant(lane, bank, c)) {
-        ctx.block(lane, this.seq, R_BANK)
+        ctx.deny(lane, this, R_BANK)
         continue
       }
       rec.use(ctx.bankRes[bankBase + bank] ?? 0, c, 1, this.seq)
@@ -209,6 +217,8 @@ export abstract class Inst {
       readAny = true
       if (w + 1 >= words) all = true
     }
+    // A full queue while another operand reads only shows that operand is ahead; with none reading, the unit is behind.
+    if (full && !readAny) ctx.deny(lane, this, R_QUEUE)
     if (readAny) {
       ctx.busyLane(lane)
       const t = ctx.laneTimes
@@ -261,7 +271,7 @@ export abstract class Inst {
       if (!this.scalarDst) {
         const bank = rf.bankOf(this.dst, w)
         if (!rf.grant(lane, bank, c)) {
-          ctx.block(lane, this.seq, R_BANK)
+          ctx.deny(lane, this, R_BANK)
           break
         }
         rec.use(ctx.bankRes[lane * rf.banks + bank] ?? 0, c, 1, this.seq)

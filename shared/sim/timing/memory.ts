@@ -165,7 +165,7 @@ export class LoadInst extends MemInst {
   override write(lane: number, c: number): void {
     if (this.started[lane] === 1 && this.laneDone[lane] !== 1) {
       const at = this.readyAt[lane * this.maxDstWords + (this.wrCnt[lane] ?? 0)] ?? -1
-      if (at < 0 || at > c) this.ctx.block(lane, this.seq, REASON.memory)
+      if (at < 0 || at > c) this.ctx.wait(lane, this.seq, REASON.memory)
     }
     super.write(lane, c)
   }

@@ -122,7 +122,7 @@ export class PermutationInst extends Inst {
         free = ctx.linkFree(up, link, c + h * hop)
       }
       if (!free) {
-        ctx.block(a, this.seq, REASON.ring)
+        ctx.deny(a, this, REASON.ring)
         continue
       }
       for (let h = 0; h < hops; h++) ctx.bookLink(up, up ? (a + h) % L : (a - h - 1 + L) % L, c + h * hop, this.seq)
@@ -153,7 +153,7 @@ export class PermutationInst extends Inst {
     if (w === total - 1 && (this.readDone[lane] !== 1 || !this.lanePhasesDone(lane) || this.time(lane, 3) >= c)) return
     if (this.started[lane] === 1 && this.laneDone[lane] !== 1 && w < total) {
       const at = this.readyAt[lane * this.maxDstWords + w] ?? -1
-      if (at < 0) this.ctx.block(lane, this.seq, REASON.ring) // waiting for packets from other lanes
+      if (at < 0) this.ctx.wait(lane, this.seq, REASON.ring) // waiting for packets from other lanes
     }
     super.write(lane, c)
   }

@@ -175,6 +175,26 @@ export class Recorder {
     this.openSpans++
   }
 
+  /** Stall rows open in cycle order, so those from `cycles` on are a suffix; a row before may reach past it. */
+  private clipStalls(cycles: number): void {
+    const t = this.stall
+    const tot = this.stallTotals
+    let n = t.count
+    while (n > 0 && t.get(0, n - 1) >= cycles) {
+      n--
+      const r = t.get(S_REASON, n)
+      tot[r] = (tot[r] ?? 0) - t.get(S_LEN, n)
+    }
+    t.count = n
+    for (let i = 0; i < n; i++) {
+      const over = t.get(0, i) + t.get(S_LEN, i) - cycles
+      if (over <= 0) continue
+      const r = t.get(S_REASON, i)
+      tot[r] = (tot[r] ?? 0) - over
+      t.set(S_LEN, i, t.get(S_LEN, i) - over)
+    }
+  }
+
   private closeStall(lane: number): void {
     this.stall.set(S_LEN, this.sRow[lane] ?? 0, this.sLen[lane] ?? 0)
     this.sReason[lane] = -1
@@ -235,9 +255,14 @@ export class Recorder {
     this.openSpans--
   }
 
-  /** Closes the open spans and returns them sorted by start cycle. */
-  finish(): { stalls: StallSpans; usage: UsageSpans } {
+  /**
+   * Closes the open spans and returns them sorted by start cycle, stalls cut
+   * at `cycles`: a run can step past its last busy cycle (a memory port held
+   * for an empty access), and a stall there would lie outside the run.
+   */
+  finish(cycles: number): { stalls: StallSpans; usage: UsageSpans } {
     for (let l = 0; l < this.sReason.length; l++) if ((this.sReason[l] ?? -1) >= 0) this.closeStall(l)
+    this.clipStalls(cycles)
     if (this.recordUsage) for (let r = 0; r < this.resources.length; r++) if ((this.uInst[r] ?? -1) >= 0) this.closeUse(r)
     const s = this.stall
     const so = s.order()

@@ -230,7 +230,7 @@ export class ReductionInst extends Inst {
       let free = true
       for (let j = 0; j < dist && free; j++) free = ctx.linkFree(false, l - 1 - j, c + j * hop)
       if (!free) {
-        ctx.block(l, this.seq, REASON.ring)
+        ctx.deny(l, this, REASON.ring)
         continue
       }
       for (let j = 0; j < dist; j++) ctx.bookLink(false, l - 1 - j, c + j * hop, this.seq)
@@ -262,7 +262,7 @@ export class ReductionInst extends Inst {
     if (this.stage !== STAGE_SEND || c < this.valueAt) return
     const from = this.pos
     if (!this.ctx.bookLink(false, from - 1, c, this.seq)) {
-      this.ctx.block(from, this.seq, REASON.ring)
+      this.ctx.deny(from, this, REASON.ring)
       return
     }
     this.ctx.busyLane(from)
@@ -290,7 +290,7 @@ export class ReductionInst extends Inst {
   private waiting(lane: number): void {
     if (this.laneDone[lane] === 1 || this.started[lane] !== 1) return
     if ((this.beatDone[lane] ?? 0) >= (this.beats[lane] ?? 0) && (this.laneValue[lane] ?? -1) >= 0) {
-      this.ctx.block(lane, this.seq, REASON.ring)
+      this.ctx.wait(lane, this.seq, REASON.ring)
     }
   }
 
@@ -379,7 +379,7 @@ export class OrderedReductionInst extends Inst {
     if (this.next === 0) return
     const from = this.at
     if (!this.ctx.bookLink(true, from, c, this.seq)) {
-      this.ctx.block(from, this.seq, REASON.ring)
+      this.ctx.deny(from, this, REASON.ring)
       return
     }
     this.ctx.busyLane(from)

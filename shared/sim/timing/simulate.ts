@@ -68,7 +68,7 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
       stalls,
     }
   })
-  const spans = ctx.rec.finish()
+  const spans = ctx.rec.finish(cycles)
   const error = s.error ?? (s.done ? undefined : (stopped ?? { code: 'cancelled', message: 'the run was stopped before it finished' }))
   return {
     trace: {

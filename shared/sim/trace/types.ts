@@ -54,11 +54,11 @@ export interface InstructionTrace {
   latency: number | null
   /** Flops of the active elements. */
   flops: number
-  /** Stall cycles attributed to this instruction, summed over lanes. */
+  /** Lane-cycles this instruction was refused something (port, word, queue entry, start, link), plus the lane stalls given to it by a wait or the front end, summed over lanes (docs/model.md "Stalls"). */
   stalls: StallCounts
 }
 
-/** Run-length-encoded stall spans, one per (lane, consecutive cycles, one reason, one instruction). */
+/** Run-length-encoded stall spans, one per (lane, consecutive cycles, one reason, one instruction); a lane-cycle is in at most one span, and a lane may be busy in it too. */
 export interface StallSpans {
   count: number
   lane: Uint16Array
