@@ -16,6 +16,7 @@ import { opInfo, type OpInfo } from '../isa/table'
 import type { Instruction, Program, SimDiagnostic, SourceLoc } from '../isa/types'
 import type { Handler, Recorder, VectorEvent } from './handler'
 import { handlerTable } from './handlers'
+import { RETURNED_TO_CALLER } from './scalar'
 import { ExecFault, Machine, type UnorderedSum } from './machine'
 import type { DynamicStream, VectorOp } from './stream'
 import type { Vtype } from './vtype'
@@ -64,7 +65,7 @@ export interface ExecuteSuccess {
   /** The exit system call's status (low 8 bits), or 0 when the program ran off its last instruction. */
   exitCode: number
   /** How the run ended. */
-  ended: 'exit' | 'end-of-text'
+  ended: 'exit' | 'end-of-text' | 'return'
   /** Dynamic instructions executed. */
   steps: number
   stream: DynamicStream
@@ -189,8 +190,14 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
         ended = 'exit'
         break
       }
+      if (m.next === RETURNED_TO_CALLER) {
+        ended = 'return'
+        break
+      }
       if (m.next < 0 || m.next > code.length) {
-        return failure('jump-range', `${ins.op} jumps outside the program (to instruction index ${m.next}; the text has ${code.length} instructions)`, ins.loc, index)
+        const target = program.textBase + 4 * m.next
+        const end = program.textBase + 4 * code.length
+        return failure('jump-range', `${ins.op} jumps outside the program, to address 0x${target.toString(16)} (the text is 0x${program.textBase.toString(16)}..0x${(end - 1).toString(16)})`, ins.loc, index)
       }
       index = m.next
     }

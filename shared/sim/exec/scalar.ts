@@ -24,6 +24,13 @@ function regImm(fn: Binary): Handler {
 }
 
 /** Branch and jump targets: imm is the byte offset from the instruction. */
+/**
+ * A program starts with ra = 0, where no code is: a jump there is a return to
+ * whoever called the program (a function imported from an ELF file ends with
+ * `ret`). The executor ends the run normally when `next` is this value.
+ */
+export const RETURNED_TO_CALLER = -1
+
 function jumpTo(m: Machine, textBase: number, target: number): void {
   if ((target - textBase) % 4 !== 0) throw new ExecFault('misaligned', `jump target 0x${target.toString(16)} is not 4-byte aligned`)
   m.next = (target - textBase) / 4
@@ -130,7 +137,8 @@ export function scalarHandlers(textBase: number, sys: Syscalls): Record<string, 
     jalr: (m, ins) => {
       const target = Number(BigInt.asUintN(64, rs1(m, ins) + imm(ins)) & ~1n)
       m.setX(ins.operands.rd, BigInt(ins.address + 4))
-      jumpTo(m, textBase, target)
+      if (target === 0) m.next = RETURNED_TO_CALLER
+      else jumpTo(m, textBase, target)
     },
     lw: load(4),
     ld: load(8),

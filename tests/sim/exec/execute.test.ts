@@ -137,6 +137,16 @@ describe('results', () => {
     expect(r.ok && [r.ended, r.exitCode, r.x[10]]).toEqual(['end-of-text', 0, -7n])
   })
 
+  it('ends normally when a function returns to its caller (ret with the initial ra of 0), as an imported function does', () => {
+    const r = execute(program('li a0, 9\nret\nli a0, 1'), { vlen: 128 })
+    expect(r.ok && [r.ended, r.exitCode, r.x[10]]).toEqual(['return', 0, 9n])
+  })
+
+  it('still reports a jump to any other address outside the program', () => {
+    const r = execute(program('li t0, 64\njr t0'), { vlen: 128 })
+    expect(r.ok ? r.ended : r.error.message).toMatch(/jumps outside the program/)
+  })
+
   it('keeps tail and masked-off elements undisturbed even with ta, ma (the QEMU default policy)', () => {
     const r = execute(program(`
       vsetvli t0, zero, e8, m1, ta, ma
