@@ -19,6 +19,8 @@
  * A deliberate change of the stall rule re-records only the stall digests (and
  * fails if any timing digest moved):
  *   GOLDEN_WRITE=stalls npx vitest run tests/sim/timing/golden.test.ts
+ * A new example adds its cases (every recorded case still checked in full):
+ *   GOLDEN_WRITE=add npx vitest run tests/sim/timing/golden.test.ts
  * A deliberate model change re-records both, with a reason in the commit:
  *   GOLDEN_WRITE=1 npx vitest run tests/sim/timing/golden.test.ts
  */
@@ -38,7 +40,7 @@ import { digestRun, type RunDigest } from './digest'
 
 const GOLDEN = new URL('./golden.json', import.meta.url)
 const mode = process.env.GOLDEN_WRITE
-const writing = mode === '1' || mode === 'stalls'
+const writing = mode === '1' || mode === 'stalls' || mode === 'add'
 const expected: Record<string, RunDigest> = existsSync(GOLDEN) ? (JSON.parse(readFileSync(GOLDEN, 'utf8')) as Record<string, RunDigest>) : {}
 const recorded: Record<string, RunDigest> = {}
 
@@ -66,8 +68,9 @@ function streamOf(text: string, machine: Machine): DynamicStream {
 function check(key: string, stream: DynamicStream, machine: Machine, options?: SimulateOptions): void {
   const d = digestRun(simulate(stream, machine, options))
   recorded[key] = d
+  if (mode === 'add' && !expected[key]) return
   if (mode !== '1') expect(d.timing, `golden timing digest of ${key}`).toBe(expected[key]?.timing)
-  if (!writing) expect(d.stalls, `golden stall digest of ${key}`).toBe(expected[key]?.stalls)
+  if (!writing || mode === 'add') expect(d.stalls, `golden stall digest of ${key}`).toBe(expected[key]?.stalls)
 }
 
 const examples = readdirSync('examples').filter((f) => f.endsWith('.s')).sort()
