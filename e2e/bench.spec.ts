@@ -114,6 +114,7 @@ test.describe('the Bench', () => {
     await openBench(page)
     await pickExample(page, 'saxpy')
     await expect(chart(page)).toHaveAttribute('data-lanes', '8')
+    await expect(page.getByTestId('preset-select')).toContainText(PRESET.name)
     const before = await runs(page)
     const lanes = page.locator('#machine-lanes')
     await lanes.fill('4')
@@ -121,6 +122,9 @@ test.describe('the Bench', () => {
     await waitForRunAfter(page, before)
     await expect(chart(page)).toHaveAttribute('data-lanes', '4')
     await expect(page.getByTestId('machine-summary')).toContainText('4 lanes')
+    // No preset has this machine any more: the preset box says so instead of showing a stale name.
+    await expect(page.getByTestId('preset-select')).toContainText('Custom machine')
+    await screenshot(page, 'bench-custom-machine')
     const trace = modelRun('saxpy', { ...PRESET.machine, lanes: 4 })
     await expect(page.getByTestId('metric-cycles')).toHaveText(String(trace.cycles))
     // Out of range: the schema's message under the field, and no run.
@@ -128,6 +132,35 @@ test.describe('the Bench', () => {
     await lanes.press('Enter')
     await expect(page.getByText('99 is outside the range 1..64')).toBeVisible()
     await expect(page.getByTestId('run')).toBeDisabled()
+  })
+
+  test("the vfredusum order switch gives the machine's rounding of the unordered sum, the same cycles", async ({ page }) => {
+    // Expected bits from the same pipeline in Node, in each order (IEEE 754 binary32 results of examples/reduction.s).
+    const sumBits = (order: 'element' | 'machine') => {
+      const r = runPipeline({ program: readFileSync('examples/reduction.s', 'utf8'), machine: parseMachine(PRESET.machine) }, { fpReductionOrder: order })
+      if (!r.ok) throw new Error(r.error.message)
+      const pos = r.trace.instructions.findIndex((i) => i.op === 'vfredusum.vs')
+      const bits = new DataView(r.functional.v[16]!.buffer, r.functional.v[16]!.byteOffset).getUint32(0, true)
+      return { pos, hex: `0x${bits.toString(16).padStart(8, '0')}`, cycles: r.trace.cycles }
+    }
+    const element = sumBits('element')
+    const machine = sumBits('machine')
+    expect(machine.hex).not.toBe(element.hex)
+    await openBench(page)
+    await pickExample(page, 'reduction')
+    await expect(page.getByTestId('metric-cycles')).toHaveText(String(element.cycles))
+    await page.locator(`tr[data-index="${element.pos}"]`).first().click() // selects v16, the vfredusum destination
+    const first = page.getByTestId('inspector').locator('ol.elements li').first()
+    await expect(first).toHaveAttribute('title', new RegExp(`^element 0: ${element.hex}`))
+    const before = await runs(page)
+    await page.getByTestId('fp-order').getByText("this machine's order").click()
+    await waitForRunAfter(page, before)
+    await expect(first).toHaveAttribute('title', new RegExp(`^element 0: ${machine.hex}`))
+    await expect(page.getByTestId('metric-cycles')).toHaveText(String(machine.cycles))
+    // The dependency overlay of the selected vfredusum, from the run's register use: its loads' and v0's producers, its store.
+    await page.getByLabel('Dependency arrows for the selected instruction').click()
+    await expect.poll(() => chart(page).getByTestId('lane-chart-arrow').count()).toBeGreaterThan(0)
+    await screenshot(page, 'bench-fp-order')
   })
 
   test('a parser error shows inline at its line and column while typing', async ({ page }) => {
