@@ -274,7 +274,7 @@ export abstract class Inst {
           ctx.deny(lane, this, R_BANK)
           break
         }
-        rec.use(ctx.bankRes[lane * rf.banks + bank] ?? 0, c, 1, this.seq)
+        rec.use(ctx.bankRes[lane * rf.banks + bank] ?? 0, c, 1, this.seq, 1, 1)
         if (this.chaining) rf.ready[rf.slot(this.dst, lane, w)] = c + 1
       }
       w++

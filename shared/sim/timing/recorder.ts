@@ -97,6 +97,7 @@ const U_LEN = 1
 const U_INST = 2
 const U_AMOUNT = 3
 const U_RESOURCE = 4
+const U_WRITES = 5
 
 export class Recorder {
   readonly resources: ResourceInfo[] = []
@@ -104,7 +105,7 @@ export class Recorder {
   readonly totals: Float64Array
   readonly recordUsage: boolean
   private readonly stall = new Columns(5)
-  private readonly usage = new Columns(5)
+  private readonly usage = new Columns(6)
   // Open stall span per lane (reason -1: none) and its row.
   private readonly sReason: Int16Array
   private readonly sInst: Int32Array
@@ -114,6 +115,7 @@ export class Recorder {
   // Open usage span per resource (instruction -1: none) and its row.
   private uInst = new Int32Array(0)
   private uAmt = new Int32Array(0)
+  private uWr = new Int32Array(0)
   private uStart = new Int32Array(0)
   private uLen = new Int32Array(0)
   private uRow = new Int32Array(0)
@@ -142,6 +144,7 @@ export class Recorder {
     const n = this.resources.length
     this.uInst = new Int32Array(n).fill(-1)
     this.uAmt = new Int32Array(n)
+    this.uWr = new Int32Array(n)
     this.uStart = new Int32Array(n)
     this.uLen = new Int32Array(n)
     this.uRow = new Int32Array(n)
@@ -202,10 +205,13 @@ export class Recorder {
   }
 
   /**
-   * `inst` uses `amount` of resource r over `len` cycles from c. Uses of one
-   * instruction in consecutive cycles with the same amount merge into one span.
+   * `inst` uses `amount` of resource r over `len` cycles from c; `writes` of
+   * those uses are writes (bank ports; 0 elsewhere). Uses of one instruction in
+   * consecutive cycles with the same amount merge into one span; the writes are
+   * kept as `UsageSpans.writes` says (a bit a cycle while the amount is 1, so
+   * that reads and writes alternating on a bank still make one span).
    */
-  use(r: number, c: number, amount: number, inst: number, len = 1): void {
+  use(r: number, c: number, amount: number, inst: number, len = 1, writes = 0): void {
     const totals = this.totals
     totals[r] = (totals[r] ?? 0) + amount * len
     if (!this.recordUsage) return
@@ -214,27 +220,39 @@ export class Recorder {
       const os = this.uStart[r] ?? 0
       const ol = this.uLen[r] ?? 0
       if (os + ol === c && this.uAmt[r] === amount) {
-        this.uLen[r] = ol + 1
-        return
-      }
-      if (os + ol - 1 === c && os <= c) {
-        // A second use in the same cycle: add it to that cycle's amount.
+        if (amount === 1) {
+          // Bit k: the use in cycle start + k was a write; past bit 31 only reads extend the span.
+          if (writes === 0 || ol < 32) {
+            if (writes !== 0) this.uWr[r] = (this.uWr[r] ?? 0) | (1 << ol)
+            this.uLen[r] = ol + 1
+            return
+          }
+        } else if (this.uWr[r] === writes) {
+          this.uLen[r] = ol + 1
+          return
+        }
+      } else if (os + ol - 1 === c && os <= c) {
+        // A second use in the same cycle: add it to that cycle's amount (the writes become a count).
         const total = (this.uAmt[r] ?? 0) + amount
+        const before = this.uAmt[r] !== 1 ? (this.uWr[r] ?? 0) : ol - 1 < 32 ? ((this.uWr[r] ?? 0) >>> (ol - 1)) & 1 : 0
+        const wr = before + writes
         if (ol === 1) {
           this.uAmt[r] = total
+          this.uWr[r] = wr
           return
         }
         this.uLen[r] = ol - 1
+        if (this.uAmt[r] === 1 && ol - 1 < 32) this.uWr[r] = (this.uWr[r] ?? 0) & ~(1 << (ol - 1))
         this.closeUse(r)
-        this.openUse(r, c, total, inst, 1)
+        this.openUse(r, c, total, inst, 1, wr)
         return
       }
     }
     if (oi >= 0) this.closeUse(r)
-    this.openUse(r, c, amount, inst, len)
+    this.openUse(r, c, amount, inst, len, writes)
   }
 
-  private openUse(r: number, c: number, amount: number, inst: number, len: number): void {
+  private openUse(r: number, c: number, amount: number, inst: number, len: number, writes: number): void {
     const t = this.usage
     const row = t.push(c)
     t.set(U_INST, row, inst)
@@ -242,6 +260,7 @@ export class Recorder {
     this.uRow[r] = row
     this.uInst[r] = inst
     this.uAmt[r] = amount
+    this.uWr[r] = writes
     this.uStart[r] = c
     this.uLen[r] = len
     this.openSpans++
@@ -249,8 +268,10 @@ export class Recorder {
 
   private closeUse(r: number): void {
     const row = this.uRow[r] ?? 0
-    this.usage.set(U_LEN, row, this.uLen[r] ?? 0)
-    this.usage.set(U_AMOUNT, row, this.uAmt[r] ?? 0)
+    const t = this.usage
+    t.set(U_LEN, row, this.uLen[r] ?? 0)
+    t.set(U_AMOUNT, row, this.uAmt[r] ?? 0)
+    t.set(U_WRITES, row, this.uWr[r] ?? 0)
     this.uInst[r] = -1
     this.openSpans--
   }
@@ -283,6 +304,7 @@ export class Recorder {
         instruction: u.column(U_INST, uo, Int32Array),
         amount: u.column(U_AMOUNT, uo, Uint16Array),
         resource: u.column(U_RESOURCE, uo, Uint32Array),
+        writes: u.column(U_WRITES, uo, Uint32Array),
         start: u.column(0, uo, Int32Array),
       },
     }

@@ -170,6 +170,7 @@ export function encodeTrace(trace: TimingTrace): CompactTrace {
       length: fit(u.length, u.count),
       amount: fit(u.amount, u.count),
       instruction: fit(u.instruction, u.count),
+      ...(u.writes ? { writes: fit(u.writes, u.count) } : {}),
     },
   }
 }
@@ -233,6 +234,7 @@ export function transferablesOf(c: CompactTrace): ArrayBuffer[] {
     k.dispatch, k.complete, k.latency, k.flops, k.stalls, c.laneTimes,
     c.stalls.lane, c.stalls.start, c.stalls.length, c.stalls.reason, c.stalls.instruction,
     c.usage.resource, c.usage.start, c.usage.length, c.usage.amount, c.usage.instruction,
+    ...(c.usage.writes ? [c.usage.writes] : []),
   ]
   const buffers = new Set<ArrayBuffer>()
   for (const a of arrays) if (a.buffer instanceof ArrayBuffer) buffers.add(a.buffer)

@@ -6,7 +6,7 @@
 import { z } from 'zod'
 import { machineSchema } from '../../schemas/machine'
 import type { TimingTrace } from './types'
-import { STALL_REASONS, laneTiming } from './types'
+import { STALL_REASONS, laneTiming, usageWritesAt } from './types'
 
 const cycle = z.number().int().nonnegative()
 const cycleOrNull = cycle.nullable()
@@ -60,7 +60,15 @@ export const traceJsonSchema = z.object({
     z.object({ id: z.number().int().nonnegative(), kind: z.enum(['unit', 'bank', 'bus', 'ring']), name: z.string(), lane: z.number().int().nonnegative().nullable(), capacity: z.number().positive() }),
   ),
   usage: z.array(
-    z.object({ resource: z.number().int().nonnegative(), start: cycle, length: z.number().int().positive(), amount: z.number().int().positive(), instruction: z.number().int().nonnegative() }),
+    z.object({
+      resource: z.number().int().nonnegative(),
+      start: cycle,
+      length: z.number().int().positive(),
+      amount: z.number().int().positive(),
+      instruction: z.number().int().nonnegative(),
+      /** Bank port uses that wrote, per cycle of the span (the rest read); only on spans with a write. */
+      writes: z.array(z.number().int().nonnegative()).optional(),
+    }),
   ),
   metrics: z.object({
     cycles: cycle,
@@ -77,6 +85,12 @@ export const traceJsonSchema = z.object({
 })
 
 export type TraceJson = z.infer<typeof traceJsonSchema>
+
+/** The writes of each cycle of usage span i, spelled out (the JSON form does not keep the bit encoding). */
+function writesOfSpan(u: TimingTrace['usage'], i: number): number[] {
+  const start = u.start[i] ?? 0
+  return Array.from({ length: u.length[i] ?? 0 }, (_, k) => usageWritesAt(u, i, start + k) ?? 0)
+}
 
 export function traceToJson(trace: TimingTrace): TraceJson {
   const s = trace.stalls
@@ -104,6 +118,7 @@ export function traceToJson(trace: TimingTrace): TraceJson {
       length: u.length[i] ?? 0,
       amount: u.amount[i] ?? 0,
       instruction: u.instruction[i] ?? 0,
+      ...(u.writes && (u.writes[i] ?? 0) !== 0 ? { writes: writesOfSpan(u, i) } : {}),
     })),
     metrics: trace.metrics,
   }

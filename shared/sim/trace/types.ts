@@ -94,6 +94,15 @@ export interface UsageSpans {
   length: Int32Array
   amount: Uint16Array
   instruction: Int32Array
+  /**
+   * Which uses were writes (bank ports: the rest read a word; 0 for units,
+   * buses and links). Read it with `usageWritesAt`. Encoded per span: when
+   * `amount` is 1, bit k (k < 32) is set when the use in cycle start + k was a
+   * write (cycles past the 32nd are reads); when `amount` is more than 1, it is
+   * the number of writes in every cycle of the span. Every trace the engine
+   * produces has it; traces built elsewhere (older files, fixtures) may not.
+   */
+  writes?: Uint32Array
 }
 
 export interface Metrics {
@@ -206,6 +215,16 @@ export function laneStallAt(trace: TimingTrace, lane: number, cycle: number): { 
     if (s.lane[i] === lane && st + (s.length[i] ?? 0) <= cycle) return null
   }
   return null
+}
+
+/** Of the `amount` uses of usage span i in `cycle` (inside the span), how many were writes; null when the trace does not say. */
+export function usageWritesAt(usage: UsageSpans, i: number, cycle: number): number | null {
+  const w = usage.writes
+  if (!w) return null
+  const v = w[i] ?? 0
+  if ((usage.amount[i] ?? 0) !== 1) return v
+  const k = cycle - (usage.start[i] ?? 0)
+  return k < 32 ? (v >>> k) & 1 : 0
 }
 
 export function emptyStallCounts(): StallCounts {
