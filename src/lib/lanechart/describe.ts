@@ -27,7 +27,7 @@ export interface HoverInfo {
   write: PhaseSpan | null
   /** The phase of the bar under the pointer; null on a stall. */
   phase: Phase | null
-  /** The stall under the pointer: reason and its cycles [start, end] inclusive. */
+  /** The stall under the pointer (a stall bar, or a strip on the phase bar): reason and the whole span's cycles [start, end] inclusive. */
   stall: { reason: string; start: number; end: number } | null
 }
 
@@ -39,7 +39,6 @@ export function describeHit(trace: TimingTrace, layout: ChartLayout, hit: Hit): 
   const ins = trace.instructions[hit.instruction]
   if (!ins) throw new RangeError(`no instruction at position ${hit.instruction} (the trace has ${trace.instructions.length})`)
   const t = laneTiming(trace, hit.instruction, hit.lane)
-  const stall = hit.kind === STALL_KIND
   return {
     index: ins.index,
     text: ins.text,
@@ -49,11 +48,18 @@ export function describeHit(trace: TimingTrace, layout: ChartLayout, hit: Hit): 
     read: span(t.readStart, t.readEnd),
     execute: span(t.execStart, t.execEnd),
     write: span(t.writeStart, t.writeEnd),
-    phase: stall ? null : PHASES[hit.kind]!,
-    stall: stall
-      ? { reason: stallReasonName(layout.bars.reason[hit.bar]!), start: layout.bars.start[hit.bar]!, end: layout.bars.end[hit.bar]! - 1 }
-      : null,
+    phase: hit.kind === STALL_KIND ? null : PHASES[hit.kind]!,
+    stall: hit.stall === -1 ? null : stallSpan(trace, layout, hit.stall),
   }
+}
+
+/** The stall span a stall bar was cut from (layout.ts cuts spans where they meet phase bars). */
+function stallSpan(trace: TimingTrace, layout: ChartLayout, bar: number): { reason: string; start: number; end: number } {
+  const k = layout.bars.stall[bar]!
+  const start = trace.stalls.start[k]
+  const length = trace.stalls.length[k]
+  if (start === undefined || length === undefined) throw new RangeError(`bar ${bar} names stall span ${k}, the trace has ${trace.stalls.count}`)
+  return { reason: stallReasonName(trace.stalls.reason[k]!), start, end: start + length - 1 }
 }
 
 const plural = (n: number, word: string) => `${n.toLocaleString('en-US')} ${word}${n === 1 ? '' : 's'}`

@@ -2,13 +2,17 @@
  * Which bar is under the pointer. The plot position is given as a cycle
  * (fractional) and a y offset in pixels; `tolerance` (in cycles, usually two
  * pixels' worth) lets a zoomed-out bar of less than a pixel still be hit.
- * A stall wins over the phase bar it is drawn on, since it says more.
+ * A phase bar wins over a stall: full stalls never overlap a phase bar of
+ * their band, and a stall strip (a stall over its own instruction's phase,
+ * see layout.ts) is reported as the hit's `stall` beside the phase bar it
+ * lies on, so that a click selects what it lands on and the tooltip still
+ * names the stall.
  *
  * @example
  *   const hit = hitTest(layout, scale.toCycle(px), py, { tolerance: 2 / scale.k })
  *   hit?.instruction // position in trace.instructions
  */
-import type { ChartLayout, IndexLists } from './layout'
+import { STALL_KIND, type ChartLayout, type IndexLists } from './layout'
 
 export interface Hit {
   bar: number
@@ -18,6 +22,8 @@ export interface Hit {
   lane: number
   /** 0..2 a phase (PHASES), 3 a stall. */
   kind: number
+  /** The stall bar under the pointer: `bar` itself for a stall, a strip on the phase bar, or -1. */
+  stall: number
 }
 
 export interface HitOptions {
@@ -69,16 +75,21 @@ export function hitTest(layout: ChartLayout, cycle: number, y: number, options: 
   if (!(tolerance >= 0)) throw new RangeError(`tolerance must be zero or more, got ${tolerance}`)
   const band = bandAt(layout, y)
   if (band === -1) return null
-  let bar = nearest(layout, layout.stallBands, band, cycle, 0)
+  let bar = nearest(layout, layout.phaseBands, band, cycle, 0)
+  if (bar === -1) bar = nearest(layout, layout.stallBands, band, cycle, 0)
   if (bar === -1) bar = nearest(layout, layout.phaseBands, band, cycle, tolerance)
   if (bar === -1) bar = nearest(layout, layout.stallBands, band, cycle, tolerance)
   if (bar === -1) return null
   const group = layout.bars.group[bar]!
+  const kind = layout.bars.kind[bar]!
+  let stall = kind === STALL_KIND ? bar : nearest(layout, layout.stripBands, band, cycle, tolerance)
+  if (stall !== -1 && layout.bars.group[stall] !== group) stall = -1
   return {
     bar,
     group,
     instruction: layout.groups.instruction[group]!,
     lane: layout.groups.lane[group]!,
-    kind: layout.bars.kind[bar]!,
+    kind,
+    stall,
   }
 }

@@ -13,9 +13,17 @@
  *   segments at the start of the next phase (phases overlap: the execute phase
  *   begins while later elements are still read). With sub-rows every phase is
  *   drawn whole in its own sub-row.
- * - A stall is drawn over the phase the lane waits to finish: the first phase
- *   of the instruction in that lane that has not ended by the stall's first
- *   cycle (before its first read: the read sub-row).
+ * - A stall goes in the row of the phase the lane waits to finish: the first
+ *   phase of the instruction in that lane that has not ended by the stall's
+ *   first cycle (before its first read: the read sub-row).
+ * - A lane can be stalled while its instruction still progresses (reading one
+ *   operand while another is refused its port, docs/model.md "Stalls"), so a
+ *   stall may overlap its own instruction's phase bars. The stall is cut
+ *   where it meets them: the cycles outside every phase bar of its row are a
+ *   full-height stall bar, the cycles over a phase bar a *strip*, a thin bar
+ *   along the bottom of that phase bar (stripHeight), so that the phase stays
+ *   readable and clickable and the hatching still shows the stall. Every
+ *   piece keeps the index of its stall span, so the whole span can be named.
  *
  * Bars are half-open cycle intervals `[start, end)`: a phase from cycle 3 to
  * cycle 5 inclusive is `[3, 6)`.
@@ -57,6 +65,10 @@ export interface BarTable {
   readonly kind: Uint8Array
   /** Index into STALL_REASONS for stalls, 0 otherwise. */
   readonly reason: Uint8Array
+  /** For a stall bar, its span's index in trace.stalls (a span cut in pieces gives each the same); -1 for a phase. */
+  readonly stall: Int32Array
+  /** 1 for a stall strip: a stall drawn thin over a phase bar of its own group. */
+  readonly strip: Uint8Array
   readonly group: Int32Array
   readonly band: Int32Array
 }
@@ -93,8 +105,10 @@ export interface ChartLayout {
   readonly groups: GroupTable
   /** Phase bars of each band (lane x sub-row x track), sorted by start; they never overlap within a band. */
   readonly phaseBands: IndexLists
-  /** Stall bars of each band, sorted by start. */
+  /** Full-height stall bars of each band, sorted by start; they overlap no phase bar of the band. */
   readonly stallBands: IndexLists
+  /** Stall strips of each band, sorted by start; each lies inside a phase bar of its group. */
+  readonly stripBands: IndexLists
   /** Groups of each instruction (by position in trace.instructions). */
   readonly groupsByInstruction: IndexLists
   /** Colour slot of each instruction: the rank of its static instruction among those drawn; -1 when it has no phase bars. */
@@ -110,6 +124,33 @@ interface PendingBar {
   kind: BarKind
   reason: number
   subRow: number
+  stall: number
+  strip: boolean
+}
+
+/**
+ * Cuts stall span `k` over `[start, end)` against the phase bars already
+ * pushed for its group in the same sub-row: pieces outside them are full
+ * stall bars, pieces over them strips.
+ */
+function pushStall(pending: PendingBar[], first: number, k: number, start: number, end: number, reason: number, subRow: number) {
+  const covers: [number, number][] = []
+  for (let b = first; b < pending.length; b++) {
+    const p = pending[b]!
+    if (p.kind !== STALL_KIND && p.subRow === subRow && p.end > start && p.start < end) covers.push([Math.max(p.start, start), Math.min(p.end, end)])
+  }
+  covers.sort((a, b) => a[0] - b[0])
+  let at = start
+  const piece = (s: number, e: number, strip: boolean) => {
+    if (e > s) pending.push({ start: s, end: e, kind: STALL_KIND, reason, subRow, stall: k, strip })
+  }
+  for (const [cs, ce] of covers) {
+    if (ce <= at) continue
+    piece(at, cs, false)
+    piece(Math.max(at, cs), ce, true)
+    at = ce
+  }
+  piece(at, end, false)
 }
 
 function phaseTimes(trace: TimingTrace, i: number, lane: number): [number, number][] {
@@ -187,7 +228,7 @@ export function buildLayout(trace: TimingTrace, options: LayoutOptions = {}): Ch
       const first = pending.length
       if (subRows) {
         phases.forEach(([ps, pe], p) => {
-          if (ps !== NO_CYCLE && pe >= ps) pending.push({ start: ps, end: pe + 1, kind: p as BarKind, reason: 0, subRow: p })
+          if (ps !== NO_CYCLE && pe >= ps) pending.push({ start: ps, end: pe + 1, kind: p as BarKind, reason: 0, subRow: p, stall: -1, strip: false })
         })
       } else {
         let prevEnd = -Infinity
@@ -199,14 +240,14 @@ export function buildLayout(trace: TimingTrace, options: LayoutOptions = {}): Ch
           const start = Math.max(ps, prevEnd)
           const end = Math.min(pe + 1, next)
           if (end > start) {
-            pending.push({ start, end, kind: p as BarKind, reason: 0, subRow: 0 })
+            pending.push({ start, end, kind: p as BarKind, reason: 0, subRow: 0, stall: -1, strip: false })
             prevEnd = end
           }
         }
       }
       for (const k of stallIds) {
         const start = s.start[k] ?? 0
-        pending.push({ start, end: start + (s.length[k] ?? 0), kind: STALL_KIND, reason: s.reason[k] ?? 0, subRow: subRows ? stallPhase(phases, start) : 0 })
+        pushStall(pending, first, k, start, start + (s.length[k] ?? 0), s.reason[k] ?? 0, subRows ? stallPhase(phases, start) : 0)
       }
       if (pending.length === first) continue
       let lo = Infinity
@@ -247,6 +288,8 @@ export function buildLayout(trace: TimingTrace, options: LayoutOptions = {}): Ch
     end: new Int32Array(count),
     kind: new Uint8Array(count),
     reason: new Uint8Array(count),
+    stall: new Int32Array(count),
+    strip: new Uint8Array(count),
     group: new Int32Array(count),
     band: new Int32Array(count),
   }
@@ -261,6 +304,8 @@ export function buildLayout(trace: TimingTrace, options: LayoutOptions = {}): Ch
       bars.end[b] = p.end
       bars.kind[b] = p.kind
       bars.reason[b] = p.reason
+      bars.stall[b] = p.stall
+      bars.strip[b] = p.strip ? 1 : 0
       bars.group[b] = g
       bars.band[b] = (gLane[g]! * rowsPerLane + p.subRow) * tracks + track[g]!
     }
@@ -271,12 +316,17 @@ export function buildLayout(trace: TimingTrace, options: LayoutOptions = {}): Ch
   const byStart = (a: number, b: number) => bars.start[a]! - bars.start[b]! || a - b
   const phaseIds: number[] = []
   const stallIds: number[] = []
-  for (let b = 0; b < count; b++) (bars.kind[b] === STALL_KIND ? stallIds : phaseIds).push(b)
-  const phaseBands = lists(bandCount, (j) => bars.band[phaseIds[j]!]!, phaseIds.length, (a, b) => byStart(phaseIds[a]!, phaseIds[b]!))
-  const stallBands = lists(bandCount, (j) => bars.band[stallIds[j]!]!, stallIds.length, (a, b) => byStart(stallIds[a]!, stallIds[b]!))
-  // The lists hold positions in phaseIds/stallIds; store bar indices instead.
-  phaseBands.items.forEach((j, at) => (phaseBands.items[at] = phaseIds[j]!))
-  stallBands.items.forEach((j, at) => (stallBands.items[at] = stallIds[j]!))
+  const stripIds: number[] = []
+  for (let b = 0; b < count; b++) (bars.kind[b] !== STALL_KIND ? phaseIds : bars.strip[b] ? stripIds : stallIds).push(b)
+  const bandLists = (ids: number[]) => {
+    const l = lists(bandCount, (j) => bars.band[ids[j]!]!, ids.length, (a, b) => byStart(ids[a]!, ids[b]!))
+    // The lists hold positions in ids; store bar indices instead.
+    l.items.forEach((j, at) => (l.items[at] = ids[j]!))
+    return l
+  }
+  const phaseBands = bandLists(phaseIds)
+  const stallBands = bandLists(stallIds)
+  const stripBands = bandLists(stripIds)
 
   const groupsByInstruction = lists(n, (g) => gInstr[g]!, groupCount)
 
@@ -321,6 +371,7 @@ export function buildLayout(trace: TimingTrace, options: LayoutOptions = {}): Ch
     groups: { count: groupCount, instruction: Int32Array.from(gInstr), lane: Int32Array.from(gLane), track, firstBar },
     phaseBands,
     stallBands,
+    stripBands,
     groupsByInstruction,
     colourOf,
     colourInstruction: Int32Array.from(colourInstruction),
@@ -335,6 +386,23 @@ export function bandY(layout: ChartLayout, band: number): number {
   const sub = row % layout.rowsPerLane
   const lane = (row - sub) / layout.rowsPerLane
   return lane * (layout.laneHeight + layout.laneGap) + (sub * layout.tracks + track) * layout.trackHeight
+}
+
+/**
+ * Height of a stall strip in a track of `trackHeight` pixels: two fifths of
+ * it, at least 2 pixels, so that the phase bar above it keeps most of its
+ * height and the hatching still has room to show.
+ */
+export function stripHeight(trackHeight: number): number {
+  return Math.max(2, Math.round(trackHeight * 0.4))
+}
+
+/** Where bar `b` is drawn in y: a whole track, or for a strip the bottom of it. */
+export function barBox(layout: ChartLayout, b: number): { y: number; h: number } {
+  const y = bandY(layout, layout.bars.band[b]!)
+  if (!layout.bars.strip[b]) return { y, h: layout.trackHeight }
+  const h = stripHeight(layout.trackHeight)
+  return { y: y + layout.trackHeight - h, h }
 }
 
 export function bandCount(layout: ChartLayout): number {

@@ -13,7 +13,7 @@
  *   const list = drawList(layout, cycleScale(window, 800))
  *   for (let r = 0; r < list.count; r++) ctx.fillRect(list.x[r], list.y[r], list.w[r], list.h[r])
  */
-import { bandCount, bandY, type ChartLayout, type IndexLists } from './layout'
+import { bandCount, bandY, barBox, stripHeight, type ChartLayout, type IndexLists } from './layout'
 import type { CycleScale } from './window'
 
 export const MIXED_SLOT = 0
@@ -88,15 +88,16 @@ class Builder {
   }
 }
 
-function addBands(layout: ChartLayout, bands: IndexLists, scale: CycleScale, minWidth: number, out: Builder) {
+/** `strips`: the bands hold stall strips, drawn along the bottom of the track. */
+function addBands(layout: ChartLayout, bands: IndexLists, scale: CycleScale, minWidth: number, out: Builder, strips = false) {
   const { bars, groups } = layout
   const { start: w0, end: w1 } = scale.window
-  const h = layout.trackHeight
+  const h = strips ? stripHeight(layout.trackHeight) : layout.trackHeight
   for (let band = 0; band < bandCount(layout); band++) {
     const from = bands.offsets[band]!
     const to = bands.offsets[band + 1]!
     if (from === to) continue
-    const y = bandY(layout, band)
+    const y = bandY(layout, band) + layout.trackHeight - h
     // Run being merged: pixel extent, its key (or -1 once mixed), its bar when it has only one.
     let runX0 = 0
     let runX1 = -Infinity
@@ -139,13 +140,16 @@ function addBands(layout: ChartLayout, bands: IndexLists, scale: CycleScale, min
   }
 }
 
-/** The rectangles of the view, phases first then stalls (stalls are drawn over the phases). */
+/** The rectangles of the view: phases, then full stalls, then the stall strips that lie on phase bars. */
 export function drawList(layout: ChartLayout, scale: CycleScale, options: DrawListOptions = {}): DrawList {
   const minWidth = options.minWidth ?? 1
   if (!(minWidth > 0)) throw new RangeError(`minWidth must be positive, got ${minWidth}`)
   const out = new Builder()
   if (options.only !== 'stalls') addBands(layout, layout.phaseBands, scale, minWidth, out)
-  if (options.only !== 'phases') addBands(layout, layout.stallBands, scale, minWidth, out)
+  if (options.only !== 'phases') {
+    addBands(layout, layout.stallBands, scale, minWidth, out)
+    addBands(layout, layout.stripBands, scale, minWidth, out, true)
+  }
   return out.done()
 }
 
@@ -161,7 +165,7 @@ export function instructionBars(layout: ChartLayout, position: number): number[]
   return out
 }
 
-/** Given bars (e.g. one instruction's) as they are, without merging: for drawing a selection on top. */
+/** Given bars (e.g. one instruction's) as they are, without merging, in the order given: for drawing a selection on top. */
 export function barsDrawList(layout: ChartLayout, scale: CycleScale, bars: readonly number[]): DrawList {
   const out = new Builder()
   const { start: w0, end: w1 } = scale.window
@@ -171,7 +175,8 @@ export function barsDrawList(layout: ChartLayout, scale: CycleScale, bars: reado
     if (e <= w0 || s >= w1) continue
     const slot = layout.colourOf[layout.groups.instruction[layout.bars.group[b]!]!]! + 1
     const x0 = scale.toPx(s)
-    out.push(x0, bandY(layout, layout.bars.band[b]!), Math.max(1, scale.toPx(e) - x0), layout.trackHeight, colourKey(slot, layout.bars.kind[b]!), b)
+    const box = barBox(layout, b)
+    out.push(x0, box.y, Math.max(1, scale.toPx(e) - x0), box.h, colourKey(slot, layout.bars.kind[b]!), b)
   }
   return out.done()
 }

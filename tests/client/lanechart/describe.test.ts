@@ -33,4 +33,15 @@ describe('chart words', () => {
     expect(info.phase).toBeNull()
     expect(info.write).toEqual({ start: 11, end: 11 })
   })
+
+  it('describes a phase bar with a stall strip on it as that phase, naming the whole stall span', () => {
+    // One lane: a raw stall from cycle 1 to 6 while the lane reads from cycle 3 (full bar 1-2, strip 3-6).
+    const trace = buildTrace({ lanes: 1, cycles: 12, instructions: [{ lanes: [[2, 2, 3, 8, 4, 9, 9, 10]] }], stalls: [[0, 1, 6, 'raw', 0]] })
+    const layout = buildLayout(trace, { trackHeight: 10 })
+    const onStrip = describeHit(trace, layout, hitTest(layout, 3.5, 9)!)
+    expect([onStrip.phase, onStrip.stall]).toEqual(['read', { reason: 'raw', start: 1, end: 6 }])
+    const before = describeHit(trace, layout, hitTest(layout, 1.5, 5)!)
+    expect([before.phase, before.stall]).toEqual([null, { reason: 'raw', start: 1, end: 6 }])
+    expect(describeHit(trace, layout, hitTest(layout, 7.5, 5)!).stall).toBeNull()
+  })
 })

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { bandY, buildLayout, fittedTrackHeight, STALL_KIND, withTrackHeight, type ChartLayout } from '@/lib/lanechart/layout'
+import { bandY, barBox, buildLayout, fittedTrackHeight, STALL_KIND, stripHeight, withTrackHeight, type ChartLayout } from '@/lib/lanechart/layout'
 import { buildTrace, twoLaneTrace } from './buildTrace'
 
 /** Bars of one (instruction position, lane) as [kind, start, end] sorted, for readable expectations. */
@@ -123,5 +123,45 @@ describe('track height', () => {
     { lanes: 2, target: 10, expected: 4, why: 'a tiny target stops at 4 px' },
   ])('fits the track height to the target: $why', ({ target, expected }) => {
     expect(fittedTrackHeight(buildLayout(twoLaneTrace()), target)).toBe(expected)
+  })
+})
+
+describe('stalls over their own instruction', () => {
+  /** Stall bars of the only group as [start, end, strip]. */
+  const stallsOf = (layout: ChartLayout) =>
+    Array.from({ length: layout.bars.count }, (_, b) => b)
+      .filter((b) => layout.bars.kind[b] === STALL_KIND)
+      .map((b) => [layout.bars.start[b]!, layout.bars.end[b]!, layout.bars.strip[b]!])
+
+  // The saxpy case of the engine's stall rule (docs/model.md "Stalls"): a raw stall from cycle 12 to 44
+  // while the lane reads from cycle 27 to 46; here reads 27-46, execute 28-50, write 48-51.
+  const lane = [3, 3, 27, 46, 28, 50, 48, 51] as const
+  const stalled = () => buildTrace({ lanes: 1, cycles: 60, instructions: [{ lanes: [[...lane]] }], stalls: [[0, 12, 33, 'raw', 0]] })
+
+  it('cuts a stall where it meets a phase bar: full height before it, a strip over it', () => {
+    const layout = buildLayout(stalled())
+    expect(stallsOf(layout)).toEqual([[12, 27, 0], [27, 28, 1], [28, 45, 1]])
+    // Every piece names the one stall span it comes from.
+    expect(Array.from(layout.bars.stall).filter((k) => k !== -1)).toEqual([0, 0, 0])
+    expect(Array.from(layout.stallBands.items).map((b) => layout.bars.start[b])).toEqual([12])
+    expect(Array.from(layout.stripBands.items).map((b) => layout.bars.start[b])).toEqual([27, 28])
+  })
+
+  it('with sub-rows, cuts it against the row it is drawn in only', () => {
+    // The stall starts before reading ends, so it goes in the read row and meets only the read bar.
+    expect(stallsOf(buildLayout(stalled(), { subRows: true }))).toEqual([[12, 27, 0], [27, 45, 1]])
+  })
+
+  it('keeps a stall that meets no phase bar whole and full height', () => {
+    const trace = buildTrace({ lanes: 1, cycles: 60, instructions: [{ lanes: [[...lane]] }], stalls: [[0, 52, 3, 'bank', 0]] })
+    expect(stallsOf(buildLayout(trace))).toEqual([[52, 55, 0]])
+  })
+
+  it('draws a strip along the bottom of its track, two fifths of it and at least 2 pixels', () => {
+    const layout = buildLayout(stalled(), { trackHeight: 10 })
+    const strip = Array.from(layout.stripBands.items)[0]!
+    expect(barBox(layout, strip)).toEqual({ y: 6, h: 4 })
+    expect(barBox(layout, Array.from(layout.stallBands.items)[0]!)).toEqual({ y: 0, h: 10 })
+    expect([4, 10, 14].map(stripHeight)).toEqual([2, 4, 6])
   })
 })

@@ -67,6 +67,15 @@ describe('level of detail', () => {
     expect(kinds.slice(0, -2).every((k) => k < 3)).toBe(true)
   })
 
+  it('draws a stall strip along the bottom of the phase bar it lies on, after the full stalls', () => {
+    // twoLaneTrace: the bank stall of instruction 1 in cycle 3 lies on its execute segment.
+    const layout = buildLayout(twoLaneTrace(), { trackHeight: 10 })
+    const list = drawList(layout, cycleScale({ start: 0, end: 20 }, 200))
+    const last = list.count - 1
+    expect([list.x[last], list.y[last], list.w[last], list.h[last], keyKind(list.key[last]!)]).toEqual([30, 6, 10, 4, 3])
+    expect(layout.bars.strip[list.bar[last]!]).toBe(1)
+  })
+
   it('lists every bar of an instruction across lanes for the selection', () => {
     const layout = buildLayout(twoLaneTrace())
     // Instruction 1: three segments in lane 0, a stall there, three segments in lane 1.

@@ -57,13 +57,16 @@ export function paintBars(ctx: CanvasRenderingContext2D, list: DrawList, palette
   ctx.save()
   ctx.globalAlpha = options.alpha ?? 1
   const stalls: number[] = []
-  for (const [key, rs] of byKey) {
+  // Stall fills after every phase fill: a strip lies on a phase bar.
+  const keys = [...byKey.keys()].sort((a, b) => Number(keyKind(a) === STALL) - Number(keyKind(b) === STALL))
+  for (const key of keys) {
+    const rs = byKey.get(key)!
     ctx.fillStyle = palette.keyColour(key)
     ctx.beginPath()
     for (const r of rs) {
       const x0 = Math.max(0, list.x[r]!)
       const x1 = Math.min(options.width, list.x[r]! + list.w[r]!)
-      if (x1 > x0) ctx.rect(x0, list.y[r]! + inset, x1 - x0, list.h[r]! - 2 * inset)
+      if (x1 > x0) ctx.rect(x0, list.y[r]! + inset, x1 - x0, Math.max(1, list.h[r]! - 2 * inset))
     }
     ctx.fill()
     if (keyKind(key) === STALL) stalls.push(...rs)
@@ -75,7 +78,7 @@ export function paintBars(ctx: CanvasRenderingContext2D, list: DrawList, palette
     for (const r of stalls) {
       const x0 = Math.max(0, list.x[r]!)
       const x1 = Math.min(options.width, list.x[r]! + list.w[r]!)
-      if (x1 > x0) ctx.rect(x0, list.y[r]! + inset, x1 - x0, list.h[r]! - 2 * inset)
+      if (x1 > x0) ctx.rect(x0, list.y[r]! + inset, x1 - x0, Math.max(1, list.h[r]! - 2 * inset))
     }
     ctx.fill()
   }

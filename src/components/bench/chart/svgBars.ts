@@ -1,13 +1,16 @@
 /**
  * The SVG renderer for small runs: one <g> per bar group carrying
  * data-lane and data-instruction (so that tests and assistive tools can find
- * every group), one <rect> per bar, stalls with a hatch overlay. Every call
+ * every group), one <rect> per bar, stalls with a hatch overlay. Stall rects
+ * take no pointer events: a strip lies on a phase bar (layout.ts), and the
+ * chart hit-tests by position anyway, so the rect under a click is the phase
+ * bar's (what a user and a test aim at). Every call
  * re-joins the data (d3's general update pattern); small runs keep this well
  * within a frame.
  */
 import { select } from 'd3'
 import type { ChartPalette } from '@/lib/lanechart/colours'
-import { bandY, STALL_KIND, type ChartLayout } from '@/lib/lanechart/layout'
+import { barBox, STALL_KIND, type ChartLayout } from '@/lib/lanechart/layout'
 import { colourKey } from '@/lib/lanechart/lod'
 import type { CycleScale } from '@/lib/lanechart/window'
 
@@ -51,10 +54,11 @@ export function renderSvgBars(root: SVGGElement, s: SvgBarsState): void {
       return out.sort((a, b) => Number(bars.kind[a.bar] === STALL_KIND) - Number(bars.kind[b.bar] === STALL_KIND) || Number(a.hatch) - Number(b.hatch))
     })
     .join('rect')
+    .attr('class', (p) => (bars.kind[p.bar] !== STALL_KIND ? 'lc-phase' : `lc-stall${bars.strip[p.bar] ? ' lc-strip' : ''}${p.hatch ? ' lc-hatch' : ''}`))
     .attr('x', (p) => scale.toPx(bars.start[p.bar]!))
     .attr('width', (p) => Math.max(1, scale.toPx(bars.end[p.bar]!) - scale.toPx(bars.start[p.bar]!)))
-    .attr('y', (p) => bandY(layout, bars.band[p.bar]!) + inset)
-    .attr('height', layout.trackHeight - 2 * inset)
+    .attr('y', (p) => barBox(layout, p.bar).y + inset)
+    .attr('height', (p) => Math.max(1, barBox(layout, p.bar).h - 2 * inset))
     .attr('fill', (p) => {
       if (p.hatch) return `url(#${s.hatchId})`
       const slot = layout.colourOf[groups.instruction[bars.group[p.bar]!]!]! + 1
