@@ -20,14 +20,31 @@ import { Recorder } from './recorder'
 import { OrderedReductionInst, ReductionInst } from './reduction'
 import { RegFile } from './regfile'
 import { Renamer } from './rename'
+import { lanePlan } from './symmetry'
 import { UnitInst } from './units'
 import { Window } from './window'
 
 const NONE = 0x7fffffff
+// Imported bindings copied once: a module binding may cost a getter call per use in the per-cycle paths.
+const FIELDS: number = LANE_FIELD_COUNT
+const READ_END: number = F_READ_END
+const NULL_CYCLE: number = NO_CYCLE
+const R_FRONTEND = REASON.frontend
+const R_QUEUE = REASON.queue
+const R_RENAME = REASON.rename
+const R_SLOT = REASON.slot
+const R_BARRIER = REASON.barrier
+const R_MEMORY = REASON.memory
 
 export interface TimingState {
+  /** The stream and machine the engine runs: the caller's, or their one-lane plan (symmetry.ts). */
   readonly stream: DynamicStream
   readonly machine: Machine
+  /** The caller's stream and machine, which the trace describes. */
+  readonly source: DynamicStream
+  readonly sourceMachine: Machine
+  /** Lanes each timed lane stands for (1: every lane is timed). */
+  readonly laneFactor: number
   readonly ctx: Ctx
   readonly options: Required<SimulateOptions>
   cycle: number
@@ -67,21 +84,29 @@ export interface TimingState {
   readonly oldest: (Inst | null)[]
 }
 
-export function createTimingState(stream: DynamicStream, machine: Machine, options: SimulateOptions = {}): TimingState {
+export function createTimingState(source: DynamicStream, sourceMachine: Machine, options: SimulateOptions = {}): TimingState {
+  const plan = options.identicalLanes === false ? null : lanePlan(source, sourceMachine)
+  const stream = plan?.stream ?? source
+  const machine = plan?.machine ?? sourceMachine
   const d = derive(machine)
   const L = d.lanes
   const ops = stream.ops
   const laneTimes = new Int32Array(ops.length * L * LANE_FIELD_COUNT).fill(NO_CYCLE)
   const rec = new Recorder(L, options.recordUsage ?? true)
   const ctx = new Ctx(d, new RegFile(d, machine.physRegs), new Renamer(machine.physRegs), rec, laneTimes)
+  if (plan) rec.setLaneFactor(plan.factor)
   const s: TimingState = {
     stream,
     machine,
+    source,
+    sourceMachine,
+    laneFactor: plan?.factor ?? 1,
     ctx,
     options: {
       cycleLimit: options.cycleLimit ?? DEFAULT_CYCLE_LIMIT,
       traceLimit: options.traceLimit ?? DEFAULT_TRACE_LIMIT,
       recordUsage: options.recordUsage ?? true,
+      identicalLanes: plan !== null,
     },
     cycle: 0,
     lastBusy: -1,
@@ -154,11 +179,11 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
   const ctx = s.ctx
   const mem = isMem(op)
   if (mem ? s.memQueued >= m.memQueueDepth : s.arithQueued >= m.arithQueueDepth) {
-    s.feReason = REASON.queue
+    s.feReason = R_QUEUE
     return false
   }
   if (ctx.ren.freeCount < op.dstRegs.length) {
-    s.feReason = REASON.rename
+    s.feReason = R_RENAME
     return false
   }
   const src = op.srcRegs.map((g) => Int32Array.from(g, (r) => ctx.ren.lookup(r)))
@@ -192,7 +217,7 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
 /** One front-end cycle: a scalar instruction, a vset, or up to dispatchWidth vector dispatches. */
 function frontEnd(s: TimingState, c: number): boolean {
   const ops = s.stream.ops
-  s.feReason = REASON.frontend
+  s.feReason = R_FRONTEND
   if (s.hold >= 0 || s.holdReleasedAt === c) return false
   let dispatched = 0
   for (;;) {
@@ -231,7 +256,7 @@ function advance(s: TimingState): void {
 }
 
 function readEnd(inst: Inst, lane: number, ctx: Ctx): number {
-  return ctx.laneTimes[(inst.seq * ctx.L + lane) * LANE_FIELD_COUNT + F_READ_END] ?? NO_CYCLE
+  return ctx.laneTimes[(inst.seq * ctx.L + lane) * FIELDS + READ_END] ?? NULL_CYCLE
 }
 
 function noteStarted(s: TimingState, inst: Inst): void {
@@ -257,7 +282,7 @@ function issueStaggered(s: TimingState, lane: number, c: number): void {
     const prev = k > 0 ? s.arith.at(k - 1) : undefined
     if (prev && (prev.readDone[lane] !== 1 || readEnd(prev, lane, ctx) >= c)) return
     if (inst.hasWorkIn(lane) && (s.slotsUsed[lane] ?? 0) >= s.machine.laneSlots) {
-      ctx.deny(lane, inst, REASON.slot)
+      ctx.deny(lane, inst, R_SLOT)
       ctx.refused[lane] = inst
       return
     }
@@ -290,14 +315,15 @@ function issueTogether(s: TimingState, c: number): void {
       }
     }
     if (!ok) {
-      for (let l = 0; l < L; l++) refuse(ctx, l, inst, REASON.barrier)
+      for (let l = 0; l < L; l++) refuse(ctx, l, inst, R_BARRIER)
       return
     }
-    for (let l = 0; l < L; l++) {
-      if (inst.hasWorkIn(l) && (s.slotsUsed[l] ?? 0) >= s.machine.laneSlots) {
-        for (let q = 0; q < L; q++) refuse(ctx, q, inst, q === l ? REASON.slot : REASON.barrier)
-        return
-      }
+    // A lane without a free slot waits for one (`slot`); the others wait for it (`barrier`).
+    let full = false
+    for (let l = 0; l < L && !full; l++) full = inst.hasWorkIn(l) && (s.slotsUsed[l] ?? 0) >= s.machine.laneSlots
+    if (full) {
+      for (let q = 0; q < L; q++) refuse(ctx, q, inst, inst.hasWorkIn(q) && (s.slotsUsed[q] ?? 0) >= s.machine.laneSlots ? R_SLOT : R_BARRIER)
+      return
     }
     for (let l = 0; l < L; l++) startInLane(s, inst, l, c)
   }
@@ -331,7 +357,7 @@ function memoryStart(s: TimingState, c: number): void {
       }
     }
     if (!ok) {
-      for (let l = 0; l < s.ctx.L; l++) s.ctx.deny(l, inst, REASON.memory)
+      for (let l = 0; l < s.ctx.L; l++) s.ctx.deny(l, inst, R_MEMORY)
       return
     }
     ports[port] = inst

@@ -119,7 +119,10 @@ export class Recorder {
   private uStart = new Int32Array(0)
   private uLen = new Int32Array(0)
   private uRow = new Int32Array(0)
-  private openSpans = 0
+  /** Closed spans, counted as the full machine holds them (see `setLaneFactor`). */
+  private closed = 0
+  private stallWeight = 1
+  private useWeight = new Int32Array(0)
   /** Stall cycles by reason index. */
   readonly stallTotals = new Float64Array(9)
 
@@ -148,12 +151,23 @@ export class Recorder {
     this.uStart = new Int32Array(n)
     this.uLen = new Int32Array(n)
     this.uRow = new Int32Array(n)
+    this.useWeight = new Int32Array(n).fill(1)
     ;(this as { totals: Float64Array }).totals = new Float64Array(n)
+  }
+
+  /**
+   * This recorder times one lane for `factor` identical ones (symmetry.ts):
+   * its stall spans and lane-resource spans count `factor` times against the
+   * span limit, so that a run stops where the full one would.
+   */
+  setLaneFactor(factor: number): void {
+    this.stallWeight = factor
+    this.resources.forEach((r, i) => (this.useWeight[i] = r.lane === null ? 1 : factor))
   }
 
   /** Spans closed so far (the trace-size limit counts these). */
   get spanCount(): number {
-    return this.stall.count + this.usage.count - this.openSpans
+    return this.closed
   }
 
   /** Lane `lane` waited in cycle c for `inst` because of reason index `reason`. */
@@ -175,7 +189,6 @@ export class Recorder {
     this.sInst[lane] = inst
     this.sStart[lane] = c
     this.sLen[lane] = 1
-    this.openSpans++
   }
 
   /** Stall rows open in cycle order, so those from `cycles` on are a suffix; a row before may reach past it. */
@@ -201,7 +214,7 @@ export class Recorder {
   private closeStall(lane: number): void {
     this.stall.set(S_LEN, this.sRow[lane] ?? 0, this.sLen[lane] ?? 0)
     this.sReason[lane] = -1
-    this.openSpans--
+    this.closed += this.stallWeight
   }
 
   /**
@@ -263,7 +276,6 @@ export class Recorder {
     this.uWr[r] = writes
     this.uStart[r] = c
     this.uLen[r] = len
-    this.openSpans++
   }
 
   private closeUse(r: number): void {
@@ -273,7 +285,7 @@ export class Recorder {
     t.set(U_AMOUNT, row, this.uAmt[r] ?? 0)
     t.set(U_WRITES, row, this.uWr[r] ?? 0)
     this.uInst[r] = -1
-    this.openSpans--
+    this.closed += this.useWeight[r] ?? 1
   }
 
   /**

@@ -13,7 +13,13 @@ import { STALL_REASONS, emptyStallCounts } from '../trace/types'
 import type { TimingState } from './engine'
 import { createTimingState, step } from './engine'
 import { opFlops } from './inst'
+import { derive } from './config'
+import { Ctx } from './context'
 import { computeMetrics } from './metrics'
+import { Recorder } from './recorder'
+import { RegFile } from './regfile'
+import { Renamer } from './rename'
+import { replicate } from './symmetry'
 
 export type { TimingState } from './engine'
 export { createTimingState, step } from './engine'
@@ -31,7 +37,9 @@ export function progress(s: TimingState): TimingProgress {
 
 /** Runs up to `cycles` more cycles; returns false once the run is over. */
 export function advance(s: TimingState, cycles: number): boolean {
-  for (let i = 0; i < cycles; i++) if (!step(s)) return false
+  // A local copy of the imported binding: some module loaders turn each use into a getter call.
+  const next = step
+  for (let i = 0; i < cycles; i++) if (!next(s)) return false
   return true
 }
 
@@ -39,14 +47,15 @@ export function advance(s: TimingState, cycles: number): boolean {
 export function finish(s: TimingState, stopped?: TimingError): TimingResult {
   const ctx = s.ctx
   const cycles = s.lastBusy + 1
-  const ops = s.stream.ops
+  const ops = s.source.ops
+  const k = s.laneFactor
   let flops = 0
   const instructions: InstructionTrace[] = ops.map((op, i) => {
     const done = (s.completeAt[i] ?? -1) >= 0
     const f = done && !op.isConfig ? opFlops(op) : 0
     flops += f
     const stalls = emptyStallCounts()
-    STALL_REASONS.forEach((r, k) => (stalls[r] = s.opStalls[i * 9 + k] ?? 0))
+    STALL_REASONS.forEach((r, j) => (stalls[r] = (s.opStalls[i * 9 + j] ?? 0) * k))
     const dispatch = (s.dispatchAt[i] ?? -1) >= 0 ? (s.dispatchAt[i] ?? 0) : null
     const complete = done ? (s.completeAt[i] ?? 0) : null
     return {
@@ -68,20 +77,32 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
       stalls,
     }
   })
-  const spans = ctx.rec.finish(cycles)
   const error = s.error ?? (s.done ? undefined : (stopped ?? { code: 'cancelled', message: 'the run was stopped before it finished' }))
+  let spans = ctx.rec.finish(cycles)
+  let laneTimes = ctx.laneTimes
+  let full = ctx
+  let laneBusy = s.laneBusy
+  if (k > 1) {
+    // One lane was timed for all: spread its results over the machine's lanes (symmetry.ts).
+    const d = derive(s.sourceMachine)
+    full = new Ctx(d, new RegFile(d, s.sourceMachine.physRegs), new Renamer(s.sourceMachine.physRegs), new Recorder(d.lanes, false), new Int32Array(0))
+    const r = replicate(ctx, full, spans)
+    spans = r
+    laneTimes = r.laneTimes
+    laneBusy = new Float64Array(d.lanes).fill(s.laneBusy[0] ?? 0)
+  }
   return {
     trace: {
       formatVersion: 1,
-      machine: s.machine,
-      laneCount: ctx.L,
+      machine: s.sourceMachine,
+      laneCount: full.L,
       cycles,
       instructions,
-      laneTimes: ctx.laneTimes,
+      laneTimes,
       stalls: spans.stalls,
-      resources: ctx.rec.resources,
+      resources: full.rec.resources,
       usage: spans.usage,
-      metrics: computeMetrics(ctx, cycles, flops, s.laneBusy),
+      metrics: computeMetrics(full, cycles, flops, laneBusy),
     },
     ...(error ? { error } : {}),
   }
@@ -90,6 +111,7 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
 /** Times a whole stream on a machine. Never throws for a long or huge run: limits end it with `error` set. */
 export function simulate(stream: DynamicStream, machine: Machine, options: SimulateOptions = {}): TimingResult {
   const s = createTimingState(stream, machine, options)
-  while (step(s));
+  const next = step // see `advance`
+  while (next(s));
   return finish(s)
 }

@@ -158,6 +158,12 @@ export interface SimulateOptions {
   traceLimit?: number
   /** Record resource-use spans (default true); totals in the metrics are kept either way. */
   recordUsage?: boolean
+  /**
+   * Time a run whose lanes all do the same work on one lane and replicate it
+   * (default true; docs/model.md "Speed"). false times every lane: the same
+   * trace, more slowly.
+   */
+  identicalLanes?: boolean
 }
 
 export const DEFAULT_CYCLE_LIMIT = 5_000_000
