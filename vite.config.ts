@@ -23,6 +23,7 @@ export default defineConfig({
   test: {
     include: ['tests/**/*.test.ts', 'server/**/*.test.ts', 'shared/**/*.test.ts'],
     environment: 'node',
+    setupFiles: ['tests/setup/fast-check.ts'],
     // Integration tests share one PostgreSQL database: run files one at a time.
     fileParallelism: false,
     testTimeout: 30_000,
