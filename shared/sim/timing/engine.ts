@@ -80,6 +80,8 @@ export interface TimingState {
   readonly memPorts: (MemInst | null)[]
   /** Scratch list of the instructions active in one lane this cycle. */
   readonly active: Inst[]
+  /** Whether an instruction in flight finished since the last sweep of `inflight`. */
+  finished: boolean
   /** Per lane, this cycle: the oldest instruction started there before the cycle (null: none). */
   readonly oldest: (Inst | null)[]
 }
@@ -135,6 +137,7 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
     memPorts: Array.from({ length: machine.memoryPorts }, () => null),
     active: [],
     oldest: new Array<Inst | null>(L).fill(null),
+    finished: false,
   }
   for (let i = 0; i < ops.length; i++) {
     if ((ops[i] as VectorOp).seq !== i) {
@@ -145,6 +148,7 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
   ctx.sink = {
     completed(seq, c) {
       s.completeAt[seq] = c
+      s.finished = true
       if (s.hold === seq) {
         s.hold = -1
         s.holdReleasedAt = c
@@ -454,11 +458,14 @@ export function step(s: TimingState): boolean {
   const ctx = s.ctx
   const L = ctx.L
   ctx.cycle = c
-  ctx.progress.fill(0)
-  ctx.deniedCount.fill(0)
-  ctx.waitSeq.fill(NONE)
-  ctx.reader.fill(null)
-  ctx.refused.fill(null)
+  // A loop, not fill(): with few lanes the per-call cost of fill dominates.
+  for (let l = 0; l < L; l++) {
+    ctx.progress[l] = 0
+    ctx.deniedCount[l] = 0
+    ctx.waitSeq[l] = NONE
+    ctx.reader[l] = null
+    ctx.refused[l] = null
+  }
   memoryStart(s, c)
   const fl = s.inflight
   for (let i = 0; i < fl.length; i++) (fl[i] as Inst).global(c)
@@ -498,9 +505,8 @@ export function step(s: TimingState): boolean {
     s.slotRelease[l] = 0
   }
   if (busy) s.lastBusy = c
-  let finished = false
-  for (let i = 0; i < fl.length && !finished; i++) if ((fl[i] as Inst).complete >= 0) finished = true
-  if (finished) {
+  if (s.finished) {
+    s.finished = false
     s.inflight = fl.filter((i) => i.complete < 0)
     // Forget finished instructions no lane's issue looks back at any more (it reads the previous one).
     let oldest = s.laneArithNext[0] ?? 0

@@ -18,52 +18,52 @@ const CHUNK = 1 << CHUNK_BITS
 const LOW = CHUNK - 1
 
 /**
- * Rows in fixed-size chunks per column: appending never copies what is
- * already stored, and `column` builds one exact-size column at a time,
- * releasing its chunks, so that a long run never holds its spans twice over.
- * Every column is stored as Int32 (one element type keeps each store site
- * monomorphic, which matters at a few stores per simulated cycle) and takes
- * its trace type only in `column`.
+ * Rows in fixed-size chunks, a row's columns side by side (one chunk lookup
+ * and one cache line per row written): appending never copies what is already
+ * stored, and `column` builds one exact-size column at a time, so that a long
+ * run never holds its spans twice over (the chunks go once the last column is
+ * built). Every column is stored as Int32 (one element type keeps each store
+ * site monomorphic, which matters at a few stores per simulated cycle) and
+ * takes its trace type only in `column`.
  */
 class Columns {
-  readonly chunks: Int32Array[][]
+  private chunks: Int32Array[] = []
   count = 0
   /** Whether rows were opened in order of their start cycle (column 0). */
   sorted = true
   private lastStart = 0
-  constructor(columns: number) {
-    this.chunks = Array.from({ length: columns }, () => [])
-  }
+  private built = 0
+  constructor(private readonly width: number) {}
   /** A new row starting at cycle `start`; returns its index. */
   push(start: number): number {
     const i = this.count++
-    if ((i & LOW) === 0) for (const col of this.chunks) col.push(new Int32Array(CHUNK))
+    if ((i & LOW) === 0) this.chunks.push(new Int32Array(CHUNK * this.width))
     if (start < this.lastStart) this.sorted = false
     this.lastStart = start
-    ;((this.chunks[0] as Int32Array[])[i >>> CHUNK_BITS] as Int32Array)[i & LOW] = start
+    ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width] = start
     return i
   }
   set(k: number, i: number, v: number): void {
-    ;((this.chunks[k] as Int32Array[])[i >>> CHUNK_BITS] as Int32Array)[i & LOW] = v
+    ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width + k] = v
   }
   get(k: number, i: number): number {
-    return ((this.chunks[k] as Int32Array[])[i >>> CHUNK_BITS] as Int32Array)[i & LOW] ?? 0
+    return (this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width + k] ?? 0
   }
-  /** Column k in row order `idx` (null: as stored), as a `Make`; its chunks are released. */
+  /** Column k in row order `idx` (null: as stored), as a `Make`; the chunks go once every column is built. */
   column<T extends Column>(k: number, idx: Uint32Array | null, Make: new (n: number) => T): T {
-    const out = new Make(this.count)
-    const chunks = this.chunks[k] as Int32Array[]
+    const n = this.count
+    const out = new Make(n)
+    const w = this.width
+    const chunks = this.chunks
     if (idx === null) {
-      chunks.forEach((ch, n) => out.set(ch.subarray(0, Math.min(CHUNK, this.count - n * CHUNK)), n * CHUNK))
+      for (let i = 0; i < n; i++) out[i] = (chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * w + k] ?? 0
     } else {
-      const tmp = new Int32Array(this.count)
       for (let i = 0; i < idx.length; i++) {
         const j = idx[i] ?? 0
-        tmp[i] = (chunks[j >>> CHUNK_BITS] as Int32Array)[j & LOW] ?? 0
+        out[i] = (chunks[j >>> CHUNK_BITS] as Int32Array)[(j & LOW) * w + k] ?? 0
       }
-      out.set(tmp)
     }
-    this.chunks[k] = []
+    if (++this.built === w) this.chunks = []
     return out
   }
   /** Row order by start cycle, stable (a counting sort: starts are cycle numbers); null when already in order. */
