@@ -168,9 +168,10 @@ export interface SimulateOptions {
 
 export const DEFAULT_CYCLE_LIMIT = 5_000_000
 /**
- * 16 million spans, about 290 MB of typed arrays (18 bytes a span). A
- * 100,000-instruction strip-mined run on the default machine needs 13.9
- * million, nearly all of them bank-port uses: with single-port banks
+ * 16 million spans, about 350 MB of typed arrays (22 bytes a usage span,
+ * 15 a stall span). A 100,000-instruction strip-mined run on the default
+ * machine needs 14.7 million (13.9 million uses, 0.9 million stalls), nearly
+ * all of them bank-port uses: with single-port banks
  * consecutive words sit in consecutive banks, so each word read or written is
  * a span of its own.
  */
