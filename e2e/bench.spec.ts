@@ -14,6 +14,7 @@ import { parseMachine } from '../shared/schemas/machine'
 import { PRESETS } from '../shared/sim/presets'
 import { runPipeline } from '../shared/sim/run'
 import { LANE_FIELD_COUNT, NO_CYCLE, type TimingTrace } from '../shared/sim/trace/types'
+import { percent, utilizationScale } from '../src/lib/bench/utilization'
 import { DEMO, signIn, userMenu, watchConsole } from './helpers/auth'
 import { screenshot } from './helpers/screenshots'
 
@@ -253,6 +254,23 @@ test.describe('the Bench', () => {
     expect(await clashes()).toEqual([])
     expect(await scrolls()).toBe(true)
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(1280)
+  })
+
+  test('the units and banks card shows one labelled bar per register-file bank with the run\'s figure', async ({ page }) => {
+    await openBench(page)
+    await pickExample(page, 'saxpy')
+    const { metrics } = modelRun('saxpy')
+    await expect(page.getByTestId('metric-cycles')).toHaveText(String(metrics.cycles))
+    const banks = page.getByTestId('bank-utilization').getByRole('listitem')
+    await expect(banks).toHaveCount(metrics.bankUtilization.length)
+    for (const [b, v] of metrics.bankUtilization.entries()) {
+      await expect(banks.nth(b)).toHaveAttribute('aria-label', `bank ${b}: ${percent(v)}`)
+      await expect(banks.nth(b).locator('.tick')).toHaveText(String(b))
+    }
+    // The bars are drawn against a round top at or above the busiest bank, printed beside them.
+    await expect(page.getByTestId('bank-utilization').locator('.axis')).toContainText(percent(utilizationScale(metrics.bankUtilization)))
+    await expect(page.getByTestId('lane-utilization').getByRole('listitem')).toHaveCount(metrics.laneBusy.length)
+    await page.getByTestId('metrics').screenshot({ path: '.screenshots/bench-metrics.png' })
   })
 
   test('shows the shortcut help and takes screenshots of both themes', async ({ page }) => {
