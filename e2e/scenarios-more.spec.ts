@@ -366,6 +366,14 @@ test.describe('layout from a 1280x800 laptop to 4K', () => {
       expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(size.width)
       const box = await page.getByTestId('chart-box').boundingBox()
       expect(box!.width).toBeGreaterThan(size.width * 0.45)
+      // The editor and the lanes grow with the height (48 % of it for the editor, 320 to 1100 px; the lanes
+      // about 42 %, tracks up to 28 px), so a tall screen is not left a quarter empty and a laptop keeps both usable.
+      const editor = (await page.locator('.editor-box').boundingBox())!
+      expect(editor.height).toBeGreaterThanOrEqual(Math.min(1100, Math.max(320, size.height * 0.48)) - 2)
+      const lanes = (await chart.locator('.lc-bars').boundingBox())!
+      expect(lanes.height).toBeGreaterThan(size.height >= 2000 ? 440 : 200)
+      const bottom = await page.evaluate(() => Math.max(...[...document.querySelectorAll('.bench .columns > *')].map((c) => c.getBoundingClientRect().bottom + window.scrollY)))
+      expect(bottom).toBeGreaterThan(size.height * 0.85)
 
       await page.goto('/scenarios')
       await expect(page.getByTestId('scenario-table').locator('tbody tr').first()).toBeVisible()

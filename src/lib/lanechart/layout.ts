@@ -430,11 +430,35 @@ export function withTrackHeight(layout: ChartLayout, trackHeight: number): Chart
 
 /**
  * A track height that fits the lanes into about `target` pixels, between 4
- * and 14 pixels a track (below 4 a bar cannot be hovered, above 14 it only
- * takes room).
+ * and `maxTrack` pixels a track (below 4 a bar cannot be hovered; above the
+ * maximum it only takes room).
  */
-export function fittedTrackHeight(layout: ChartLayout, target: number): number {
+export function fittedTrackHeight(layout: ChartLayout, target: number, maxTrack = 14): number {
   const tracks = layout.laneCount * layout.rowsPerLane * layout.tracks
   const gaps = Math.max(0, layout.laneCount - 1) * layout.laneGap
-  return Math.max(4, Math.min(14, Math.floor((target - gaps) / Math.max(1, tracks))))
+  return Math.max(4, Math.min(maxTrack, Math.floor((target - gaps) / Math.max(1, tracks))))
+}
+
+export interface ChartSize {
+  /** Pixels the lanes may take. */
+  target: number
+  /** Tallest track, in pixels. */
+  maxTrack: number
+}
+
+/**
+ * How tall the lanes may be in a window `viewportHeight` pixels tall: about
+ * 42 % of it (40 % more with sub-rows), between 300 and 1100 pixels, so that
+ * a 1280x800 laptop keeps the chart and its scrubber in view with room below,
+ * and a 4K screen does not leave the lanes a strip at the top. Tracks may
+ * grow from 14 pixels (a laptop) to 28 (4K) in step, so that a short run
+ * fills the taller chart too.
+ */
+export function chartSize(viewportHeight: number, subRows: boolean): ChartSize {
+  if (!(viewportHeight > 0)) throw new RangeError(`viewport height must be positive, got ${viewportHeight}`)
+  const plain = Math.min(1100, Math.max(300, Math.round(0.42 * viewportHeight)))
+  return {
+    target: subRows ? Math.round(plain * 1.4) : plain,
+    maxTrack: Math.min(28, Math.max(14, Math.floor(plain / 24))),
+  }
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { bandY, barBox, buildLayout, fittedTrackHeight, STALL_KIND, stripHeight, withTrackHeight, type ChartLayout } from '@/lib/lanechart/layout'
+import { bandY, barBox, buildLayout, chartSize, fittedTrackHeight, STALL_KIND, stripHeight, withTrackHeight, type ChartLayout } from '@/lib/lanechart/layout'
 import { buildTrace, twoLaneTrace } from './buildTrace'
 
 /** Bars of one (instruction position, lane) as [kind, start, end] sorted, for readable expectations. */
@@ -163,5 +163,31 @@ describe('stalls over their own instruction', () => {
     expect(barBox(layout, strip)).toEqual({ y: 6, h: 4 })
     expect(barBox(layout, Array.from(layout.stallBands.items)[0]!)).toEqual({ y: 0, h: 10 })
     expect([4, 10, 14].map(stripHeight)).toEqual([2, 4, 6])
+  })
+})
+
+describe('chart size from the window height', () => {
+  it.each([
+    { height: 800, target: 336, maxTrack: 14, why: 'a 1280x800 laptop keeps the 14 px tracks' },
+    { height: 1080, target: 454, maxTrack: 18, why: 'a 1080p screen grows a little' },
+    { height: 2160, target: 907, maxTrack: 28, why: '4K takes about 42 % of the height, tracks to 28 px' },
+    { height: 500, target: 300, maxTrack: 14, why: 'a short window stops at 300 px' },
+    { height: 4320, target: 1100, maxTrack: 28, why: 'an 8K window stops at 1100 px' },
+  ])('$why', ({ height, target, maxTrack }) => {
+    expect(chartSize(height, false)).toEqual({ target, maxTrack })
+  })
+
+  it('gives sub-rows 40 % more height with the same tracks', () => {
+    expect(chartSize(800, true)).toEqual({ target: 470, maxTrack: 14 })
+  })
+
+  it('refuses a window of no height', () => {
+    expect(() => chartSize(0, false)).toThrow(/viewport height must be positive/)
+  })
+
+  it('lets tracks grow to the given maximum only', () => {
+    const layout = buildLayout(twoLaneTrace())
+    expect(fittedTrackHeight(layout, 900, 28)).toBe(28)
+    expect(fittedTrackHeight(layout, 900)).toBe(14)
   })
 })
