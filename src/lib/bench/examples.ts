@@ -13,7 +13,7 @@ export interface Example {
 }
 
 /** Order of the menu: the list first, then anything else alphabetically. */
-const ORDER = ['saxpy', 'dot', 'stencil', 'clamp', 'stripmine', 'reduction']
+const ORDER = ['saxpy', 'dot', 'stencil', 'clamp', 'stripmine', 'reduction', 'bank-conflicts']
 
 export function exampleList(files: Record<string, string>): Example[] {
   const list = Object.entries(files).map(([path, source]) => {
