@@ -5,7 +5,7 @@
  */
 import type { VectorOp } from '../exec/stream'
 import { LANE_FIELD_COUNT as FIELD_COUNT, NO_CYCLE as NULL_CYCLE } from '../trace/types'
-import { wordsFor } from './config'
+import { laneElements, wordsFor } from './config'
 import type { Ctx } from './context'
 import { REASON } from './context'
 import { PENDING } from './regfile'
@@ -353,7 +353,7 @@ export function opFlops(op: VectorOp): number {
 /** Elements per lane for the standard layout. */
 export function fillLaneElements(n: Int32Array, vl: number): void {
   const L = n.length
-  for (let l = 0; l < L; l++) n[l] = Math.max(0, Math.ceil((vl - l) / L))
+  for (let l = 0; l < L; l++) n[l] = laneElements(vl, l, L)
 }
 
 export { PENDING, wordsFor }

@@ -9,7 +9,7 @@ import type { VectorOp } from '../exec/stream'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
 import { REASON } from './context'
-import { F_BEATS, F_EXEC_START, F_READ_START, Inst } from './inst'
+import { F_BEATS, F_EXEC_START, F_READ_START, fillLaneElements, Inst } from './inst'
 
 export class PermutationInst extends Inst {
   /** Per source lane, packets in source-word order: source word, destination lane, destination word. */
@@ -27,7 +27,7 @@ export class PermutationInst extends Inst {
     this.waitReason = REASON.ring
     const L = this.L
     const sew = op.sew
-    for (let l = 0; l < L; l++) this.n[l] = Math.max(0, Math.ceil((op.vl - l) / L))
+    fillLaneElements(this.n, op.vl)
     const src = op.sourceIndex ?? new Int32Array(0)
     const maxLocal = new Int32Array(L).fill(-1)
     const rows: [number, number, number][][] = Array.from({ length: L }, () => [])

@@ -21,7 +21,7 @@
  */
 import type { Machine } from '../../schemas/machine'
 import type { UnorderedSum } from '../exec/machine'
-import { elementsPerBeat, unitLatency } from './config'
+import { elementsPerBeat, laneElements, unitLatency } from './config'
 
 type Add = (a: number, b: number) => number
 /** A partial sum, or null while nothing was added to it. */
@@ -75,7 +75,7 @@ export function machineReductionOrder(machine: Machine): UnorderedSum {
     const epc = elementsPerBeat(machine, 'fpu', sew)
     const lanes = Math.min(vl, L)
     // Every local position of every lane, masked-off ones null: they still take their place in a beat.
-    const local: Partial[][] = Array.from({ length: lanes }, (_, l) => new Array<Partial>(Math.max(0, Math.ceil((vl - l) / L))).fill(null))
+    const local: Partial[][] = Array.from({ length: lanes }, (_, l) => new Array<Partial>(laneElements(vl, l, L)).fill(null))
     indices.forEach((i, k) => {
       ;(local[i % L] as Partial[])[Math.floor(i / L)] = values[k] ?? 0
     })

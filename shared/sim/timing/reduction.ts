@@ -10,7 +10,7 @@ import type { VectorOp } from '../exec/stream'
 import { elementsPerBeat, UNIT_INDEX, unitLatency, wordsFor } from './config'
 import type { Ctx } from './context'
 import { REASON } from './context'
-import { F_EXEC_START, F_WRITE_END, F_WRITE_START, Inst } from './inst'
+import { F_EXEC_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst } from './inst'
 import { execUnitOf, maskBits } from './units'
 
 const STAGE_LANES = 0 // lanes folding their beats
@@ -58,7 +58,7 @@ export class ReductionInst extends Inst {
     this.A = ctx.m.reductionAccumulators
     this.scalarDst = op.scalarResult
     const L = this.L
-    for (let l = 0; l < L; l++) this.n[l] = Math.max(0, Math.ceil((op.vl - l) / L))
+    fillLaneElements(this.n, op.vl)
     const [vs2, vs1] = srcPhys
     if (vs2) this.addSource(vs2, bits.src, (l) => wordsFor(this.n[l] ?? 0, bits.src))
     this.hasVs1 = !!vs1 && !op.scalarResult
@@ -319,7 +319,7 @@ export class OrderedReductionInst extends Inst {
     this.u = UNIT_INDEX[unit]
     this.D = unitLatency(ctx.m, unit)
     const L = this.L
-    for (let l = 0; l < L; l++) this.n[l] = Math.max(0, Math.ceil((op.vl - l) / L))
+    fillLaneElements(this.n, op.vl)
     const [vs2, vs1] = srcPhys
     if (vs2) this.addSource(vs2, op.sew, (l) => wordsFor(this.n[l] ?? 0, op.sew))
     if (vs1) this.addSource(vs1, op.sew, (l) => (l === 0 && op.vl > 0 ? 1 : 0))
