@@ -1,4 +1,3 @@
-import fs from 'node:fs'
 import path from 'node:path'
 import cookieParser from 'cookie-parser'
 import express, { type Express } from 'express'
@@ -58,12 +57,19 @@ export function buildApp(ctx: AppContext): Express {
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT_BYTES }), cookieParser(), api.router, apiNotFound)
 
   const clientDir = ctx.config.clientDir
-  if (clientDir && fs.existsSync(path.join(clientDir, 'index.html'))) {
+  if (clientDir) {
+    // Mounted whether or not the build exists yet: `npm start` may create the
+    // app before `vite build` has written dist/, and both handlers look at the
+    // folder per request.
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
     // History fallback: every other GET is a client route.
-    app.get(/^(?!\/api\/).*/, (_req, res) => {
+    app.get(/^(?!\/api\/).*/, (_req, res, next) => {
       res.setHeader('Cache-Control', 'no-cache')
-      res.sendFile(path.join(clientDir, 'index.html'))
+      res.sendFile(path.join(clientDir, 'index.html'), (err) => {
+        if (!err) return
+        if (res.headersSent) return next(err)
+        res.status(503).type('text/plain').send('The Chimeline client is not built yet: run `npx vite build` (npm start does it) and reload.')
+      })
     })
   }
 

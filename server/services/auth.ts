@@ -2,14 +2,22 @@ import crypto from 'node:crypto'
 import { Op, UniqueConstraintError } from 'sequelize'
 import { passwordEmailProblem, REFRESH_TOKEN_TTL_SECONDS, type ResetBody, type SignInBody, type SignUpBody } from '../../shared/schemas/auth'
 import type { User as UserDto } from '../../shared/schemas/user'
+import { WORKSPACE_NAME_MAX_LENGTH } from '../../shared/schemas/workspace'
 import { hashPassword, verifyPassword } from '../auth/passwords'
 import { hashToken, randomToken, signAccessToken } from '../auth/tokens'
 import type { AppContext } from '../context'
 import { errors } from '../http/errors'
 import { PasswordReset, RefreshToken, User } from '../models'
 import { passwordResetMail } from './emails'
+import { createWorkspace } from './workspaces'
 
 export const RESET_TOKEN_TTL_MINUTES = 30
+
+/** "Ada Lovelace's workspace", cut to the workspace name limit. */
+export function personalWorkspaceName(userName: string): string {
+  const suffix = "'s workspace"
+  return `${userName.slice(0, WORKSPACE_NAME_MAX_LENGTH - suffix.length).trim()}${suffix}`
+}
 
 export interface Session {
   user: UserDto
@@ -32,7 +40,12 @@ async function issueSession(ctx: AppContext, user: User, familyId: string = cryp
 export async function signUp(ctx: AppContext, body: SignUpBody): Promise<Session> {
   const passwordHash = await hashPassword(body.password)
   try {
-    const user = await User.create({ email: body.email, name: body.name, passwordHash })
+    // Everyone starts with a workspace of their own, so Save and Share work at once.
+    const user = await ctx.sequelize.transaction(async (transaction) => {
+      const created = await User.create({ email: body.email, name: body.name, passwordHash }, { transaction })
+      await createWorkspace(ctx, created, personalWorkspaceName(created.name), transaction)
+      return created
+    })
     return await issueSession(ctx, user)
   } catch (err) {
     // Saying so reveals that the address has an account; sign-up cannot avoid it

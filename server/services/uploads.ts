@@ -10,13 +10,15 @@ import { bundleSchema, type Bundle } from '../../shared/schemas/bundle'
 import type { ScenarioContent } from '../../shared/schemas/scenario'
 import { scenarioContentSchema } from '../../shared/schemas/scenario'
 import { IMPORT_MAX_INSTRUCTIONS, type FileDiagnostic, type UploadFields, type Upload as UploadDto, type UploadInspection, type UploadKind } from '../../shared/schemas/upload'
+import { parseMachine, type Machine } from '../../shared/schemas/machine'
 import { assemble } from '../../shared/sim/isa/assembler'
+import { DEFAULT_PRESET_ID, findPreset } from '../../shared/sim/presets'
 import { parseObjdump } from '../../shared/sim/isa/objdump'
 import type { SimDiagnostic } from '../../shared/sim/isa/types'
 import type { AppContext } from '../context'
 import { DetailedApiError } from '../http/detailed-error'
 import { issuesToFields } from '../http/validate'
-import { Scenario, Upload, type User } from '../models'
+import { Scenario, Upload, Workspace, type User } from '../models'
 import { ElfError, readElf } from './elf/reader'
 import { decodeFunction, listFunctions } from './elf/import'
 import { importBundle } from './scenario-bundles'
@@ -146,6 +148,12 @@ function readUpload(file: ReceivedFile, kind: UploadKind, fields: UploadFields):
   }
 }
 
+/** The machine an imported program starts on: the preset the upload names, else the workspace's default preset. */
+async function importMachine(workspaceId: string, presetId: string | undefined): Promise<Machine> {
+  const id = presetId ?? (await Workspace.findByPk(workspaceId))?.defaultPreset ?? DEFAULT_PRESET_ID
+  return parseMachine(findPreset(id)?.machine ?? {})
+}
+
 /** What a file holds, without storing anything (the ELF function list for the chooser). */
 export function inspectUpload(file: ReceivedFile, fields: UploadFields): UploadInspection {
   const kind = detectKind(file, fields.kind)
@@ -178,6 +186,7 @@ export function uploadDto(upload: Upload, uploader: User | null, scenarioIds: st
 export async function importUpload(ctx: AppContext, user: User, workspaceId: string, file: ReceivedFile, fields: UploadFields): Promise<{ upload: Upload; scenarios: Scenario[] }> {
   const kind = detectKind(file, fields.kind)
   const read = readUpload(file, kind, fields)
+  if ('content' in read) read.content.machine = await importMachine(workspaceId, fields.preset)
   const run = 'content' in read ? await ctx.runs.summarize(read.content) : undefined
   return ctx.sequelize.transaction(async (transaction) => {
     const upload = await Upload.create(

@@ -1,10 +1,11 @@
-import { Op } from 'sequelize'
+import { Op, type Transaction } from 'sequelize'
 import {
   INVITATION_TTL_SECONDS,
   type Invitation as InvitationDto,
   type InvitationBody,
   type Member,
   type MembersResponse,
+  type WorkspacePatch,
   type WorkspaceRole,
   type WorkspaceSummary,
 } from '../../shared/schemas/workspace'
@@ -20,26 +21,32 @@ export async function listWorkspaces(userId: string): Promise<WorkspaceSummary[]
     include: [{ model: Workspace, as: 'workspace', required: true }],
   })
   return memberships
-    .map((m) => ({ id: m.workspaceId, name: (m.workspace as Workspace).name, role: m.role }))
+    .map((m) => summaryOf(m.workspace as Workspace, m.role))
     .sort((a, b) => a.name.localeCompare(b.name))
 }
 
-export async function createWorkspace(ctx: AppContext, user: User, name: string): Promise<WorkspaceSummary> {
-  return ctx.sequelize.transaction(async (transaction) => {
+function summaryOf(workspace: Workspace, role: WorkspaceRole): WorkspaceSummary {
+  return { id: workspace.id, name: workspace.name, role, defaultPreset: workspace.defaultPreset }
+}
+
+/** A workspace owned by `user`; inside the caller's transaction when given (sign-up's personal workspace). */
+export async function createWorkspace(ctx: AppContext, user: User, name: string, outer?: Transaction): Promise<WorkspaceSummary> {
+  const work = async (transaction: Transaction) => {
     const workspace = await Workspace.create({ name }, { transaction })
     await Membership.create({ workspaceId: workspace.id, userId: user.id, role: 'owner' }, { transaction })
-    return { id: workspace.id, name: workspace.name, role: 'owner' }
-  })
+    return summaryOf(workspace, 'owner')
+  }
+  return outer ? work(outer) : ctx.sequelize.transaction(work)
 }
 
 export async function getWorkspace(membership: Membership): Promise<WorkspaceSummary> {
   const workspace = await Workspace.findByPk(membership.workspaceId)
   if (!workspace) throw errors.notFound('workspace')
-  return { id: workspace.id, name: workspace.name, role: membership.role }
+  return summaryOf(workspace, membership.role)
 }
 
-export async function renameWorkspace(membership: Membership, name: string): Promise<WorkspaceSummary> {
-  await Workspace.update({ name }, { where: { id: membership.workspaceId } })
+export async function updateWorkspace(membership: Membership, patch: WorkspacePatch): Promise<WorkspaceSummary> {
+  await Workspace.update(patch, { where: { id: membership.workspaceId } })
   return getWorkspace(membership)
 }
 
@@ -129,7 +136,7 @@ export async function acceptInvitation(ctx: AppContext, user: User, token: strin
       defaults: { workspaceId: workspace.id, userId: user.id, role: invitation.role },
       transaction,
     })
-    return { id: workspace.id, name: workspace.name, role: membership.role }
+    return summaryOf(workspace, membership.role)
   })
 }
 

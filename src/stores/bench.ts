@@ -8,11 +8,11 @@ import { computed, ref, shallowRef, watch } from 'vue'
 import { defineStore } from 'pinia'
 import { assemble } from '@shared/sim/isa'
 import { checkMachine, defaultMachine, parseMachine, type Machine } from '@shared/schemas/machine'
-import { PRESETS } from '@shared/sim/presets'
+import { DEFAULT_PRESET_ID, findPreset, PRESETS } from '@shared/sim/presets'
 import type { FpReductionOrder } from '@shared/sim/run'
 import { useSimulator, type UseSimulatorOptions } from '@/composables/useSimulator'
 import { clampCycle, nextEvent, previousEvent, scrubberEvents } from '@/lib/bench/events'
-import { exampleList, type Example } from '@/lib/bench/examples'
+import { exampleList, type Example } from '@shared/examples'
 import { indexTrace, inspectCycle } from '@/lib/bench/inspector'
 import { instructionRows } from '@/lib/bench/instructionRows'
 import { issuesByField, machineSummary, matchingPreset, setField } from '@/lib/bench/machineFields'
@@ -47,9 +47,9 @@ export const useBenchStore = defineStore('bench', () => {
   const firstExample = EXAMPLES[0]
   const exampleId = ref<string | null>(firstExample?.id ?? null)
   const source = ref(firstExample?.source ?? '')
-  const presetId = ref<string | null>(PRESETS[1]?.id ?? null)
-  /** What the form holds: may be invalid (then it is not run). */
-  const machineDraft = ref<Machine>(parseMachine(PRESETS[1]?.machine ?? {}))
+  const presetId = ref<string | null>(DEFAULT_PRESET_ID)
+  /** What the form holds: may be invalid (then it is not run). The default preset is the schema's defaults. */
+  const machineDraft = ref<Machine>(parseMachine(findPreset(DEFAULT_PRESET_ID)?.machine ?? {}))
   const autoRun = ref(true)
   /** The order vfredusum sums in: element order (as QEMU) or this machine's; only the rounding differs. */
   const fpOrder = ref<FpReductionOrder>('element')
@@ -207,7 +207,7 @@ export const useBenchStore = defineStore('bench', () => {
     pause()
     if (autoTimer) clearTimeout(autoTimer)
     loadExample(firstExample?.id ?? '')
-    applyPreset(PRESETS[1]?.id ?? '')
+    applyPreset(DEFAULT_PRESET_ID)
     setView(EMPTY_VIEW)
     autoRun.value = true
     fpOrder.value = 'element'

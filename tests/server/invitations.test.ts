@@ -37,7 +37,7 @@ describe('invitations by e-mail', () => {
 
     const accepted = await request(runtime.app).post('/api/invitations/accept').set(invitee.auth).send({ token })
     expect(accepted.status).toBe(200)
-    expect(accepted.body.workspace).toEqual({ id: workspace.id, name: 'Ring Lab', role: 'editor' })
+    expect(accepted.body.workspace).toEqual({ id: workspace.id, name: 'Ring Lab', role: 'editor', defaultPreset: 'default-8' })
 
     const after = membersResponseSchema.parse((await request(runtime.app).get(`/api/workspaces/${workspace.id}/members`).set(invitee.auth)).body)
     expect(after.members.map((m) => m.role)).toEqual(['owner', 'editor'])

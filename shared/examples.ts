@@ -1,5 +1,5 @@
 /**
- * The examples menu: the shipped programs in examples/*.s, each titled by the
+ * The shipped programs in examples/*.s (the Bench menu and the demo seed), each titled by the
  * first line of its header comment.
  *
  * @example
