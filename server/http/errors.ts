@@ -31,6 +31,8 @@ export const errors = {
   conflict: (message: string, fields?: Record<string, string>) => new ApiError(409, 'conflict', message, fields),
   payloadTooLarge: (limitBytes: number) =>
     new ApiError(413, 'payload_too_large', `The request body is larger than the limit of ${formatBytes(limitBytes)}`),
+  unsupportedMediaType: (header: string, message: string) =>
+    new ApiError(415, 'unsupported_media_type', `The request body cannot be read: ${message}`, { [header]: message }),
   rateLimited: (retryAfterSeconds: number) =>
     new ApiError(429, 'rate_limited', `Too many attempts; try again in ${Math.max(1, Math.ceil(retryAfterSeconds / 60))} minute(s)`),
   internal: () => new ApiError(500, 'internal', 'Something went wrong on the server'),
