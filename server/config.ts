@@ -29,7 +29,7 @@ export interface ServerConfig {
   secureCookies: boolean
   seedDemo: boolean
   /** The worker threads that compute saved versions' run summaries (services/run-pool.ts). */
-  saveRuns: { threads: number; queue: number; timeLimitMs: number }
+  saveRuns: { threads: number; queue: number; perWorkspace: number; timeLimitMs: number }
 }
 
 /** One thread per core the request thread does not need, at least one, at most four. */
@@ -90,6 +90,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     saveRuns: {
       threads: Math.max(1, intEnv(env, 'SAVE_RUN_THREADS', defaultRunThreads())),
       queue: intEnv(env, 'SAVE_RUN_QUEUE', 16),
+      perWorkspace: Math.max(1, intEnv(env, 'SAVE_RUN_PER_WORKSPACE', 3)),
       timeLimitMs: Math.max(1, intEnv(env, 'SAVE_RUN_TIME_LIMIT_MS', 20_000)),
     },
   }

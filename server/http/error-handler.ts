@@ -31,6 +31,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const known = err instanceof ApiError ? err : requestError(err)
   const apiError = known ?? errors.internal()
   if (!known) req.log?.error({ err }, 'unhandled error')
+  if (apiError.retryAfterSeconds !== undefined) res.setHeader('Retry-After', String(apiError.retryAfterSeconds))
   res.status(apiError.status).json(apiError.toBody())
 }
 

@@ -189,7 +189,7 @@ export function uploadDto(upload: Upload, uploader: User | null, scenarioIds: st
 export async function importUpload(ctx: AppContext, user: User, workspaceId: string, file: ReceivedFile, fields: UploadFields): Promise<{ upload: Upload; scenarios: Scenario[] }> {
   const kind = detectKind(file, fields.kind)
   const read = readUpload(file, kind, fields)
-  const run = 'content' in read ? await ctx.runs.summarize(read.content) : undefined
+  const run = 'content' in read ? await ctx.runs.summarize(read.content, workspaceId) : undefined
   return ctx.sequelize.transaction(async (transaction) => {
     const upload = await Upload.create(
       {
