@@ -30,6 +30,8 @@ export interface ServerConfig {
   seedDemo: boolean
   /** The worker threads that compute saved versions' run summaries (services/run-pool.ts). */
   saveRuns: { threads: number; queue: number; perWorkspace: number; timeLimitMs: number }
+  /** The worker threads of other request work that can take long (services/work-pool.ts: version diffs). */
+  work: { threads: number; queue: number; perOwner: number; timeLimitMs: number }
 }
 
 /** One thread per core the request thread does not need, at least one, at most four. */
@@ -92,6 +94,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
       queue: intEnv(env, 'SAVE_RUN_QUEUE', 16),
       perWorkspace: Math.max(1, intEnv(env, 'SAVE_RUN_PER_WORKSPACE', 3)),
       timeLimitMs: Math.max(1, intEnv(env, 'SAVE_RUN_TIME_LIMIT_MS', 20_000)),
+    },
+    work: {
+      threads: Math.max(1, intEnv(env, 'WORK_THREADS', 1)),
+      queue: intEnv(env, 'WORK_QUEUE', 32),
+      perOwner: Math.max(1, intEnv(env, 'WORK_PER_WORKSPACE', 4)),
+      timeLimitMs: Math.max(1, intEnv(env, 'WORK_TIME_LIMIT_MS', 10_000)),
     },
   }
 }

@@ -10,6 +10,7 @@ import { createMailer, sinkSmtpUrl } from './services/mailer'
 import { createRunPool } from './services/run-pool'
 import { createShareBodyCache } from './services/share-bodies'
 import { startSmtpSink, type SmtpSink } from './services/smtp-sink'
+import { createWorkPool } from './services/work-pool'
 
 export interface Runtime {
   ctx: AppContext
@@ -35,7 +36,8 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   const sink = config.smtpUrl ? null : await startSmtpSink(config.smtpSinkPort, logger)
   const mailer = createMailer(config.smtpUrl ?? sinkSmtpUrl((sink as SmtpSink).port), config.mailFrom)
   const runs = createRunPool(config.saveRuns)
-  const ctx: AppContext = { config, sequelize, mailer, logger, runs, shareBodies: createShareBodyCache() }
+  const work = createWorkPool(config.work)
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, shareBodies: createShareBodyCache() }
   const app = buildApp(ctx)
   return {
     ctx,
@@ -44,6 +46,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
     async close() {
       mailer.close()
       await runs.close()
+      await work.close()
       await sink?.close()
       if (!options.sequelize) await sequelize.close()
     },
