@@ -22,6 +22,8 @@ export interface ServerConfig {
   mailFrom: string
   /** Attempts per client address and window on sign-in, sign-up, forgot and reset. */
   authRateLimit: { max: number; windowMs: number }
+  /** Failed sign-ins per account and window (auth/signin-guard.ts). */
+  signInLimit: { perAccount: number; windowMs: number }
   logLevel: string
   /** Folder of the built client (vite build); null serves no client (dev, tests). */
   clientDir: string | null
@@ -84,6 +86,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     authRateLimit: {
       max: intEnv(env, 'AUTH_RATE_LIMIT_MAX', 10),
       windowMs: intEnv(env, 'AUTH_RATE_LIMIT_WINDOW_MS', 15 * 60 * 1000),
+    },
+    signInLimit: {
+      perAccount: Math.max(1, intEnv(env, 'SIGNIN_ACCOUNT_LIMIT_MAX', 10)),
+      windowMs: Math.max(1, intEnv(env, 'SIGNIN_ACCOUNT_LIMIT_WINDOW_MS', 15 * 60 * 1000)),
     },
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
     clientDir: env.CLIENT_DIR === '' ? null : path.resolve(env.CLIENT_DIR ?? 'dist'),

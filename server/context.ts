@@ -1,5 +1,6 @@
 import type { Logger } from 'pino'
 import type { Sequelize } from 'sequelize'
+import type { SignInGuard } from './auth/signin-guard'
 import type { ServerConfig } from './config'
 import type { Mailer } from './services/mailer'
 import type { RunPool } from './services/run-pool'
@@ -16,6 +17,8 @@ export interface AppContext {
   runs: RunPool
   /** Other request work that can take long (version diffs), on worker threads with a time limit. */
   work: WorkPool
+  /** Failed sign-ins per account. */
+  signInGuard: SignInGuard
   /** The immutable bodies of opened share links, by link id. */
   shareBodies: ShareBodyCache
 }

@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net'
 import { pino } from 'pino'
 import type { Sequelize } from 'sequelize'
 import { buildApp } from './app'
+import { createSignInGuard } from './auth/signin-guard'
 import type { ServerConfig } from './config'
 import type { AppContext } from './context'
 import { connect } from './db/connection'
@@ -37,7 +38,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   const mailer = createMailer(config.smtpUrl ?? sinkSmtpUrl((sink as SmtpSink).port), config.mailFrom)
   const runs = createRunPool(config.saveRuns)
   const work = createWorkPool(config.work)
-  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, shareBodies: createShareBodyCache() }
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shareBodies: createShareBodyCache() }
   const app = buildApp(ctx)
   return {
     ctx,

@@ -12,7 +12,7 @@
 import type { Server } from 'node:http'
 import { loadConfig } from '../../server/config'
 import { databaseUrl, testCluster } from '../../server/db/cluster'
-import { Membership, User, Workspace } from '../../server/models'
+import { Membership, User, UserSession, Workspace } from '../../server/models'
 import { createRuntime, listen } from '../../server/runtime'
 import { signAccessToken } from '../../server/auth/tokens'
 import { createScenario, saveScenario } from '../../server/services/scenarios'
@@ -52,7 +52,7 @@ try {
   const listening = await listen(runtime)
   server = listening.server
   await Membership.create({ workspaceId: workspace.id, userId: user.id, role: 'owner' })
-  const auth = { Authorization: `Bearer ${signAccessToken(user.id, runtime.ctx.config.jwtSecret)}` }
+  const auth = { Authorization: `Bearer ${signAccessToken(user.id, (await UserSession.create({ userId: user.id })).id, runtime.ctx.config.jwtSecret)}` }
   const base = { title: 'Bench', description: '', tags: [], machine: defaultMachine, initialData: [], view: { cursor: null, window: null, selected: null } }
 
   async function pair(a: string, b: string): Promise<string> {
