@@ -8,6 +8,7 @@ import { createAuthenticator } from './auth/passport'
 import type { AppContext } from './context'
 import { apiNotFound, errorHandler } from './http/error-handler'
 import { secureRouter } from './http/secure-router'
+import { refuseBadText } from './http/text-guard'
 import { adminRoutes } from './routes/admin'
 import { authRoutes } from './routes/auth'
 import { healthRoutes } from './routes/health'
@@ -54,7 +55,7 @@ export function buildApp(ctx: AppContext): Express {
   uploadRoutes(ctx, api)
   docsRoutes(api)
 
-  app.use('/api', express.json({ limit: JSON_BODY_LIMIT_BYTES }), cookieParser(), api.router, apiNotFound)
+  app.use('/api', express.json({ limit: JSON_BODY_LIMIT_BYTES }), refuseBadText, cookieParser(), api.router, apiNotFound)
 
   const clientDir = ctx.config.clientDir
   if (clientDir) {

@@ -22,6 +22,8 @@ export interface ServerConfig {
   mailFrom: string
   /** Attempts per client address and window on sign-in, sign-up, forgot and reset. */
   authRateLimit: { max: number; windowMs: number }
+  /** Failed sign-ins per account and window (auth/signin-guard.ts). */
+  signInLimit: { perAccount: number; windowMs: number }
   logLevel: string
   /** Folder of the built client (vite build); null serves no client (dev, tests). */
   clientDir: string | null
@@ -29,7 +31,9 @@ export interface ServerConfig {
   secureCookies: boolean
   seedDemo: boolean
   /** The worker threads that compute saved versions' run summaries (services/run-pool.ts). */
-  saveRuns: { threads: number; queue: number; timeLimitMs: number }
+  saveRuns: { threads: number; queue: number; perWorkspace: number; timeLimitMs: number }
+  /** The worker threads of other request work that can take long (services/work-pool.ts: version diffs). */
+  work: { threads: number; queue: number; perOwner: number; timeLimitMs: number }
 }
 
 /** One thread per core the request thread does not need, at least one, at most four. */
@@ -83,6 +87,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
       max: intEnv(env, 'AUTH_RATE_LIMIT_MAX', 10),
       windowMs: intEnv(env, 'AUTH_RATE_LIMIT_WINDOW_MS', 15 * 60 * 1000),
     },
+    signInLimit: {
+      perAccount: Math.max(1, intEnv(env, 'SIGNIN_ACCOUNT_LIMIT_MAX', 10)),
+      windowMs: Math.max(1, intEnv(env, 'SIGNIN_ACCOUNT_LIMIT_WINDOW_MS', 15 * 60 * 1000)),
+    },
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
     clientDir: env.CLIENT_DIR === '' ? null : path.resolve(env.CLIENT_DIR ?? 'dist'),
     secureCookies: (env.PUBLIC_URL ?? '').startsWith('https:'),
@@ -90,7 +98,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     saveRuns: {
       threads: Math.max(1, intEnv(env, 'SAVE_RUN_THREADS', defaultRunThreads())),
       queue: intEnv(env, 'SAVE_RUN_QUEUE', 16),
+      perWorkspace: Math.max(1, intEnv(env, 'SAVE_RUN_PER_WORKSPACE', 3)),
       timeLimitMs: Math.max(1, intEnv(env, 'SAVE_RUN_TIME_LIMIT_MS', 20_000)),
+    },
+    work: {
+      threads: Math.max(1, intEnv(env, 'WORK_THREADS', 1)),
+      queue: intEnv(env, 'WORK_QUEUE', 32),
+      perOwner: Math.max(1, intEnv(env, 'WORK_PER_WORKSPACE', 4)),
+      timeLimitMs: Math.max(1, intEnv(env, 'WORK_TIME_LIMIT_MS', 10_000)),
     },
   }
 }

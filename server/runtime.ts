@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net'
 import { pino } from 'pino'
 import type { Sequelize } from 'sequelize'
 import { buildApp } from './app'
+import { createSignInGuard } from './auth/signin-guard'
 import type { ServerConfig } from './config'
 import type { AppContext } from './context'
 import { connect } from './db/connection'
@@ -10,6 +11,7 @@ import { createMailer, sinkSmtpUrl } from './services/mailer'
 import { createRunPool } from './services/run-pool'
 import { createShareBodyCache } from './services/share-bodies'
 import { startSmtpSink, type SmtpSink } from './services/smtp-sink'
+import { createWorkPool } from './services/work-pool'
 
 export interface Runtime {
   ctx: AppContext
@@ -35,7 +37,8 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   const sink = config.smtpUrl ? null : await startSmtpSink(config.smtpSinkPort, logger)
   const mailer = createMailer(config.smtpUrl ?? sinkSmtpUrl((sink as SmtpSink).port), config.mailFrom)
   const runs = createRunPool(config.saveRuns)
-  const ctx: AppContext = { config, sequelize, mailer, logger, runs, shareBodies: createShareBodyCache() }
+  const work = createWorkPool(config.work)
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shareBodies: createShareBodyCache() }
   const app = buildApp(ctx)
   return {
     ctx,
@@ -44,6 +47,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
     async close() {
       mailer.close()
       await runs.close()
+      await work.close()
       await sink?.close()
       if (!options.sequelize) await sequelize.close()
     },

@@ -117,8 +117,9 @@ export async function invite(ctx: AppContext, inviter: User, workspaceId: string
 }
 
 /**
- * The token is the capability: whoever holds the e-mailed link and is signed in
- * joins with the invited role (once). A member already keeps their role.
+ * The e-mailed token, used once, by the account of the address it was sent
+ * to: a forwarded or leaked link lets nobody else in (and stays usable by the
+ * invitee). A member already keeps their role.
  */
 export async function acceptInvitation(ctx: AppContext, user: User, token: string): Promise<WorkspaceSummary> {
   return ctx.sequelize.transaction(async (transaction) => {
@@ -128,6 +129,10 @@ export async function acceptInvitation(ctx: AppContext, user: User, token: strin
       lock: transaction.LOCK.UPDATE,
     })
     if (!invitation) throw errors.invalidToken('invitation')
+    // Both addresses are stored lower-cased by the e-mail schema.
+    if (invitation.email !== user.email) {
+      throw errors.forbidden('This invitation was sent to another e-mail address: sign in with the address it was sent to, or ask for an invitation to yours')
+    }
     const workspace = await Workspace.findByPk(invitation.workspaceId, { transaction })
     if (!workspace) throw errors.invalidToken('invitation')
     await invitation.update({ acceptedAt: new Date(), acceptedById: user.id }, { transaction })

@@ -259,7 +259,17 @@ export type LineChange = z.infer<typeof lineChangeSchema>
 export const versionDiffSchema = z.object({
   from: z.number().int(),
   to: z.number().int(),
-  program: z.object({ changes: z.array(lineChangeSchema), added: z.number().int(), removed: z.number().int() }),
+  program: z.object({
+    changes: z.array(lineChangeSchema),
+    added: z.number().int(),
+    removed: z.number().int(),
+    /**
+     * False when the programs differ in more lines than the server diffs line
+     * by line: the changes are then the common head and tail and one replaced
+     * block between them (correct, not minimal).
+     */
+    exact: z.boolean().default(true),
+  }),
   /** Dotted machine field names whose value differs, e.g. `units.fpu.latency`. */
   machine: z.array(z.object({ field: z.string(), before: z.unknown(), after: z.unknown() })),
   /** Other content fields that differ (title, description, tags, initialData, view). */
