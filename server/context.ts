@@ -3,7 +3,7 @@ import type { Sequelize } from 'sequelize'
 import type { ServerConfig } from './config'
 import type { Mailer } from './services/mailer'
 import type { RunPool } from './services/run-pool'
-import type { ShareBodyCache } from './services/share-bodies'
+import type { ShareOpens } from './services/share-links-open'
 
 /** What routes and services need from the running server; built once in runtime.ts. */
 export interface AppContext {
@@ -13,6 +13,6 @@ export interface AppContext {
   logger: Logger
   /** Computes saved versions' run summaries on worker threads. */
   runs: RunPool
-  /** The immutable bodies of opened share links, by link id. */
-  shareBodies: ShareBodyCache
+  /** Opens share links from an in-memory cache; counts opens and writes them every few seconds. */
+  shares: ShareOpens
 }
