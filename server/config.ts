@@ -25,6 +25,12 @@ export interface ServerConfig {
   /** Failed sign-ins per account and window (auth/signin-guard.ts). */
   signInLimit: { perAccount: number; windowMs: number }
   logLevel: string
+  /** null: the log goes to stdout; else this file, created readable by its owner only. */
+  logFile: string | null
+  /** Log one in this many share-link opens (1: all); errors of the others still log. */
+  shareOpenLogEvery: number
+  /** Share-link open counts are written every this many ms (0: only when the process stops). */
+  shareCountFlushMs: number
   /** Folder of the built client (vite build); null serves no client (dev, tests). */
   clientDir: string | null
   /** Set the Secure flag on the refresh cookie (behind HTTPS). */
@@ -92,6 +98,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
       windowMs: Math.max(1, intEnv(env, 'SIGNIN_ACCOUNT_LIMIT_WINDOW_MS', 15 * 60 * 1000)),
     },
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
+    logFile: env.LOG_FILE ? path.resolve(env.LOG_FILE) : null,
+    shareOpenLogEvery: Math.max(1, intEnv(env, 'SHARE_OPEN_LOG_EVERY', 100)),
+    shareCountFlushMs: intEnv(env, 'SHARE_COUNT_FLUSH_MS', 5000),
     clientDir: env.CLIENT_DIR === '' ? null : path.resolve(env.CLIENT_DIR ?? 'dist'),
     secureCookies: (env.PUBLIC_URL ?? '').startsWith('https:'),
     seedDemo: !production || env.CHIMELINE_SEED_DEMO === '1',

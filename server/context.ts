@@ -4,8 +4,8 @@ import type { SignInGuard } from './auth/signin-guard'
 import type { ServerConfig } from './config'
 import type { Mailer } from './services/mailer'
 import type { RunPool } from './services/run-pool'
-import type { ShareBodyCache } from './services/share-bodies'
 import type { WorkPool } from './services/work-pool'
+import type { ShareOpens } from './services/share-links-open'
 
 /** What routes and services need from the running server; built once in runtime.ts. */
 export interface AppContext {
@@ -19,6 +19,6 @@ export interface AppContext {
   work: WorkPool
   /** Failed sign-ins per account. */
   signInGuard: SignInGuard
-  /** The immutable bodies of opened share links, by link id. */
-  shareBodies: ShareBodyCache
+  /** Opens share links from an in-memory cache; counts opens and writes them every few seconds. */
+  shares: ShareOpens
 }
