@@ -18,7 +18,7 @@ import { instructionRows } from '@/lib/bench/instructionRows'
 import { issuesByField, machineSummary, matchingPreset, setField } from '@/lib/bench/machineFields'
 import { dependenciesOf, firstWritten, writtenRegisters } from '@/lib/bench/registerUse'
 import { explainStalls } from '@/lib/bench/stallExplanation'
-import { EMPTY_VIEW, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
+import { EMPTY_VIEW, wholeCycle, wholeWindow, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
 
 const exampleFiles = import.meta.glob<string>('/examples/*.s', { query: '?raw', import: 'default', eager: true })
 export const EXAMPLES: Example[] = exampleList(exampleFiles)
@@ -196,7 +196,8 @@ export const useBenchStore = defineStore('bench', () => {
     if (playing.value) play()
   })
 
-  const view = computed<BenchView>(() => ({ cursor: cursor.value, window: window.value, selected: selected.value }))
+  // The view as it is saved, shared and put in the URL: whole cycles (the chart zooms through fractions).
+  const view = computed<BenchView>(() => ({ cursor: wholeCycle(cursor.value), window: wholeWindow(window.value), selected: selected.value }))
   function setView(v: BenchView): void {
     cursor.value = v.cursor
     window.value = v.window

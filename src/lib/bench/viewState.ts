@@ -35,6 +35,24 @@ function cycleOf(v: QueryValue): number | null {
   return n <= MAX_URL_CYCLE ? n : null
 }
 
+/**
+ * The window as whole cycles, the form a view is saved, shared and put in the
+ * URL in: the start rounded down and the end up, so the whole cycles the chart
+ * showed stay in view. Zooming leaves fractions (6.388…–16.611…); the schema
+ * of a saved view takes integers only. A thousandth of a cycle of float noise
+ * is not a cycle more.
+ */
+export function wholeWindow(w: CycleWindow | null): CycleWindow | null {
+  if (!w) return null
+  const start = Math.max(0, Math.floor(w.start + 1e-3))
+  return { start, end: Math.max(start + 1, Math.ceil(w.end - 1e-3)) }
+}
+
+/** The cursor as a whole cycle (the chart reports whole cycles; this guards the saved form). */
+export function wholeCycle(c: number | null): number | null {
+  return c === null ? null : Math.max(0, Math.round(c))
+}
+
 /** Reads the view from a route query; bad or missing values become null. */
 export function decodeView(query: Record<string, QueryValue>): BenchView {
   const from = cycleOf(query.from)
