@@ -5,7 +5,9 @@
  * register shown.
  */
 import { expect, test, type Page } from '@playwright/test'
+import fs from 'node:fs'
 import { DEMO, signIn, watchConsole } from './helpers/auth'
+import { accessToken, workspaceId } from './helpers/api'
 import { screenshot } from './helpers/screenshots'
 
 const chart = (page: Page) => page.getByTestId('lane-chart')
@@ -66,5 +68,91 @@ test.describe('views on the Bench', () => {
     await expect(chart(page)).toHaveAttribute('data-window-start', `${from}.00`, { timeout: 60_000 })
     await screenshot(page, 'bench-zoom-shared')
     expect(problems).toEqual([])
+  })
+
+  test('the Bench URL wins over the saved view, on opening and on reload', async ({ page, request }) => {
+    const run = `e2e${Date.now().toString(36)}`
+    const token = await accessToken(request, DEMO.owner)
+    const ws = await workspaceId(request, token)
+    const program = fs.readFileSync('examples/saxpy.s', 'utf8')
+    const res = await request.post(`/api/workspaces/${ws}/scenarios`, {
+      headers: { Authorization: `Bearer ${token}` },
+      data: { content: { title: `${run} url view`, program, view: { cursor: 20, window: null, selected: 2 } } },
+    })
+    expect(res.status()).toBe(201)
+    const { scenario } = (await res.json()) as { scenario: { id: string } }
+
+    await signIn(page, DEMO.owner)
+    await page.goto(`/bench?scenario=${scenario.id}&cycle=11&sel=3`)
+    await expect(page.getByTestId('scenario-title')).toHaveText(`${run} url view`, { timeout: 30_000 })
+    await expect(page.getByTestId('cursor-cycle')).toContainText('cycle 11 /', { timeout: 60_000 })
+    await expect(chart(page)).toHaveAttribute('data-selected', '3')
+    await page.reload()
+    await expect(page.getByTestId('scenario-title')).toHaveText(`${run} url view`, { timeout: 30_000 })
+    await expect(page.getByTestId('cursor-cycle')).toContainText('cycle 11 /', { timeout: 60_000 })
+    await expect(chart(page)).toHaveAttribute('data-selected', '3')
+    // Without a view in the URL the saved one is used.
+    await page.goto(`/bench?scenario=${scenario.id}`)
+    await expect(page.getByTestId('cursor-cycle')).toContainText('cycle 20 /', { timeout: 60_000 })
+    await expect(chart(page)).toHaveAttribute('data-selected', '2')
+  })
+
+  test('a share link carries the R/E/W and Dependencies switches and the register shown, with its values', async ({ page, browser }) => {
+    const problems = watchConsole(page)
+    const run = `e2e${Date.now().toString(36)}`
+    await signIn(page, DEMO.owner)
+    await page.goto('/bench')
+    await expect(chart(page)).toBeVisible({ timeout: 60_000 })
+    await page.getByTestId('instruction-table').locator('tbody tr').nth(3).click()
+    await expect(chart(page)).toHaveAttribute('data-selected', /\d+/)
+    const selected = await chart(page).getAttribute('data-selected')
+    // Clicking the switch's label toggles it.
+    await page.getByText('R/E/W rows', { exact: true }).click()
+    await page.getByText('Dependencies', { exact: true }).click()
+    const register = (await page.getByLabel('Register to show').locator('..').innerText()).split('\n')[0]!.trim()
+    expect(register).toMatch(/^v\d+$/)
+    const values = await page.getByTestId('register-values').innerText()
+    await saveAs(page, `${run} switches`)
+
+    await page.getByRole('button', { name: 'Share…' }).click()
+    await expect(page.getByTestId('share-dialog').locator('.lead')).toContainText(`R/E/W rows, dependency arrows, register ${register}`)
+    const link = await createLink(page)
+
+    const reader = await (await browser.newContext()).newPage()
+    await reader.goto(link)
+    await expect(reader.getByTestId('share-view-text')).toContainText(`register ${register}`)
+    await expect(reader.getByTestId('lane-chart')).toHaveAttribute('data-selected', selected!, { timeout: 60_000 })
+    await expect(reader.getByRole('switch', { name: 'Sub-rows for read, execute and write' })).toHaveAttribute('aria-checked', 'true')
+    await expect(reader.getByRole('switch', { name: 'Dependency arrows for the selected instruction' })).toHaveAttribute('aria-checked', 'true')
+    await expect(reader.getByTestId('register-values')).toHaveText(values, { useInnerText: true })
+    await screenshot(reader, 'share-reader-register')
+    expect(problems).toEqual([])
+  })
+
+  test('an edited example is a custom program; exports are named after the scenario, the note said once', async ({ page }) => {
+    const run = `e2e${Date.now().toString(36)}`
+    await signIn(page, DEMO.editor)
+    await page.goto('/bench')
+    await expect(chart(page)).toBeVisible({ timeout: 60_000 })
+    await expect(page.getByTestId('example-select')).not.toContainText('Custom program')
+    await page.getByTestId('program-editor').locator('.cm-content').click()
+    await page.keyboard.press('ControlOrMeta+End')
+    await page.keyboard.type('\n# edited')
+    await expect(page.getByTestId('example-select')).toContainText('Custom program')
+
+    const download = async (label: string) => {
+      await page.getByTestId('export').click()
+      const downloading = page.waitForEvent('download')
+      await page.locator('.n-dropdown-option', { hasText: label }).click()
+      return downloading
+    }
+    expect((await download('Chart as PNG')).suggestedFilename()).toBe('untitled.png')
+    await saveAs(page, `Ragged vl=20 ${run}`)
+    expect((await download('Chart as PNG')).suggestedFilename()).toBe(`ragged-vl-20-${run}.png`)
+    const svg = await download('Chart as SVG')
+    expect(svg.suggestedFilename()).toBe(`ragged-vl-20-${run}.svg`)
+    const text = fs.readFileSync(await svg.path(), 'utf8')
+    expect(text).toContain(`Chimeline: Ragged vl=20 ${run}`)
+    expect(text.split('not sign-off for silicon').length - 1).toBe(1)
   })
 })

@@ -15,5 +15,8 @@ export function viewText(view: ScenarioView): string {
   if (view.cursor !== null) parts.push(`cycle ${formatInteger(view.cursor)}`)
   if (view.window) parts.push(`cycles ${formatInteger(view.window.start)}–${formatInteger(view.window.end - 1)}`)
   if (view.selected !== null) parts.push(`instruction #${view.selected}`)
+  if (view.subRows) parts.push('R/E/W rows')
+  if (view.dependencies) parts.push('dependency arrows')
+  if (view.register !== null && view.register !== undefined) parts.push(`register v${view.register}`)
   return parts.length > 0 ? parts.join(', ') : 'the whole run'
 }
