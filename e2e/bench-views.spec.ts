@@ -155,4 +155,28 @@ test.describe('views on the Bench', () => {
     expect(text).toContain(`Chimeline: Ragged vl=20 ${run}`)
     expect(text.split('not sign-off for silicon').length - 1).toBe(1)
   })
+
+  test('a program with errors keeps the last run dimmed as stale, with the count and a link to the first error', async ({ page }) => {
+    await signIn(page, DEMO.editor)
+    await page.goto('/bench')
+    await expect(chart(page)).toBeVisible({ timeout: 60_000 })
+    await expect(page.getByTestId('stale-note')).toHaveCount(0)
+    await page.getByTestId('program-editor').locator('.cm-content').click()
+    await page.keyboard.press('ControlOrMeta+End')
+    await page.keyboard.type('\n    vbogus.vv v1, v2, v3')
+    const note = page.getByTestId('stale-note')
+    await expect(note).toContainText('The program has 1 error')
+    await expect(page.getByTestId('results')).toHaveAttribute('data-stale', 'true')
+    await screenshot(page, 'bench-stale')
+    // The link puts the editor's cursor on the bad line.
+    await page.getByTestId('cursor-cycle').click()
+    await page.getByTestId('first-error').click()
+    await expect(page.getByTestId('program-editor').locator('.cm-activeLine')).toContainText('vbogus.vv')
+    // Fixing it runs again and the mark goes.
+    await page.keyboard.press('End')
+    await page.keyboard.press('Shift+Home')
+    await page.keyboard.press('Backspace')
+    await expect(note).toHaveCount(0, { timeout: 30_000 })
+    await expect(page.getByTestId('results')).not.toHaveAttribute('data-stale', 'true')
+  })
 })

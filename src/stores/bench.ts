@@ -17,6 +17,7 @@ import { indexTrace, inspectCycle } from '@/lib/bench/inspector'
 import { instructionRows } from '@/lib/bench/instructionRows'
 import { issuesByField, machineSummary, matchingPreset, setField } from '@/lib/bench/machineFields'
 import { dependenciesOf, firstWritten, writtenRegisters } from '@/lib/bench/registerUse'
+import { staleness } from '@/lib/bench/staleness'
 import { explainStalls } from '@/lib/bench/stallExplanation'
 import { benchViewOf, EMPTY_VIEW, wholeCycle, wholeWindow, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
 
@@ -82,6 +83,19 @@ export const useBenchStore = defineStore('bench', () => {
   const currentPreset = computed(() => matchingPreset(machine.value, PRESETS))
 
   const trace = sim.trace
+  /** Set while the text or the machine cannot run: what is shown is the last successful run. */
+  const stale = computed(() =>
+    staleness({
+      hasTrace: trace.value !== null,
+      programErrors: assembled.value.ok ? [] : assembled.value.errors,
+      machineErrors: Object.keys(fieldErrors.value).length,
+    }),
+  )
+  /** A request to the editor to show a place (1-based line and column); `n` tells two requests apart. */
+  const reveal = ref<{ line: number; column: number; n: number } | null>(null)
+  function revealInEditor(line: number, column: number): void {
+    reveal.value = { line, column, n: (reveal.value?.n ?? 0) + 1 }
+  }
   const traceIndex = computed(() => (trace.value ? indexTrace(trace.value) : null))
   const events = computed(() => (trace.value ? scrubberEvents(trace.value) : new Int32Array()))
   const explanation = computed(() => (trace.value ? explainStalls(trace.value) : null))
@@ -236,7 +250,7 @@ export const useBenchStore = defineStore('bench', () => {
 
   return {
     exampleId, title, source, presetId, machineDraft, autoRun, fpOrder, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
-    assembled, program, machine, fieldErrors, summary, preset, currentPreset, trace, traceIndex, events, explanation, rows, registerGroups, registers, dependencies, cycleState, cycles, view,
+    assembled, program, machine, fieldErrors, stale, reveal, revealInEditor, summary, preset, currentPreset, trace, traceIndex, events, explanation, rows, registerGroups, registers, dependencies, cycleState, cycles, view,
     functional: sim.functional, error: sim.error, progress: sim.progress, running: sim.running,
     run, cancel: sim.cancel, scheduleRun, loadExample, setSource, applyPreset, resetMachine, setMachineField,
     select, setCursor, step, toNextEvent, toPreviousEvent, play, pause, togglePlay, setView, $reset,
