@@ -4,7 +4,7 @@
  * the text started from; the picture's subtitle says the estimate note once.
  */
 import { describe, expect, it } from 'vitest'
-import { CUSTOM_PROGRAM, exampleOf, type Example } from '@/lib/bench/examples'
+import { CUSTOM_PROGRAM, exampleOf, type Example } from '@shared/examples'
 import { exportNames } from '@/lib/bench/exports'
 import { chartPalette } from '@/lib/lanechart/colours'
 import { buildLayout } from '@/lib/lanechart/layout'
