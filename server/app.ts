@@ -1,11 +1,13 @@
 import fs from 'node:fs'
 import path from 'node:path'
+import compression from 'compression'
 import cookieParser from 'cookie-parser'
 import express, { type Express } from 'express'
 import helmet from 'helmet'
 import { JSON_BODY_LIMIT_BYTES } from '../shared/schemas/errors'
 import { createAuthenticator } from './auth/passport'
 import type { AppContext } from './context'
+import { clientCacheHeaders } from './http/client-cache'
 import { apiNotFound, errorHandler } from './http/error-handler'
 import { requestLogger } from './http/request-log'
 import { secureRouter } from './http/secure-router'
@@ -70,7 +72,9 @@ export function buildApp(ctx: AppContext): Express {
 
   const clientDir = ctx.config.clientDir
   if (clientDir && fs.existsSync(path.join(clientDir, 'index.html'))) {
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
+    // gzip or brotli for what the browser accepts (the API answers are not compressed: after /api above).
+    app.use(compression())
+    app.use(express.static(clientDir, { index: false, maxAge: '1h', setHeaders: clientCacheHeaders }))
     // History fallback: every other GET is a client route.
     app.get(/^(?!\/api\/).*/, (_req, res) => {
       res.setHeader('Cache-Control', 'no-cache')
