@@ -141,6 +141,11 @@ export class ShareOpens {
     return (JSON.parse(link.body.toString('utf8')) as { share: SharedScenario }).share
   }
 
+  /** Whether change notices arrive, so links are cached (tests). */
+  isListening(): boolean {
+    return this.listening
+  }
+
   /** Whether a link's state is cached (tests). */
   cached(token: string): boolean {
     return this.cache.has(hashToken(token))

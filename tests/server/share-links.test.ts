@@ -1,7 +1,9 @@
+import crypto from 'node:crypto'
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ShareLink } from '../../server/models'
 import { ShareOpens } from '../../server/services/share-links-open'
+import { listenForShareLinkChanges } from '../../server/services/share-links-notify'
 import { securityHeaders } from '../../server/app'
 import { withShareFastOpen } from '../../server/routes/shares/fast-open'
 import type { Runtime } from '../../server/runtime'
@@ -237,6 +239,36 @@ describe('the cache of opened links', () => {
     await api().post(`/api/workspaces/${team.workspace.id}/scenarios/${scenario.id}/undo-delete`).set(team.owner.auth).expect(200)
     await untilDropped(token)
     await api().get(`/api/shares/${token}`).expect(200)
+  })
+
+  it('caches nothing while its notice connection is lost, so a revoke then still shows; caches again once it is back', async () => {
+    const opens = new ShareOpens(runtime.ctx.sequelize, runtime.ctx.shares.counts)
+    const name = `chimeline test notices ${crypto.randomUUID()}`
+    const listener = await listenForShareLinkChanges(runtime.ctx.config.databaseUrl, opens, runtime.ctx.logger, name)
+    const until = async (what: () => boolean) => {
+      for (let i = 0; i < 500 && !what(); i++) await new Promise((resolve) => setTimeout(resolve, 20))
+      expect(what()).toBe(true)
+    }
+    try {
+      const { token, link } = await makeLink()
+      await opens.open(token, null)
+      expect(opens.cached(token)).toBe(true)
+      // The database ends the connection (a restart, a network cut, an administrator).
+      await runtime.ctx.sequelize.query('SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE application_name = $1', { bind: [name] })
+      await until(() => !opens.isListening())
+      expect(opens.cached(token)).toBe(false)
+      await opens.open(token, null)
+      expect(opens.cached(token)).toBe(false)
+      await ShareLink.update({ revokedAt: new Date() }, { where: { id: link.id } })
+      await expect(opens.open(token, null)).rejects.toMatchObject({ status: 410, code: 'share_revoked' })
+      // It reconnects by itself and caches again.
+      await until(() => opens.isListening())
+      const other = await makeLink()
+      await opens.open(other.token, null)
+      expect(opens.cached(other.token)).toBe(true)
+    } finally {
+      await listener.close()
+    }
   })
 
   it('counts only the opens it allows', async () => {
