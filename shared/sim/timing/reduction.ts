@@ -404,4 +404,17 @@ export class OrderedReductionInst extends Inst {
   protected override lanePhasesDone(lane: number): boolean {
     return lane !== 0 || (this.next >= this.op.vl && this.at === 0)
   }
+
+  /** A lane done with its elements still waits on the ring while the running value has yet to pass through it. */
+  override pending(lane: number): boolean {
+    if (this.laneDone[lane] !== 1) return true
+    if (this.complete >= 0 || this.op.vl === 0) return false
+    // The value moves up the ring one lane a hop: to each remaining element's lane in turn, then home to lane 0.
+    const L = this.L
+    const vl = this.op.vl
+    const toLast = this.next < vl ? ((this.next - this.at) % L + L) % L + (vl - 1 - this.next) : 0
+    const lastLane = (this.at + toLast) % L
+    const hops = toLast + ((L - lastLane) % L)
+    return (lane - this.at + L) % L <= hops
+  }
 }

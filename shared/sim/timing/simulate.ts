@@ -11,7 +11,7 @@ import type { DynamicStream } from '../exec/stream'
 import type { InstructionTrace, SimulateOptions, TimingError, TimingResult } from '../trace/types'
 import { STALL_REASONS, emptyStallCounts } from '../trace/types'
 import type { TimingState } from './engine'
-import { createTimingState, step } from './engine'
+import { STALL_COUNT, createTimingState, step } from './engine'
 import { opFlops } from './inst'
 import { derive } from './config'
 import { Ctx } from './context'
@@ -55,7 +55,7 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
     const f = done && !op.isConfig ? opFlops(op) : 0
     flops += f
     const stalls = emptyStallCounts()
-    STALL_REASONS.forEach((r, j) => (stalls[r] = (s.opStalls[i * 9 + j] ?? 0) * k))
+    STALL_REASONS.forEach((r, j) => (stalls[r] = (s.opStalls[i * STALL_COUNT + j] ?? 0) * k))
     const dispatch = (s.dispatchAt[i] ?? -1) >= 0 ? (s.dispatchAt[i] ?? 0) : null
     const complete = done ? (s.completeAt[i] ?? 0) : null
     return {
