@@ -36,8 +36,12 @@ export class Ctx {
   /** Ring links: up[l] carries lane l -> l+1, down[l] carries lane l+1 -> l (mod L). */
   readonly linkUpRes: Int32Array
   readonly linkDownRes: Int32Array
-  readonly loadBusRes: Int32Array
-  readonly storeBusRes: Int32Array
+  readonly loadBusRes: number
+  readonly storeBusRes: number
+  /** Bits the load and store buses still carry in `busCycle` (accesses take them oldest first). */
+  private loadBusLeft = 0
+  private storeBusLeft = 0
+  private busCycle = -1
   /** Per lane, this cycle: did the lane read, execute, write or hold results in flight. */
   readonly progress: Uint8Array
   /** The cycle being stepped (notes are only valid within it). */
@@ -85,13 +89,10 @@ export class Ctx {
       this.linkUpRes[l] = rec.addResource({ kind: 'ring', name: `ring ${l}->${(l + 1) % L}`, lane: l, capacity: 1 })
       this.linkDownRes[l] = rec.addResource({ kind: 'ring', name: `ring ${(l + 1) % L}->${l}`, lane: (l + 1) % L, capacity: 1 })
     }
-    const P = this.m.memoryPorts
-    this.loadBusRes = new Int32Array(P)
-    this.storeBusRes = new Int32Array(P)
-    for (let p = 0; p < P; p++) {
-      this.loadBusRes[p] = rec.addResource({ kind: 'bus', name: `load bus ${p}`, lane: null, capacity: this.m.loadBusBits })
-      this.storeBusRes[p] = rec.addResource({ kind: 'bus', name: `store bus ${p}`, lane: null, capacity: this.m.storeBusBits })
-    }
+    // One load bus and one store bus, shared by every memory port (timing model section 7). The names keep
+    // their index 0 from when each port had its own bus.
+    this.loadBusRes = rec.addResource({ kind: 'bus', name: 'load bus 0', lane: null, capacity: this.m.loadBusBits })
+    this.storeBusRes = rec.addResource({ kind: 'bus', name: 'store bus 0', lane: null, capacity: this.m.storeBusBits })
     rec.seal()
     this.progress = new Uint8Array(L)
     this.denied = Array.from({ length: L }, () => [])
@@ -128,6 +129,23 @@ export class Ctx {
       this.waitSeq[lane] = seq
       this.waitReason[lane] = reason
     }
+  }
+
+  /** Bits the load (or store) bus can still carry in cycle c. */
+  busLeft(store: boolean, c: number): number {
+    if (this.busCycle !== c) {
+      this.busCycle = c
+      this.loadBusLeft = this.m.loadBusBits
+      this.storeBusLeft = this.m.storeBusBits
+    }
+    return store ? this.storeBusLeft : this.loadBusLeft
+  }
+
+  /** An access moves `bits` on the load (or store) bus in cycle c (after busLeft in the same cycle). */
+  takeBus(store: boolean, c: number, bits: number, seq: number): void {
+    if (store) this.storeBusLeft -= bits
+    else this.loadBusLeft -= bits
+    this.rec.use(store ? this.storeBusRes : this.loadBusRes, c, bits, seq)
   }
 
   busyLane(lane: number): void {

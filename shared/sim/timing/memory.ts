@@ -4,6 +4,8 @@
  * consecutive elements a cycle, strided and indexed ones
  * `gatherElementsPerCycle` (never more than the bus carries); loaded elements
  * arrive `memLatency` cycles after their request and are written like results.
+ * There is one load bus and one store bus for all ports: each cycle the
+ * accesses in flight take what is left of it in program order.
  */
 import type { VectorOp } from '../exec/stream'
 import { wordsFor } from './config'
@@ -139,7 +141,9 @@ export class LoadInst extends MemInst {
     const per = 64 / this.eew
     let moved = 0
     const unit = this.unitStride()
-    while (this.next < this.count && moved < this.perCycle) {
+    // The load bus is shared: older accesses took their share of this cycle first.
+    const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(false, c) / this.eew))
+    while (this.next < this.count && moved < most) {
       const i = this.next
       const active = this.isActive(i)
       if (active && !this.indexReady(i)) break
@@ -152,7 +156,7 @@ export class LoadInst extends MemInst {
       if (got % per === 0 || got === (this.n[lane] ?? 0)) this.resultReady(lane, Math.ceil(got / per) - 1, c + ctx.m.memLatency)
       this.next++
     }
-    if (moved > 0) ctx.rec.use(ctx.loadBusRes[this.port] ?? 0, c, moved * this.eew, this.seq)
+    if (moved > 0) ctx.takeBus(false, c, moved * this.eew, this.seq)
     if (this.next >= this.count) {
       this.busDone = true
       // One memory pipeline: the port stays with the load until its last element has arrived.
@@ -196,7 +200,9 @@ export class StoreInst extends MemInst {
     const L = this.L
     let moved = 0
     const unit = this.unitStride()
-    while (this.next < this.count && moved < this.perCycle) {
+    // The store bus is shared: older accesses took their share of this cycle first.
+    const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(true, c) / this.eew))
+    while (this.next < this.count && moved < most) {
       const i = this.next
       const lane = i % L
       const local = Math.floor(i / L)
@@ -223,7 +229,7 @@ export class StoreInst extends MemInst {
       }
       this.next++
     }
-    if (moved > 0) ctx.rec.use(ctx.storeBusRes[this.port] ?? 0, c, moved * this.eew, this.seq)
+    if (moved > 0) ctx.takeBus(true, c, moved * this.eew, this.seq)
     if (this.next >= this.count) {
       this.busDone = true
       this.portUntil = c

@@ -36,8 +36,8 @@ export function computeMetrics(ctx: Ctx, cycles: number, flops: number, laneBusy
     unitUtilization: { alu: unitSum(0), mul: unitSum(1), fpu: unitSum(2), div: unitSum(3) },
     bankUtilization,
     busUtilization: {
-      load: sum(ctx.loadBusRes) / (cyc * m.loadBusBits * m.memoryPorts),
-      store: sum(ctx.storeBusRes) / (cyc * m.storeBusBits * m.memoryPorts),
+      load: (ctx.rec.totals[ctx.loadBusRes] ?? 0) / (cyc * m.loadBusBits),
+      store: (ctx.rec.totals[ctx.storeBusRes] ?? 0) / (cyc * m.storeBusBits),
     },
     ringUtilization: links > 0 ? (sum(ctx.linkUpRes) + sum(ctx.linkDownRes)) / (cyc * links * 2) : 0,
     stallCycles,

@@ -4,6 +4,7 @@
  * so that stored results (scenario run summaries, sweep points) can tell that
  * they came from another model. DEVELOPERS.md ("Model version") says when.
  *   1: the model before issue 11.
- *   2: stalls of lanes starved by the front end; the ordered sum's ring wait.
+ *   2: stalls of lanes starved by the front end; the ordered sum's ring wait;
+ *      one load bus and one store bus shared by all memory ports.
  */
 export const MODEL_VERSION = 2
