@@ -1,9 +1,33 @@
 /** The run's figures (handbook section 10), computed from the recorder's totals. */
-import type { Metrics } from '../trace/types'
-import { STALL_REASONS, emptyStallCounts } from '../trace/types'
+import type { FpWidth, Metrics } from '../trace/types'
+import { FP_WIDTHS, STALL_REASONS, emptyStallCounts } from '../trace/types'
 import type { Ctx } from './context'
 
-export function computeMetrics(ctx: Ctx, cycles: number, flops: number, laneBusy: Float64Array): Metrics {
+/** Flops of an FMA on one element: the peak counts every FPU element slot as an FMA (timing model section 6). */
+const FMA_FLOPS = 2
+
+/**
+ * The peak of a run (timing model section 10): per width, lanes x 2 x
+ * fpuElementsPerCycle[SEW]; for the run, the flops-weighted harmonic mean of
+ * the widths it used, flops / sum(flops_w / peak_w), so that the fraction of
+ * peak is the cycles the flops need at peak over the cycles taken.
+ */
+export function peakFlops(ctx: Ctx, flopsBySew: Record<FpWidth, number>): { peak: number; bySew: Record<FpWidth, number> } {
+  const m = ctx.m
+  const bySew = { '16': 0, '32': 0, '64': 0 }
+  for (const w of FP_WIDTHS) bySew[w] = ctx.L * FMA_FLOPS * m.fpuElementsPerCycle[w]
+  let flops = 0
+  let idealCycles = 0
+  for (const w of FP_WIDTHS) {
+    flops += flopsBySew[w]
+    idealCycles += flopsBySew[w] / bySew[w]
+  }
+  return { peak: idealCycles > 0 ? flops / idealCycles : bySew['64'], bySew }
+}
+
+export function computeMetrics(ctx: Ctx, cycles: number, flopsBySew: Record<FpWidth, number>, laneBusy: Float64Array): Metrics {
+  const flops = flopsBySew['16'] + flopsBySew['32'] + flopsBySew['64']
+  const { peak, bySew } = peakFlops(ctx, flopsBySew)
   const m = ctx.m
   const L = ctx.L
   const tot = ctx.rec.totals
@@ -31,7 +55,9 @@ export function computeMetrics(ctx: Ctx, cycles: number, flops: number, laneBusy
     cycles,
     flops,
     flopsPerCycle: cycles > 0 ? flops / cycles : 0,
-    peakFlopsPerCycle: L * 2 * m.fpuElementsPerCycle['64'],
+    peakFlopsPerCycle: peak,
+    flopsBySew: { ...flopsBySew },
+    peakFlopsPerCycleBySew: bySew,
     laneBusy: Array.from(laneBusy, (b) => (cycles > 0 ? b / cycles : 0)),
     unitUtilization: { alu: unitSum(0), mul: unitSum(1), fpu: unitSum(2), div: unitSum(3) },
     bankUtilization,

@@ -5,6 +5,7 @@
  * they came from another model. DEVELOPERS.md ("Model version") says when.
  *   1: the model before issue 11.
  *   2: stalls of lanes starved by the front end; the ordered sum's ring wait;
- *      one load bus and one store bus shared by all memory ports.
+ *      one load bus and one store bus shared by all memory ports; the peak
+ *      flops a cycle of a run follows the element widths of its FP work.
  */
 export const MODEL_VERSION = 2

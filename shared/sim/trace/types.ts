@@ -105,18 +105,32 @@ export interface UsageSpans {
   writes?: Uint32Array
 }
 
+/** FP element widths, as keys of per-width figures. */
+export const FP_WIDTHS = ['16', '32', '64'] as const
+export type FpWidth = (typeof FP_WIDTHS)[number]
+
 export interface Metrics {
   cycles: number
   flops: number
   flopsPerCycle: number
+  /**
+   * The run's peak: the flops a cycle the machine could do on this run's mix of
+   * element widths, flops / sum over widths of (flops at that width / that
+   * width's peak), so that flopsPerCycle / peakFlopsPerCycle is the ideal cycles
+   * over the real ones. FP64's peak when the run has no FP work.
+   */
   peakFlopsPerCycle: number
+  /** Flops at each FP element width (SEW of the instruction). Absent from traces of model version 1. */
+  flopsBySew?: Record<FpWidth, number>
+  /** Peak flops a cycle at each width: lanes x 2 (an FMA) x fpuElementsPerCycle[SEW]. Absent from traces of model version 1. */
+  peakFlopsPerCycleBySew?: Record<FpWidth, number>
   /** Per lane: fraction of cycles in which the lane read, executed (a unit busy) or wrote. */
   laneBusy: number[]
   /** Per unit: beats issued / (cycles x lanes); the divider counts each cycle it is occupied. */
   unitUtilization: Record<'alu' | 'mul' | 'fpu' | 'div', number>
   /** Per bank index: port uses / (cycles x lanes x ports per bank). */
   bankUtilization: number[]
-  /** Elements moved / (cycles x bus capacity x memory ports). */
+  /** Bits moved / (cycles x bus width): one load bus and one store bus for all memory ports. */
   busUtilization: { load: number; store: number }
   /** Words moved / (cycles x links x 2 directions). */
   ringUtilization: number
