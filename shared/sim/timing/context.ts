@@ -4,19 +4,14 @@
  * per-cycle notes from which stalls are classified.
  */
 import type { Machine } from '../../schemas/machine'
-import type { StallReason } from '../trace/types'
-import { STALL_REASONS } from '../trace/types'
+import { STALL_RANK } from '../trace/types'
 import type { Derived } from './config'
 import type { Inst } from './inst'
-import { UNITS } from './config'
+import { UNIT_COUNT, UNITS } from './config'
 import type { Recorder } from './recorder'
 import type { RegFile } from './regfile'
 import type { Renamer } from './rename'
 
-export const REASON: Record<StallReason, number> = Object.fromEntries(STALL_REASONS.map((r, i) => [r, i])) as Record<
-  StallReason,
-  number
->
 
 /** Called by an instruction when it is finished everywhere. */
 export interface CompletionSink {
@@ -71,12 +66,12 @@ export class Ctx {
   ) {
     this.m = d.machine
     const L = (this.L = d.lanes)
-    this.unitFree = new Int32Array(L * 4)
-    this.unitRes = new Int32Array(L * 4)
+    this.unitFree = new Int32Array(L * UNIT_COUNT)
+    this.unitRes = new Int32Array(L * UNIT_COUNT)
     this.bankRes = new Int32Array(L * d.banks)
     for (let l = 0; l < L; l++) {
       UNITS.forEach((u, k) => {
-        this.unitRes[l * 4 + k] = rec.addResource({ kind: 'unit', name: `lane ${l} ${u}`, lane: l, capacity: 1 })
+        this.unitRes[l * UNIT_COUNT + k] = rec.addResource({ kind: 'unit', name: `lane ${l} ${u}`, lane: l, capacity: 1 })
       })
       for (let b = 0; b < d.banks; b++) {
         this.bankRes[l * d.banks + b] = rec.addResource({ kind: 'bank', name: `lane ${l} bank ${b}`, lane: l, capacity: d.ports })
@@ -110,7 +105,7 @@ export class Ctx {
    * `inst` asked for something in `lane` this cycle and was refused (a port, a
    * queue entry, a word not yet written, a start, a link). An instruction
    * refused several things in one lane-cycle keeps the strongest reason
-   * (`RANK`).
+   * (`STALL_RANK`).
    */
   deny(lane: number, inst: Inst, reason: number): void {
     const c = this.cycle
@@ -167,14 +162,8 @@ export class Ctx {
   }
 }
 
-/**
- * Which reason an instruction refused several things in one lane-cycle is
- * given (lower wins): a denied port first (the cycle went to another access),
- * then a missing word, a busy link, the memory unit, the lane's issue, and a
- * full operand queue last (it only says the unit is behind).
- */
-const RANK = new Int8Array(9)
-;(['bank', 'raw', 'ring', 'memory', 'slot', 'barrier', 'queue', 'rename', 'frontend'] as const).forEach((r, k) => (RANK[REASON[r]] = k))
+// A module binding may cost a getter call per use in the per-cycle paths: copied once.
+const RANK: Int8Array = STALL_RANK
 
 /** Bookings reach at most lanes x ringHopLatency (64 x 16) cycles ahead. */
 export const RING_HORIZON = 2048

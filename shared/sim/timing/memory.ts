@@ -8,10 +8,10 @@
  * accesses in flight take what is left of it in program order.
  */
 import type { VectorOp } from '../exec/stream'
+import { NO_CYCLE, REASON } from '../trace/types'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
-import { REASON } from './context'
-import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, F_WRITE_END, F_WRITE_START, Inst, NO_CYCLE_F } from './inst'
+import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst } from './inst'
 
 export abstract class MemInst extends Inst {
   /** Element count moved (vl, or ceil(vl / 8) bytes for vlm/vsm: the stream already says so). */
@@ -40,7 +40,7 @@ export abstract class MemInst extends Inst {
     const bus = mem?.isStore ? ctx.m.storeBusBits : ctx.m.loadBusBits
     const unit = !mem || mem.pattern === 'unit' || mem.pattern === 'mask'
     this.perCycle = unit ? Math.max(1, bus / this.eew) : Math.max(1, Math.min(ctx.m.gatherElementsPerCycle, bus / this.eew))
-    for (let l = 0; l < L; l++) this.n[l] = Math.max(0, Math.ceil((this.count - l) / L))
+    fillLaneElements(this.n, this.count)
     let lo = Infinity
     let hi = -Infinity
     const addr = mem?.addresses
@@ -222,7 +222,7 @@ export class StoreInst extends MemInst {
         // The store's write phase in a lane is the cycle its last element leaves for memory.
         this.setTime(lane, F_WRITE_START, c)
         this.setTime(lane, F_WRITE_END, c)
-        if (this.time(lane, F_READ_START) === NO_CYCLE_F) {
+        if (this.time(lane, F_READ_START) === NO_CYCLE) {
           this.setTime(lane, F_READ_START, c)
           this.setTime(lane, F_READ_END, c)
         }

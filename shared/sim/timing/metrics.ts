@@ -1,6 +1,7 @@
 /** The run's figures (handbook section 10), computed from the recorder's totals. */
 import type { FpWidth, Metrics } from '../trace/types'
 import { FP_WIDTHS, STALL_REASONS, emptyStallCounts } from '../trace/types'
+import { UNIT_COUNT } from './config'
 import type { Ctx } from './context'
 
 /** Flops of an FMA on one element: the peak counts every FPU element slot as an FMA (timing model section 6). */
@@ -39,7 +40,7 @@ export function computeMetrics(ctx: Ctx, cycles: number, flopsBySew: Record<FpWi
   }
   const unitSum = (u: number) => {
     let s = 0
-    for (let l = 0; l < L; l++) s += tot[ctx.unitRes[l * 4 + u] ?? 0] ?? 0
+    for (let l = 0; l < L; l++) s += tot[ctx.unitRes[l * UNIT_COUNT + u] ?? 0] ?? 0
     return s / (cyc * L)
   }
   const bankUtilization: number[] = []

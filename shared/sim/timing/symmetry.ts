@@ -16,6 +16,7 @@ import type { Machine } from '../../schemas/machine'
 import type { DynamicStream, VectorOp } from '../exec/stream'
 import type { StallSpans, UsageSpans } from '../trace/types'
 import { LANE_FIELD_COUNT } from '../trace/types'
+import { UNIT_COUNT } from './config'
 import type { Ctx } from './context'
 
 export interface LanePlan {
@@ -66,8 +67,8 @@ function resourceMap(one: Ctx, full: Ctx): { base: Int32Array; stride: Int32Arra
   const n = one.rec.resources.length
   const base = new Int32Array(n)
   const stride = new Int32Array(n)
-  const perLane = (full.unitRes[4] ?? 0) - (full.unitRes[0] ?? 0)
-  for (let u = 0; u < 4; u++) {
+  const perLane = (full.unitRes[UNIT_COUNT] ?? 0) - (full.unitRes[0] ?? 0)
+  for (let u = 0; u < UNIT_COUNT; u++) {
     base[one.unitRes[u] ?? 0] = full.unitRes[u] ?? 0
     stride[one.unitRes[u] ?? 0] = perLane
   }

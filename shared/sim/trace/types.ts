@@ -10,6 +10,18 @@ import type { Lmul, Sew, UnitClass, VectorShape } from '../isa/types'
 
 export const STALL_REASONS = ['raw', 'bank', 'queue', 'slot', 'barrier', 'rename', 'memory', 'ring', 'frontend'] as const
 export type StallReason = (typeof STALL_REASONS)[number]
+/** A stall reason's index in STALL_REASONS (the engine keeps reasons as these small integers). */
+export const REASON: Record<StallReason, number> = Object.fromEntries(STALL_REASONS.map((r, i) => [r, i])) as Record<StallReason, number>
+
+/**
+ * Which reason an instruction refused several things in one lane-cycle is
+ * given, by reason index (lower wins): a denied port first (the cycle went to
+ * another access), then a missing word, a busy link, the memory unit, the
+ * lane's issue, and a full operand queue last (it only says the unit is
+ * behind).
+ */
+export const STALL_RANK = new Int8Array(STALL_REASONS.length)
+;(['bank', 'raw', 'ring', 'memory', 'slot', 'barrier', 'queue', 'rename', 'frontend'] as const).forEach((r, k) => (STALL_RANK[REASON[r]] = k))
 /** Stall cycles by reason. */
 export type StallCounts = Record<StallReason, number>
 
