@@ -9,9 +9,9 @@
 import type { Machine } from '../../schemas/machine'
 import type { DynamicStream, VectorOp } from '../exec/stream'
 import type { SimulateOptions, TimingError } from '../trace/types'
-import { DEFAULT_CYCLE_LIMIT, DEFAULT_TRACE_LIMIT, LANE_FIELD_COUNT, NO_CYCLE } from '../trace/types'
+import { DEFAULT_CYCLE_LIMIT, DEFAULT_TRACE_LIMIT, LANE_FIELD_COUNT, NO_CYCLE, REASON, STALL_REASONS } from '../trace/types'
 import { derive } from './config'
-import { Ctx, REASON } from './context'
+import { Ctx } from './context'
 import type { Inst } from './inst'
 import { F_READ_END } from './inst'
 import { LoadInst, MemInst, StoreInst } from './memory'
@@ -25,6 +25,8 @@ import { UnitInst } from './units'
 import { Window } from './window'
 
 const NONE = 0x7fffffff
+/** Stall reasons: the stride of TimingState.opStalls. */
+export const STALL_COUNT = STALL_REASONS.length
 // Imported bindings copied once: a module binding may cost a getter call per use in the per-cycle paths.
 const FIELDS: number = LANE_FIELD_COUNT
 const READ_END: number = F_READ_END
@@ -64,6 +66,8 @@ export interface TimingState {
   hold: number
   holdReleasedAt: number
   feReason: number
+  /** The first op the front end dispatched (or executed, a vset) this cycle; -1: none. */
+  feDispatched: number
   // Instructions in flight, in program order
   inflight: Inst[]
   /** Program-order lists of the arithmetic and memory instructions, by absolute position. */
@@ -116,7 +120,7 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
     error: null,
     dispatchAt: new Int32Array(ops.length).fill(-1),
     completeAt: new Int32Array(ops.length).fill(-1),
-    opStalls: new Int32Array(ops.length * 9),
+    opStalls: new Int32Array(ops.length * STALL_COUNT),
     laneBusy: new Float64Array(L),
     opIdx: 0,
     scalarLeft: ops[0]?.scalarBefore ?? 0,
@@ -124,6 +128,7 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
     hold: -1,
     holdReleasedAt: -1,
     feReason: REASON.frontend,
+    feDispatched: -1,
     inflight: [],
     arith: new Window<Inst>(),
     mem: new Window<MemInst>(),
@@ -222,6 +227,7 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
 function frontEnd(s: TimingState, c: number): boolean {
   const ops = s.stream.ops
   s.feReason = R_FRONTEND
+  s.feDispatched = -1
   if (s.hold >= 0 || s.holdReleasedAt === c) return false
   let dispatched = 0
   for (;;) {
@@ -240,10 +246,12 @@ function frontEnd(s: TimingState, c: number): boolean {
       if (dispatched > 0) return true
       s.dispatchAt[op.seq] = c
       s.completeAt[op.seq] = c
+      s.feDispatched = op.seq
       advance(s)
       return true
     }
     if (!dispatch(s, op, c)) return dispatched > 0
+    if (dispatched === 0) s.feDispatched = op.seq
     dispatched++
     advance(s)
     if (op.scalarResult) {
@@ -386,6 +394,29 @@ function critical(s: TimingState, lane: number): Inst | null {
 }
 
 /**
+ * Whether lane l has no dispatched instruction left to start: all it can get
+ * next must still come through the front end.
+ */
+function starved(s: TimingState, l: number, c: number): boolean {
+  const next = s.arith.at(s.laneArithNext[l] ?? 0)
+  if (next && next.dispatch < c) return false
+  const mem = s.mem.at(s.memNext)
+  return !mem || mem.dispatch >= c
+}
+
+/**
+ * The front end's reason for a lane starved of work this cycle, or -1 when
+ * the front end has nothing more to give (docs/model.md, "Stalls"): an
+ * instruction dispatched this cycle reaches the lanes next cycle (`frontend`);
+ * otherwise dispatch is blocked by a full queue, renaming, a scalar result or
+ * scalar work (`queue`, `rename`, `frontend`).
+ */
+function frontEndReason(s: TimingState, feWaiting: boolean): number {
+  if (s.feDispatched >= 0 && s.hold < 0) return R_FRONTEND
+  return feWaiting ? s.feReason : -1
+}
+
+/**
  * Gives the lane-cycle at most one stall reason (docs/model.md, "Stalls") and
  * counts, per instruction, every lane-cycle it was refused something.
  */
@@ -404,6 +435,10 @@ function classify(s: TimingState, l: number, c: number, feWaiting: boolean, next
       reason = crit.noteReason[l] ?? 0
       seq = crit.seq
       refusal = true
+    } else if (!ctx.reader[l] && !ctx.refused[l] && starved(s, l, c)) {
+      // No instruction at the lane's read stage and none dispatched to start: the front end starves the lane.
+      reason = frontEndReason(s, feWaiting)
+      seq = s.feDispatched >= 0 && s.hold < 0 ? s.feDispatched : nextSeq
     }
   } else {
     let oldest: Inst | null = null
@@ -429,21 +464,21 @@ function classify(s: TimingState, l: number, c: number, feWaiting: boolean, next
           break
         }
       }
-      if (reason < 0 && feWaiting && nextSeq >= 0) {
-        reason = s.feReason
-        seq = nextSeq
+      if (reason < 0) {
+        reason = frontEndReason(s, feWaiting)
+        seq = s.feDispatched >= 0 && s.hold < 0 ? s.feDispatched : nextSeq
       }
     }
   }
   const st = s.opStalls
   for (let i = 0; i < nd; i++) {
     const inst = denied[i] as Inst
-    const k = inst.seq * 9 + (inst.noteReason[l] ?? 0)
+    const k = inst.seq * STALL_COUNT + (inst.noteReason[l] ?? 0)
     st[k] = (st[k] ?? 0) + 1
   }
-  if (reason < 0) return
+  if (reason < 0 || seq < 0) return
   ctx.rec.stallAt(l, c, reason, seq)
-  if (!refusal) st[seq * 9 + reason] = (st[seq * 9 + reason] ?? 0) + 1
+  if (!refusal) st[seq * STALL_COUNT + reason] = (st[seq * STALL_COUNT + reason] ?? 0) + 1
 }
 
 /** Advances the machine by one cycle. Returns false once the run is over (finished or stopped by a limit). */
