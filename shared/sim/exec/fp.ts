@@ -233,18 +233,15 @@ export function arith(op: 'add' | 'sub' | 'mul' | 'div' | 'sqrt', a: number, b: 
   return roundExact(negative, q, da.exponent - db.exponent - shift, fmt, mode, q * db.significand !== num)
 }
 
+/** floor(sqrt(n)): Newton's iteration from a power of two above the root, which decreases to it. */
 function isqrt(n: bigint): bigint {
   if (n < 2n) return n
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))))
-  // Newton steps from the float estimate to the exact floor.
+  let x = 1n << BigInt(Math.ceil(bitLength(n) / 2))
   for (;;) {
     const y = (x + n / x) >> 1n
-    if (y >= x) break
+    if (y >= x) return x
     x = y
   }
-  while (x * x > n) x -= 1n
-  while ((x + 1n) * (x + 1n) <= n) x += 1n
-  return x
 }
 
 /** A binary64 value converted to binary32 in `mode` (fcvt.s.d, vfncvt.f.f.w). */

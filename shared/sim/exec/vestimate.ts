@@ -4,10 +4,10 @@
  * 128-entry table; these are the closed forms that reproduce both tables
  * entry for entry (checked against QEMU 7.2, which implements the tables, by
  * tests/reference/qemu): for the index i (vfrec7: the 7 leading fraction bits;
- * vfrsqrt7: the exponent's low bit and the 6 leading fraction bits), the
- * output fraction is round(128 x (2 / m - 1)) with m the midpoint of the
- * input interval (1 + (i + 0.5) / 128, or (1 + (j + 0.5) / 64) x 2^(e & 1)
- * under a square root), at most 127.
+ * vfrsqrt7: the biased exponent's low bit and the 6 leading fraction bits),
+ * the output fraction is round(128 x (2 / m - 1)) with m the midpoint of the
+ * input interval (1 + (i + 0.5) / 128; under the square root
+ * (1 + (j + 0.5) / 64), doubled when the biased exponent is even), at most 127.
  */
 import { RDN, RTZ, RUP, type RoundingMode } from './fp'
 import type { Handler } from './handler'
@@ -16,10 +16,12 @@ import { checkGroup, ExecFault, type Machine, regGroup } from './machine'
 import { readElem, writeElem } from './velem'
 
 const REC7 = Array.from({ length: 128 }, (_, i) => Math.min(127, Math.floor((2 / (1 + (i + 0.5) / 128) - 1) * 128 + 0.5)))
+// The index's top bit is the biased exponent's low bit: an even biased exponent
+// (an odd unbiased one) puts the input in [2, 4) relative to the result's scale.
 const RSQRT7 = Array.from({ length: 128 }, (_, k) => {
-  const odd = k >> 6
+  const oddBiased = k >> 6
   const j = k & 63
-  return Math.min(127, Math.floor((2 / Math.sqrt((1 + (j + 0.5) / 64) * (odd ? 2 : 1)) - 1) * 128 + 0.5))
+  return Math.min(127, Math.floor((2 / Math.sqrt((1 + (j + 0.5) / 64) * (oddBiased ? 1 : 2)) - 1) * 128 + 0.5))
 })
 
 interface Format { width: 32 | 64; frac: bigint; bias: bigint; expMask: bigint }
