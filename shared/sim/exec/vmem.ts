@@ -115,7 +115,8 @@ function memoryOp(pattern: Pattern, eew: Sew, isStore: boolean, nf = 1, faultOnl
       }
     }
     if (rec.on) {
-      const data = regGroup(vd, Math.min(8, nf * fieldRegs))
+      const span = nf * fieldRegs
+      const data = nf === 1 ? regGroup(vd, dataEmul) : Array.from({ length: span }, (_, k) => vd + k)
       const srcRegs = isStore ? [data] : []
       if (indexed) srcRegs.push(regGroup(vs2, indexEmul))
       rec.vector(ins, {
