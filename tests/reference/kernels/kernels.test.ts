@@ -116,6 +116,11 @@ describe.skipIf(absent.length > 0)('C kernels compiled by clang-16: Chimeline ru
     }
   }, 120_000)
 
+  it.each([['compiled-daxpy', 'daxpy'], ['compiled-fir', 'fir']])('examples/%s.s is the compiler output of %s.c, unchanged below its header', (example, k) => {
+    const text = readFileSync(join(DIR, '../../../examples', `${example}.s`), 'utf8')
+    expect(text.replace(/^(#[^\n]*\n)+/, '')).toBe(built.get(k)!.asm)
+  })
+
   it('keeps the limits on compiler output: instructions, data and steps (each named with where)', () => {
     const text = built.get('daxpy')!.asm
     const full = assemble(text)
