@@ -63,6 +63,8 @@ export function summaryDto(s: Scenario): ScenarioSummary {
   }
 }
 
+const originally = (v: ScenarioVersion) => (v.originalAuthorName !== null && v.originalCreatedAt ? { author: v.originalAuthorName, createdAt: v.originalCreatedAt.toISOString() } : null)
+
 export function versionDto(v: ScenarioVersion): VersionDto {
   return {
     number: v.number,
@@ -71,11 +73,12 @@ export function versionDto(v: ScenarioVersion): VersionDto {
     createdAt: v.createdAt.toISOString(),
     content: scenarioContentSchema.parse(v.content),
     run: v.run,
+    originally: originally(v),
   }
 }
 
 function versionSummaryDto(v: ScenarioVersion): ScenarioVersionSummary {
-  return { number: v.number, message: v.message, author: { id: v.authorId, name: v.authorName }, createdAt: v.createdAt.toISOString(), run: v.run }
+  return { number: v.number, message: v.message, author: { id: v.authorId, name: v.authorName }, createdAt: v.createdAt.toISOString(), run: v.run, originally: originally(v) }
 }
 
 /** `%`, `_` and `\` are ILIKE wildcards; a search for them means the characters. */

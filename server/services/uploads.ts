@@ -20,7 +20,7 @@ import { issuesToFields } from '../http/validate'
 import { Scenario, Upload, type User } from '../models'
 import { ElfError, readElf } from './elf/reader'
 import { decodeFunction, listFunctions } from './elf/import'
-import { importBundle } from './scenario-bundles'
+import { importBundle, summarizeBundle } from './scenario-bundles'
 import { createScenario } from './scenarios'
 import { instructionsToAssembly } from './uploads-asm'
 
@@ -189,7 +189,9 @@ export function uploadDto(upload: Upload, uploader: User | null, scenarioIds: st
 export async function importUpload(ctx: AppContext, user: User, workspaceId: string, file: ReceivedFile, fields: UploadFields): Promise<{ upload: Upload; scenarios: Scenario[] }> {
   const kind = detectKind(file, fields.kind)
   const read = readUpload(file, kind, fields)
+  // Runs first, on the pool and outside the transaction: a bundle's recorded figures are not trusted.
   const run = 'content' in read ? await ctx.runs.summarize(read.content, workspaceId) : undefined
+  const bundleRuns = 'bundle' in read ? await summarizeBundle(ctx, workspaceId, read.bundle, file.originalname) : []
   return ctx.sequelize.transaction(async (transaction) => {
     const upload = await Upload.create(
       {
@@ -207,7 +209,7 @@ export async function importUpload(ctx: AppContext, user: User, workspaceId: str
     const scenarios =
       'content' in read
         ? [await createScenario(ctx, user, workspaceId, { content: read.content, message: `Imported from ${upload.fileName}` }, { uploadId: upload.id, transaction, run })]
-        : await importBundle(user, workspaceId, read.bundle, { uploadId: upload.id, transaction })
+        : await importBundle(user, workspaceId, read.bundle, bundleRuns, { uploadId: upload.id, transaction })
     return { upload, scenarios }
   })
 }
