@@ -35,7 +35,7 @@ export interface ServerConfig {
   seedDemo: boolean
   /** The worker threads that compute saved versions' run summaries (services/run-pool.ts). */
   saveRuns: { threads: number; queue: number; perWorkspace: number; timeLimitMs: number }
-  /** The worker threads of other request work that can take long (services/work-pool.ts: version diffs). */
+  /** The worker threads of other request work that can take long (services/work-pool.ts: version diffs, reading uploads). */
   work: { threads: number; queue: number; perOwner: number; timeLimitMs: number }
 }
 

@@ -8,7 +8,7 @@ import type { SecureRouter } from '../../http/secure-router'
 import { assertGoodText } from '../../http/text-guard'
 import { issuesToFields } from '../../http/validate'
 import { summaryDto } from '../../services/scenarios'
-import { importUpload, inspectUpload, uploadDto, type ReceivedFile } from '../../services/uploads'
+import { fromWork, importUpload, uploadDto, type ReceivedFile } from '../../services/uploads'
 
 export const uploadPermissions = { inspect: ['owner', 'editor'], import: ['owner', 'editor'] } as const
 
@@ -47,7 +47,7 @@ async function received(req: Request, res: Response): Promise<{ file: ReceivedFi
 export function uploadRoutes(ctx: AppContext, r: SecureRouter): void {
   r.post('/workspaces/:id/uploads/inspect', { access: access.workspace(uploadPermissions.inspect) }, async (req, res) => {
     const { file, fields } = await received(req, res)
-    res.json(inspectUpload(file, fields))
+    res.json(fromWork(await ctx.work.run('upload', { file, fields, mode: 'inspect' }, currentMembership(req).workspaceId)))
   })
 
   r.post('/workspaces/:id/uploads', { access: access.workspace(uploadPermissions.import) }, async (req, res) => {
