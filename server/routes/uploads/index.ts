@@ -5,7 +5,7 @@ import { access, currentMembership, currentUser } from '../../auth/access'
 import type { AppContext } from '../../context'
 import { ApiError, errors } from '../../http/errors'
 import type { SecureRouter } from '../../http/secure-router'
-import { assertGoodText } from '../../http/text-guard'
+import { assertGoodText, badTextFields } from '../../http/text-guard'
 import { issuesToFields } from '../../http/validate'
 import { summaryDto } from '../../services/scenarios'
 import { fromWork, importUpload, uploadDto, type ReceivedFile } from '../../services/uploads'
@@ -41,6 +41,7 @@ async function received(req: Request, res: Response): Promise<{ file: ReceivedFi
   if (!parsed.success) throw errors.validation(issuesToFields(parsed.error.issues))
   // multer gives the name as latin1; browsers send UTF-8.
   const originalname = Buffer.from(req.file.originalname, 'latin1').toString('utf8')
+  if (badTextFields(originalname).body) throw errors.validation({ file: `The file name: ${badTextFields(originalname).body}` })
   return { file: { originalname, mimetype: req.file.mimetype, size: req.file.size, buffer: req.file.buffer }, fields: parsed.data }
 }
 
