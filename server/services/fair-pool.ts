@@ -44,7 +44,7 @@ export interface FairPool<T, R> {
   run(task: T, owner: string): Promise<R>
   /** Tasks in flight (running and waiting). */
   readonly inFlight: number
-  /** Tasks that reached a thread since the pool was made (tests use it to prove that work was skipped). */
+  /** Tasks handed to a thread since the pool was made (tests use it to prove where work ran, or that it was skipped). */
   readonly started: number
   close(): Promise<void>
 }
@@ -113,6 +113,7 @@ export function createFairPool<T extends object, R>(workerUrl: URL, limits: Fair
       else waiting.delete(owner)
       lastServed.set(owner, ++serves)
       running++
+      started++
       execute(job).finally(() => {
         running--
         const n = (perOwner.get(job.owner) ?? 1) - 1
@@ -131,7 +132,6 @@ export function createFairPool<T extends object, R>(workerUrl: URL, limits: Fair
     const { port1, port2 } = new MessageChannel()
     let timer: NodeJS.Timeout | undefined
     port1.once('message', () => {
-      started++
       timer = setTimeout(() => stop.abort(), limits.timeLimitMs)
     })
     try {
