@@ -125,8 +125,12 @@ describe('one run pool shared fairly (issue 9, item 3)', () => {
     const order: string[] = []
     const track = (label: string, p: Promise<request.Response>) => p.then((res) => (order.push(label), res))
     // A1 is the long kernel, so the neighbour asks while it still holds the only thread.
-    const burst = ['A1', 'A2', 'A3'].map((t) => track(t, create(r, { content: t === 'A1' ? longContent(t) : mediumContent(t), message: '' })))
-    await inFlight(r, 3)
+    // Each request is in the pool before the next is sent, so the pool sees them in this order.
+    const burst: Promise<request.Response>[] = []
+    for (const [i, t] of ['A1', 'A2', 'A3'].entries()) {
+      burst.push(track(t, create(r, { content: t === 'A1' ? longContent(t) : mediumContent(t), message: '' })))
+      await inFlight(r, i + 1)
+    }
     const neighbour = track('B1', create(r, { content: content({ title: 'B1' }), message: '' }, other))
     await inFlight(r, 4)
     expect(order).toEqual([])
