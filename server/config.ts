@@ -34,9 +34,9 @@ export interface ServerConfig {
   secureCookies: boolean
   seedDemo: boolean
   /** The worker threads that compute saved versions' run summaries (services/run-pool.ts). */
-  saveRuns: { threads: number; queue: number; perWorkspace: number; timeLimitMs: number }
+  saveRuns: { threads: number; queue: number; perWorkspace: number; perAccount: number; timeLimitMs: number }
   /** The worker threads of other request work that can take long (services/work-pool.ts: version diffs, reading uploads). */
-  work: { threads: number; queue: number; perOwner: number; timeLimitMs: number }
+  work: { threads: number; queue: number; perOwner: number; perAccount: number; timeLimitMs: number }
 }
 
 /** One thread per core the request thread does not need, at least one, at most four. */
@@ -116,12 +116,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
       threads: Math.max(1, intEnv(env, 'SAVE_RUN_THREADS', defaultRunThreads())),
       queue: intEnv(env, 'SAVE_RUN_QUEUE', 16),
       perWorkspace: Math.max(1, intEnv(env, 'SAVE_RUN_PER_WORKSPACE', 3)),
+      perAccount: Math.max(1, intEnv(env, 'SAVE_RUN_PER_ACCOUNT', 6)),
       timeLimitMs: Math.max(1, intEnv(env, 'SAVE_RUN_TIME_LIMIT_MS', 20_000)),
     },
     work: {
       threads: Math.max(1, intEnv(env, 'WORK_THREADS', 1)),
       queue: intEnv(env, 'WORK_QUEUE', 32),
       perOwner: Math.max(1, intEnv(env, 'WORK_PER_WORKSPACE', 4)),
+      perAccount: Math.max(1, intEnv(env, 'WORK_PER_ACCOUNT', 8)),
       timeLimitMs: Math.max(1, intEnv(env, 'WORK_TIME_LIMIT_MS', 10_000)),
     },
   }

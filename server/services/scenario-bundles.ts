@@ -41,7 +41,7 @@ export async function exportBundle(workspaceId: string, scenarioIds: string[]): 
  * distinct content once. Initial data that does not fit is a 400 naming the
  * version in the file.
  */
-export async function summarizeBundle(ctx: AppContext, workspaceId: string, bundle: Bundle, fileName: string): Promise<RunSummary[][]> {
+export async function summarizeBundle(ctx: AppContext, user: User, workspaceId: string, bundle: Bundle, fileName: string): Promise<RunSummary[][]> {
   const keyOf = (c: Bundle['scenarios'][number]['versions'][number]['content']) => JSON.stringify([c.program, c.machine, c.initialData])
   const distinct = new Set(bundle.scenarios.flatMap((item) => item.versions.map((v) => keyOf(v.content))))
   if (distinct.size > BUNDLE_IMPORT_MAX_RUNS) {
@@ -56,7 +56,7 @@ export async function summarizeBundle(ctx: AppContext, workspaceId: string, bund
       let run = byContent.get(key)
       if (!run) {
         try {
-          run = await ctx.runs.summarize(v.content, workspaceId)
+          run = await ctx.runs.summarize(v.content, workspaceId, user.id)
         } catch (err) {
           if (err instanceof ApiError && err.code === 'validation_failed' && err.fields) {
             const fields = Object.fromEntries(Object.entries(err.fields).map(([k, m]) => [`scenarios.${i}.versions.${j}.${k}`, m]))

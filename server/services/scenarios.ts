@@ -146,7 +146,7 @@ export interface NewScenarioOptions {
 
 /** Creates a scenario with its version 1. */
 export async function createScenario(ctx: AppContext, user: User, workspaceId: string, body: CreateScenarioBody, options: NewScenarioOptions = {}): Promise<Scenario> {
-  const run = options.run ?? (await ctx.runs.summarize(body.content, workspaceId))
+  const run = options.run ?? (await ctx.runs.summarize(body.content, workspaceId, user.id))
   const work = async (transaction: Transaction) => {
     const c = body.content
     const scenario = await Scenario.create(
@@ -179,7 +179,7 @@ export async function saveScenario(ctx: AppContext, user: User, workspaceId: str
   if (current.version !== body.baseVersion) await conflict(current.id, body)
   // The run is CPU work on a worker thread: do it before taking the row lock,
   // and check the version again under the lock, since someone may have saved meanwhile.
-  const run = await ctx.runs.summarize(body.content, workspaceId)
+  const run = await ctx.runs.summarize(body.content, workspaceId, user.id)
   return ctx.sequelize.transaction(async (transaction) => {
     const scenario = await findScenario(workspaceId, scenarioId, { transaction, lock: true })
     if (scenario.version !== body.baseVersion) await conflict(scenario.id, body, transaction)

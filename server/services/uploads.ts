@@ -216,10 +216,10 @@ export function fromWork<T>(outcome: UploadWork<unknown>): T {
 }
 
 export async function importUpload(ctx: AppContext, user: User, workspaceId: string, file: ReceivedFile, fields: UploadFields): Promise<{ upload: Upload; scenarios: Scenario[] }> {
-  const { kind, read } = fromWork<{ kind: UploadKind; read: ReturnType<typeof readUpload> }>(await ctx.work.run('upload', { file, fields, mode: 'read' }, workspaceId))
+  const { kind, read } = fromWork<{ kind: UploadKind; read: ReturnType<typeof readUpload> }>(await ctx.work.run('upload', { file, fields, mode: 'read' }, workspaceId, user.id))
   // Runs first, on the pool and outside the transaction: a bundle's recorded figures are not trusted.
-  const run = 'content' in read ? await ctx.runs.summarize(read.content, workspaceId) : undefined
-  const bundleRuns = 'bundle' in read ? await summarizeBundle(ctx, workspaceId, read.bundle, file.originalname) : []
+  const run = 'content' in read ? await ctx.runs.summarize(read.content, workspaceId, user.id) : undefined
+  const bundleRuns = 'bundle' in read ? await summarizeBundle(ctx, user, workspaceId, read.bundle, file.originalname) : []
   return ctx.sequelize.transaction(async (transaction) => {
     const upload = await Upload.create(
       {

@@ -48,7 +48,7 @@ async function received(req: Request, res: Response): Promise<{ file: ReceivedFi
 export function uploadRoutes(ctx: AppContext, r: SecureRouter): void {
   r.post('/workspaces/:id/uploads/inspect', { access: access.workspace(uploadPermissions.inspect) }, async (req, res) => {
     const { file, fields } = await received(req, res)
-    res.json(fromWork(await ctx.work.run('upload', { file, fields, mode: 'inspect' }, currentMembership(req).workspaceId)))
+    res.json(fromWork(await ctx.work.run('upload', { file, fields, mode: 'inspect' }, currentMembership(req).workspaceId, currentUser(req).id)))
   })
 
   r.post('/workspaces/:id/uploads', { access: access.workspace(uploadPermissions.import) }, async (req, res) => {
