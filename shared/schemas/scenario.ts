@@ -137,6 +137,13 @@ export const scenarioVersionSchema = z.object({
   createdAt: z.iso.datetime(),
   content: scenarioContentSchema,
   run: runSummarySchema,
+  /**
+   * Set on imported versions: the author name and date the bundle file
+   * claimed. `author` and `createdAt` are the importer and the import time,
+   * and `run` was computed again on import, so a file cannot put words or
+   * figures in anyone's mouth.
+   */
+  originally: z.object({ author: z.string(), createdAt: z.iso.datetime() }).nullable().default(null),
 })
 export type ScenarioVersion = z.infer<typeof scenarioVersionSchema>
 
