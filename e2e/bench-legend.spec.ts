@@ -1,0 +1,70 @@
+/**
+ * Issue 10, hard to read: the Bench has a legend like the exported picture,
+ * and a long run zoomed out keeps its instruction colours (the dominant
+ * instruction per pixel column) in both themes instead of a grey smear.
+ */
+import { readFileSync } from 'node:fs'
+import { expect, test, type Page } from '@playwright/test'
+import { DEMO, signIn, userMenu } from './helpers/auth'
+import { screenshot } from './helpers/screenshots'
+
+const chart = (page: Page) => page.getByTestId('lane-chart')
+
+async function pickExample(page: Page, id: string) {
+  const title = (readFileSync(`examples/${id}.s`, 'utf8').match(/^#\s*(.+)$/m)?.[1] ?? id).split(/[:.](\s|$)/)[0]!.trim()
+  const before = Number(await page.getByTestId('chart-box').getAttribute('data-runs'))
+  await page.getByTestId('example-select').click()
+  await page.locator('.n-base-select-option', { hasText: title }).first().click()
+  await expect.poll(async () => Number(await page.getByTestId('chart-box').getAttribute('data-runs')), { timeout: 60_000 }).toBeGreaterThan(before)
+}
+
+/** Share of the painted canvas pixels that are coloured (not grey): the spread of R, G and B is over 40 of 255. */
+async function colouredShare(page: Page): Promise<number> {
+  return chart(page).locator('.lc-bars canvas').evaluate((c: HTMLCanvasElement) => {
+    const d = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data
+    let painted = 0
+    let coloured = 0
+    for (let i = 0; i < d.length; i += 4) {
+      if (d[i + 3]! < 200) continue
+      painted++
+      if (Math.max(d[i]!, d[i + 1]!, d[i + 2]!) - Math.min(d[i]!, d[i + 1]!, d[i + 2]!) > 40) coloured++
+    }
+    return painted ? coloured / painted : 0
+  })
+}
+
+test.describe('reading the Lane chart', () => {
+  test('the Bench shows a legend: phases, stall hatching, cursor, selection, and arrows and R/E/W rows when on', async ({ page }) => {
+    await page.setViewportSize({ width: 1440, height: 900 })
+    await signIn(page, DEMO.editor)
+    await expect(chart(page)).toBeVisible({ timeout: 60_000 })
+    const legend = page.getByTestId('chart-legend')
+    for (const item of ['read', 'execute', 'write', 'stall', 'cursor', 'selection']) await expect(legend.locator(`[data-legend="${item}"]`)).toBeVisible()
+    await expect(legend.locator('[data-legend="rows"]')).toHaveCount(0)
+    await page.getByText('R/E/W rows', { exact: true }).click()
+    await page.getByText('Dependencies', { exact: true }).click()
+    await expect(legend.locator('[data-legend="rows"]')).toContainText('R read, E execute, W write')
+    await expect(legend.locator('[data-legend="dependencies"]')).toBeVisible()
+    await screenshot(page, 'bench-legend')
+  })
+
+  test('a long run zoomed out keeps its instruction colours, in light and dark', async ({ page }) => {
+    test.setTimeout(120_000)
+    await page.setViewportSize({ width: 1440, height: 900 })
+    await signIn(page, DEMO.editor)
+    await expect(chart(page)).toBeVisible({ timeout: 60_000 })
+    await pickExample(page, 'long-stream')
+    await expect(chart(page)).toHaveAttribute('data-renderer', 'canvas')
+    await chart(page).getByRole('button', { name: 'Fit' }).click()
+    for (const theme of ['light', 'dark'] as const) {
+      if ((await page.evaluate(() => document.documentElement.dataset.theme)) !== theme) {
+        await userMenu(page, `Switch to ${theme} theme`)
+        await expect.poll(() => page.evaluate(() => document.documentElement.dataset.theme)).toBe(theme)
+        await page.waitForTimeout(300)
+      }
+      // Most painted pixels keep an instruction's colour; the grey merge painted them all grey.
+      await expect.poll(() => colouredShare(page), { timeout: 10_000 }).toBeGreaterThan(0.5)
+      await chart(page).screenshot({ path: `.screenshots/bench-long-run-${theme}.png`, animations: 'disabled' })
+    }
+  })
+})
