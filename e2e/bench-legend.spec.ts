@@ -67,4 +67,34 @@ test.describe('reading the Lane chart', () => {
       await chart(page).screenshot({ path: `.screenshots/bench-long-run-${theme}.png`, animations: 'disabled' })
     }
   })
+
+  test('the wheel scrolls the page unless Ctrl is held or the chart was clicked; Esc clears the selection; plain words in forms', async ({ page }) => {
+    await page.setViewportSize({ width: 1280, height: 800 })
+    await signIn(page, DEMO.editor)
+    await expect(chart(page)).toBeVisible({ timeout: 60_000 })
+    const end = () => chart(page).getAttribute('data-window-end')
+    const fitted = await end()
+    const box = (await chart(page).locator('.lc-bars').boundingBox())!
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2)
+    await page.mouse.wheel(0, 300)
+    await expect.poll(() => page.evaluate(() => window.scrollY)).toBeGreaterThan(0)
+    expect(await end()).toBe(fitted)
+    // Ctrl + wheel zooms.
+    const box2 = (await chart(page).locator('.lc-bars').boundingBox())!
+    await page.mouse.move(box2.x + box2.width / 2, box2.y + box2.height / 2)
+    await page.keyboard.down('Control')
+    await page.mouse.wheel(0, -300)
+    await page.keyboard.up('Control')
+    await expect.poll(end).not.toBe(fitted)
+    // Selecting from the table, then Esc with the chart focused clears it.
+    await page.getByTestId('instruction-table').locator('tbody tr').nth(3).click()
+    await expect(chart(page)).toHaveAttribute('data-selected', /\d+/)
+    await chart(page).focus()
+    await page.keyboard.press('Escape')
+    await expect(chart(page)).toHaveAttribute('data-selected', '')
+    // The Save as description says what to write, not the component library's "Please Input".
+    await page.getByTestId('scenario-toolbar').getByRole('button', { name: 'Save as…' }).click()
+    await expect(page.locator('#save-description')).toHaveAttribute('placeholder', /Markdown/)
+    await expect(page.getByText('Please Input')).toHaveCount(0)
+  })
 })
