@@ -5,7 +5,11 @@
  */
 import { readFileSync } from 'node:fs'
 import { expect, test, type Page } from '@playwright/test'
+import { parseMachine } from '../shared/schemas/machine'
+import { PRESETS } from '../shared/sim/presets'
+import { runPipeline } from '../shared/sim/run'
 import { DEMO, signIn, userMenu } from './helpers/auth'
+import { accessToken, workspaceId } from './helpers/api'
 import { screenshot } from './helpers/screenshots'
 
 const chart = (page: Page) => page.getByTestId('lane-chart')
@@ -96,5 +100,36 @@ test.describe('reading the Lane chart', () => {
     await page.getByTestId('scenario-toolbar').getByRole('button', { name: 'Save as…' }).click()
     await expect(page.locator('#save-description')).toHaveAttribute('placeholder', /Markdown/)
     await expect(page.getByText('Please Input')).toHaveCount(0)
+  })
+
+  test('a ragged tail is explained in numbers, from runs of the even neighbours', async ({ page, request }) => {
+    test.setTimeout(120_000)
+    // The long stream at vl 250 instead of 256 on the Bench's default 8-lane preset.
+    const program = readFileSync('examples/long-stream.s', 'utf8').replace(/li\s+a0, 256/, 'li      a0, 250')
+    const machine = PRESETS.find((p) => p.id === 'long-vector-8')!.machine
+    const cycles = (text: string) => {
+      const r = runPipeline({ program: text, machine: parseMachine(machine) })
+      if (!r.ok) throw new Error(r.error.message)
+      return r.trace.cycles
+    }
+    const at250 = cycles(program)
+    const saved = at250 - cycles(program.replace('li      a0, 250', 'li      a0, 248'))
+    const token = await accessToken(request, DEMO.editor)
+    const ws = await workspaceId(request, token)
+    const res = await request.post(`/api/workspaces/${ws}/scenarios`, {
+      headers: { Authorization: `Bearer ${token}` },
+      data: { content: { title: `Ragged vl=250 ${Date.now().toString(36)}`, program, machine } },
+    })
+    expect(res.status()).toBe(201)
+    const { scenario } = (await res.json()) as { scenario: { id: string } }
+    await page.setViewportSize({ width: 1440, height: 900 })
+    await signIn(page, DEMO.editor)
+    await page.goto(`/bench?scenario=${scenario.id}`)
+    const ragged = page.getByTestId('ragged-tail')
+    await expect(ragged).toContainText('lanes 0–1 have 32 elements, lanes 2–7 have 31', { timeout: 60_000 })
+    await expect(ragged).toContainText(`vl 248 would be ${saved.toLocaleString('en-US')} cycles shorter`, { timeout: 60_000 })
+    await expect(page.getByTestId('metric-cycles')).toHaveText(at250.toLocaleString('en-US'))
+    await ragged.scrollIntoViewIfNeeded()
+    await page.getByTestId('chart-box').locator('..').screenshot({ path: '.screenshots/bench-ragged-tail.png' })
   })
 })
