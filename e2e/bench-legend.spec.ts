@@ -132,4 +132,24 @@ test.describe('reading the Lane chart', () => {
     await ragged.scrollIntoViewIfNeeded()
     await page.getByTestId('chart-box').locator('..').screenshot({ path: '.screenshots/bench-ragged-tail.png' })
   })
+
+  test('the bank view maps words to banks, shows port use and denials, and what the selected instruction collided with', async ({ page }) => {
+    test.setTimeout(120_000)
+    await page.setViewportSize({ width: 1440, height: 900 })
+    await signIn(page, DEMO.editor)
+    await expect(chart(page)).toBeVisible({ timeout: 60_000 })
+    await pickExample(page, 'bank-conflicts')
+    const view = page.getByTestId('bank-view')
+    await expect(view).toBeVisible()
+    await expect(view.getByTestId('bank-heat')).toContainText('denied')
+    // Select the instruction that waited longest on banks (the table's bank column, when there is one).
+    const trace = runPipeline({ program: readFileSync('examples/bank-conflicts.s', 'utf8'), machine: parseMachine(PRESETS.find((p) => p.id === 'long-vector-8')!.machine) })
+    if (!trace.ok) throw new Error(trace.error.message)
+    const worst = [...trace.trace.instructions].sort((a, b) => b.stalls.bank - a.stalls.bank)[0]!
+    await page.getByTestId('instruction-table').locator(`tbody tr[data-index="${worst.index}"]`).click()
+    await expect(chart(page)).toHaveAttribute('data-selected', String(worst.index))
+    await expect(view).toContainText(`Instruction #${worst.index}`)
+    if (worst.stalls.bank > 0) await expect(view.getByTestId('bank-collisions')).toContainText('lane')
+    await view.screenshot({ path: '.screenshots/bench-bank-view.png' })
+  })
 })
