@@ -1,14 +1,14 @@
-import fs from 'node:fs'
 import path from 'node:path'
 import cookieParser from 'cookie-parser'
 import express, { type Express } from 'express'
 import helmet from 'helmet'
-import { pinoHttp } from 'pino-http'
 import { JSON_BODY_LIMIT_BYTES } from '../shared/schemas/errors'
 import { createAuthenticator } from './auth/passport'
 import type { AppContext } from './context'
 import { apiNotFound, errorHandler } from './http/error-handler'
+import { requestLogger } from './http/request-log'
 import { secureRouter } from './http/secure-router'
+import { refuseBadText } from './http/text-guard'
 import { adminRoutes } from './routes/admin'
 import { authRoutes } from './routes/auth'
 import { healthRoutes } from './routes/health'
@@ -37,9 +37,11 @@ export function buildApp(ctx: AppContext): Express {
           workerSrc: ["'self'", 'blob:'],
         },
       },
+      // HSTS means something only over HTTPS; over plain http it is noise at best.
+      strictTransportSecurity: ctx.config.publicUrl.startsWith('https:') ? undefined : false,
     }),
   )
-  app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }))
+  app.use(requestLogger(ctx.logger, ctx.config))
 
   const api = secureRouter(createAuthenticator(ctx.config.jwtSecret))
   healthRoutes(ctx, api)
@@ -55,15 +57,27 @@ export function buildApp(ctx: AppContext): Express {
   uploadRoutes(ctx, api)
   docsRoutes(api)
 
-  app.use('/api', express.json({ limit: JSON_BODY_LIMIT_BYTES }), cookieParser(), api.router, apiNotFound)
+  // API answers carry tokens and private data: no cache keeps them (the share open revalidates instead).
+  app.use('/api', (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store')
+    next()
+  })
+  app.use('/api', express.json({ limit: JSON_BODY_LIMIT_BYTES }), refuseBadText, cookieParser(), api.router, apiNotFound)
 
   const clientDir = ctx.config.clientDir
-  if (clientDir && fs.existsSync(path.join(clientDir, 'index.html'))) {
+  if (clientDir) {
+    // Mounted whether or not the build exists yet: `npm start` may create the
+    // app before `vite build` has written dist/, and both handlers look at the
+    // folder per request.
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
     // History fallback: every other GET is a client route.
-    app.get(/^(?!\/api\/).*/, (_req, res) => {
+    app.get(/^(?!\/api\/).*/, (_req, res, next) => {
       res.setHeader('Cache-Control', 'no-cache')
-      res.sendFile(path.join(clientDir, 'index.html'))
+      res.sendFile(path.join(clientDir, 'index.html'), (err) => {
+        if (!err) return
+        if (res.headersSent) return next(err)
+        res.status(503).type('text/plain').send('The Chimeline client is not built yet: run `npx vite build` (npm start does it) and reload.')
+      })
     })
   }
 

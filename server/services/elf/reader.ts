@@ -175,24 +175,41 @@ export function readElf(bytes: Uint8Array): ElfFile {
  * The functions of the symbol table: its STT_FUNC entries in executable
  * sections (compilers mark every function so; hand-written assembly needs
  * `.type name, @function`), in address order. A size of 0 reaches to the next
- * function or the end of the section.
+ * function of the same section with a higher address, or the end of the section.
+ *
+ * One sort and one backward pass (O(n log n)): a per-symbol search for the next
+ * function was quadratic and held the server for seconds on large executables.
  */
 export function elfFunctions(elf: ElfFile): ElfFunctionInfo[] {
   const found = elf.symbols
     .filter((s) => s.type === STT_FUNC && s.shndx > 0 && s.shndx < SHN_LORESERVE && s.name !== '')
     .map((s) => ({ s, section: elf.sections[s.shndx] }))
     .filter((x): x is { s: ElfSymbol; section: ElfSection } => !!x.section && (x.section.flags & SHF_EXECINSTR) !== 0)
-    .sort((a, b) => a.s.value - b.s.value || a.s.name.localeCompare(b.s.name))
+    .sort((a, b) => a.s.value - b.s.value || (a.s.name < b.s.name ? -1 : a.s.name > b.s.name ? 1 : 0))
   const seen = new Set<string>()
-  return found
-    .filter(({ s }) => (seen.has(s.name) ? false : (seen.add(s.name), true)))
-    .map(({ s, section }, i, all) => {
+  const all = found.filter(({ s }) => (seen.has(s.name) ? false : (seen.add(s.name), true)))
+  // Walking from the highest address down, `nextStart` holds per section the
+  // lowest address seen so far; `pending` the symbols sharing the current address,
+  // whose next function must lie strictly above it.
+  const nextStart = new Map<number, number>()
+  const out: ElfFunctionInfo[] = new Array(all.length)
+  let i = all.length - 1
+  while (i >= 0) {
+    const value = all[i]!.s.value
+    let j = i
+    while (j >= 0 && all[j]!.s.value === value) j--
+    for (let k = j + 1; k <= i; k++) {
+      const { s, section } = all[k]!
       const base = elf.type === 1 ? 0 : section.addr
       const sectionEnd = base + section.size
-      const next = all.slice(i + 1).find((o) => o.section.index === section.index && o.s.value > s.value)
-      const size = s.size > 0 ? s.size : (next ? next.s.value : sectionEnd) - s.value
-      return { name: s.name, address: s.value, size: Math.max(0, Math.min(size, sectionEnd - s.value)), section }
-    })
+      const next = nextStart.get(section.index)
+      const size = s.size > 0 ? s.size : (next ?? sectionEnd) - s.value
+      out[k] = { name: s.name, address: s.value, size: Math.max(0, Math.min(size, sectionEnd - s.value)), section }
+    }
+    for (let k = j + 1; k <= i; k++) nextStart.set(all[k]!.section.index, value)
+    i = j
+  }
+  return out
 }
 
 /**
