@@ -37,28 +37,33 @@ describe('sweep Worker pool', () => {
   })
 
   it('pauses (no new point starts), resumes, and cancels keeping the points done', async () => {
-    const runners = [asyncRunner(), asyncRunner()]
-    await loadPool(runners, definition)
+    // Runners whose points finish only when the test says so: no timing involved.
+    const service = createSweepService()
+    service.load(definition)
+    const started: number[] = []
+    const pending: (() => void)[] = []
+    const gated = (): PointRunnerPort => ({ load: () => null, run: (i) => new Promise((resolve) => { started.push(i); pending.push(() => resolve(service.run(i))) }) })
+    const finishAll = async () => {
+      for (const f of pending.splice(0)) f()
+      await new Promise((resolve) => setTimeout(resolve, 0))
+    }
     let seen = 0
-    const run = runPool(runners, { planned: 12, timeLimitMs: 60_000 }, {
-      onPoint: () => {
-        seen++
-        if (seen === 2) run.pause()
-      },
-    })
-    await new Promise((resolve) => setTimeout(resolve, 50))
-    // Two runners: the pause comes with the second point; the other runner's point in flight still lands.
-    expect(run.paused).toBe(true)
-    const atPause = seen
-    expect(atPause).toBeLessThanOrEqual(3)
-    await new Promise((resolve) => setTimeout(resolve, 50))
-    expect(seen).toBe(atPause)
+    const run = runPool([gated(), gated()], { planned: 12, timeLimitMs: 60_000 }, { onPoint: () => seen++ })
+    await new Promise((resolve) => setTimeout(resolve, 0))
+    expect(started).toEqual([0, 1])
+    run.pause()
+    await finishAll()
+    // The two points in flight land; no new one starts while paused.
+    expect(seen).toBe(2)
+    expect(started).toEqual([0, 1])
     run.resume()
+    await new Promise((resolve) => setTimeout(resolve, 0))
+    expect(started).toEqual([0, 1, 2, 3])
     run.cancel()
+    await finishAll()
     const end = await run.finished
-    expect(end.reason).toBe('cancelled')
-    expect(end.message).toMatch(/^cancelled after \d+ of 12 points; the points done are kept$/)
-    expect(seen).toBeLessThan(12)
+    expect(end).toEqual({ reason: 'cancelled', message: 'cancelled after 2 of 12 points; the points done are kept' })
+    expect(seen).toBe(4)
   })
 
   it('stops at the time limit, counting running time only', async () => {
