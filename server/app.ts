@@ -17,6 +17,7 @@ import { meRoutes } from './routes/me'
 import { workspaceRoutes } from './routes/workspaces'
 import { docsRoutes } from './routes/docs'
 import { scenarioRoutes } from './routes/scenarios'
+import { sweepRoutes } from './routes/sweeps'
 import { shareLinkRoutes } from './routes/share-links'
 import { shareRoutes } from './routes/shares'
 import { uploadRoutes } from './routes/uploads'
@@ -52,6 +53,7 @@ export function buildApp(ctx: AppContext): Express {
   adminRoutes(api)
   workspaceTrashRoutes(api)
   scenarioRoutes(ctx, api)
+  sweepRoutes(ctx, api)
   shareLinkRoutes(ctx, api)
   shareRoutes(ctx, api)
   uploadRoutes(ctx, api)

@@ -1,3 +1,4 @@
+import { createSweepQueue } from './services/sweeps-queue'
 import type { Server } from 'node:http'
 import type { AddressInfo } from 'node:net'
 import type { Sequelize } from 'sequelize'
@@ -42,7 +43,8 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   const work = createWorkPool(config.work)
   const shares = new ShareOpens(sequelize, createOpenCounter(sequelize, logger, config.shareCountFlushMs))
   const shareListener = await listenForShareLinkChanges(config.databaseUrl, shares, logger)
-  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shares }
+  const sweeps = createSweepQueue(config.databaseUrl)
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shares, sweeps }
   const app = buildApp(ctx)
   return {
     ctx,
@@ -55,6 +57,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
       mailer.close()
       await runs.close()
       await work.close()
+      await sweeps.close()
       await sink?.close()
       if (!options.sequelize) await sequelize.close()
     },
