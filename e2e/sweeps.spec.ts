@@ -34,18 +34,29 @@ test('a vl curve from the Bench: Sweep this, run on the Worker pool, plot, table
   await expect(page.getByTestId('sweep-progress-text')).toContainText('128 of 128 points', { timeout: 60_000 })
   await expect(page.locator('[data-testid="sweep-plot"] svg').first()).toBeVisible()
   // The table sorts: issue descending puts the staggered rows first.
-  const issueHeader = page.locator('[data-testid="sweep-table"] th', { hasText: /^issue$/ })
-  await expect(async () => {
-    await issueHeader.click()
-    await expect(page.locator('[data-testid="sweep-table"] tbody tr').first()).toContainText('staggered', { timeout: 1000 })
-  }).toPass({ timeout: 10_000 })
+  const staggeredFirst = () =>
+    expect(async () => {
+      await page.locator('[data-testid="sweep-table"] th', { hasText: /^issue$/ }).click()
+      await expect(page.locator('[data-testid="sweep-table"] tbody tr').first()).toContainText('staggered', { timeout: 1000 })
+    }).toPass({ timeout: 10_000 })
+  await staggeredFirst()
   await screenshot(page, 'sweeps-vl-curve')
 
-  // The Bench's machine was its first preset (Long-vector 8-lane): one point against a Node run of it.
-  const single = runPipeline({ program: inlineSymbols(withSymbols(FMA_CURVE, new Map([['AVL', 8]]))), machine: { lanes: 8, vlen: 16384, rfBanks: 8, issue: 'staggered' } })
+  // The Bench's machine is the default one (preset Default 8-lane): one point against a Node run of it.
+  const single = runPipeline({ program: inlineSymbols(withSymbols(FMA_CURVE, new Map([['AVL', 8]]))), machine: { issue: 'staggered' } })
   if (!single.ok) throw new Error(single.error.message)
   const row = page.locator('[data-testid="sweep-table"] tr', { has: page.locator('td', { hasText: /^staggered$/ }) }).filter({ has: page.locator('td', { hasText: /^8$/ }) })
   await expect(row.first()).toContainText(String(single.trace.cycles))
+
+  // Saved with its points in the workspace: listed, and the same points come back from the server.
+  await page.getByLabel('Title', { exact: true }).fill('FP64 vl curve, serial vs staggered')
+  await page.getByTestId('sweep-save').click()
+  await expect(page).toHaveURL(/\/sweeps\/[0-9a-f-]{36}$/)
+  await expect(page.getByTestId('sweep-list')).toContainText('FP64 vl curve, serial vs staggered')
+  await page.reload()
+  await expect(page.getByTestId('sweep-progress-text')).toContainText('128 of 128 points', { timeout: 30_000 })
+  await expect(page.getByTestId('sweep-list')).toContainText('browser · done · 128/128 points')
+  await screenshot(page, 'sweeps-saved')
 
   // Bad values are named with the field, the value and the range.
   await page.getByLabel('Values of parameter 1').fill('serial,eager')
@@ -53,6 +64,7 @@ test('a vl curve from the Bench: Sweep this, run on the Worker pool, plot, table
   await expect(page.getByRole('alert').filter({ hasText: 'issue=eager' })).toBeVisible()
   await page.getByLabel('Values of parameter 1').fill('serial,staggered')
 
+  await staggeredFirst()
   await row.first().getByRole('button', { name: 'Open' }).click()
   await expect(page).toHaveURL(/\/bench/)
   await expect(page.getByTestId('run-status')).toContainText(`${single.trace.cycles} cycles`, { timeout: 30_000 })

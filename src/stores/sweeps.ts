@@ -6,12 +6,15 @@
 import { computed, ref, shallowRef, triggerRef } from 'vue'
 import { defineStore } from 'pinia'
 import { defaultMachine } from '@shared/schemas/machine'
-import { SWEEP_DEFAULT_MAX_POINTS, sweepDefinitionSchema, type SweepDefinition, type SweepParameter, type SweepPointResult } from '@shared/schemas/sweep'
+import { SWEEP_DEFAULT_MAX_POINTS, sweepDefinitionSchema, type SweepDefinition, type SweepParameter, type SweepPointResult, type SweepSummary } from '@shared/schemas/sweep'
 import { MACHINE_FIELD_PATHS } from '@shared/sweep/machineFields'
 import { resolveSweep, type ResolvedSweep, type SweepDefinitionIssue } from '@shared/sweep/resolve'
 import { pointsLimitMessage, plannedPoints } from '@shared/sweep/runSweep'
 import { symbolDefinitions } from '@shared/sweep/symbols'
 import * as Comlink from 'comlink'
+import { ApiError } from '@/api'
+import { useAuthStore } from '@/stores/auth'
+import { useWorkspaceStore } from '@/stores/workspace'
 import { loadPool, runPool, type PointRunnerPort, type SweepPoolRun, type SweepProgress } from '@/workers/sweepPool'
 import type { SweepService } from '@/workers/sweepService'
 
@@ -54,6 +57,31 @@ export const useSweepsStore = defineStore('sweeps', () => {
   const firstPointMs = ref<number | null>(null)
   const totalMs = ref<number | null>(null)
   let current: { run: SweepPoolRun; close: () => void } | null = null
+  const auth = useAuthStore()
+  const workspace = useWorkspaceStore()
+  /** The workspace's saved and server sweeps. */
+  const saved = shallowRef<SweepSummary[]>([])
+  /** The saved sweep shown (its id), or null for a sweep not saved. */
+  const savedId = ref<string | null>(null)
+  const apiError = ref<string | null>(null)
+  let polling: ReturnType<typeof setTimeout> | null = null
+  /** A server sweep being followed (polled): it can be cancelled, not paused. */
+  const following = ref(false)
+
+  function workspaceId(): string {
+    const id = workspace.current?.id
+    if (!id) throw new ApiError(0, 'not_found', 'Choose a workspace first.')
+    return id
+  }
+  async function guarded<T>(fn: () => Promise<T>): Promise<T | null> {
+    apiError.value = null
+    try {
+      return await fn()
+    } catch (e) {
+      apiError.value = e instanceof ApiError ? e.message : String(e)
+      return null
+    }
+  }
 
   const symbols = computed(() => [...new Set(symbolDefinitions(program.value).map((d) => d.name))])
   /** What a parameter may name: the program's symbols first, then the machine fields. */
@@ -86,6 +114,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
     }
     issues.value = []
     message.value = null
+    savedId.value = null
     sweep.value = resolved.sweep
     const planned = plannedPoints(resolved.sweep)
     points.value = new Array<SweepPointResult | undefined>(planned)
@@ -125,7 +154,75 @@ export const useSweepsStore = defineStore('sweeps', () => {
     if (current) status.value = 'running'
   }
   function cancel(): void {
-    current?.run.cancel()
+    if (current) current.run.cancel()
+    else if (following.value && savedId.value) {
+      const id = savedId.value
+      void guarded(() => auth.api.sweeps.cancel(workspaceId(), id)).then(() => open(id))
+    }
+  }
+
+  async function loadSaved(): Promise<void> {
+    const r = await guarded(() => auth.api.sweeps.list(workspaceId()))
+    if (r) saved.value = r.sweeps
+  }
+
+  /** Saves the browser sweep shown, with its points. */
+  async function save(title: string): Promise<string | null> {
+    const def = definition()
+    if (!def.ok || !sweep.value) return null
+    const st = status.value === 'cancelled' ? 'cancelled' : status.value === 'stopped' ? 'stopped' : 'done'
+    const r = await guarded(() => auth.api.sweeps.create(workspaceId(), { title, runner: 'browser', definition: def.definition, points: arrived.value, status: st, message: message.value }))
+    if (!r) return null
+    savedId.value = r.sweep.id
+    await loadSaved()
+    return r.sweep.id
+  }
+
+  function show(definitionOf: SweepDefinition, got: SweepPointResult[], total: number): void {
+    program.value = definitionOf.program
+    machine.value = definitionOf.machine
+    parameters.value = definitionOf.parameters.map((p) => ({ ...p }))
+    const r = resolveSweep(definitionOf)
+    sweep.value = r.ok ? r.sweep : null
+    const arr = new Array<SweepPointResult | undefined>(total)
+    for (const p of got) arr[p.index] = p
+    points.value = arr
+  }
+
+  /** Opens a saved sweep; a server sweep still running is followed until it ends. */
+  async function open(id: string): Promise<void> {
+    if (polling) clearTimeout(polling)
+    const r = await guarded(() => auth.api.sweeps.get(workspaceId(), id))
+    if (!r) return
+    const s = r.sweep
+    savedId.value = s.id
+    show(s.definition, s.points, s.planned)
+    status.value = s.status === 'queued' || s.status === 'running' ? 'running' : s.status
+    message.value = s.message
+    // A saved sweep's running time is not kept: only the points done are shown.
+    progress.value = { done: s.points.length, planned: s.planned, elapsedMs: 0, rate: null, remainingMs: null }
+    following.value = s.status === 'queued' || s.status === 'running'
+    if (following.value) polling = setTimeout(() => void open(id), 1000)
+  }
+
+  /** Queues the sweep on the server's workers, then follows it. */
+  async function runOnServer(title: string): Promise<string | null> {
+    const def = definition()
+    if (!def.ok) {
+      issues.value = def.issues
+      return null
+    }
+    const r = await guarded(() => auth.api.sweeps.create(workspaceId(), { title, runner: 'server', definition: def.definition }))
+    if (!r) return null
+    await loadSaved()
+    await open(r.sweep.id)
+    return r.sweep.id
+  }
+
+  function stopFollowing(): void {
+    if (polling) clearTimeout(polling)
+    polling = null
+    following.value = false
   }
 
   function addParameter(): void {
@@ -137,6 +234,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
 
   return {
     program, machine, parameters, maxPoints, status, issues, message, points, arrived, progress, sweep, firstPointMs, totalMs, symbols, parameterNames,
-    fromBench, start, pause, resume, cancel, addParameter, removeParameter,
+    saved, savedId, apiError, following,
+    fromBench, start, pause, resume, cancel, addParameter, removeParameter, loadSaved, save, open, runOnServer, stopFollowing,
   }
 })
