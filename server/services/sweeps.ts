@@ -60,11 +60,15 @@ export async function createSweep(ctx: AppContext, user: User, workspaceId: stri
   const resolved = resolveSweep(body.definition)
   if (!resolved.ok) throw errors.validation(Object.fromEntries(resolved.issues.map((i) => [`definition.${i.field}`, i.message])), 'The sweep definition is not valid')
   const planned = plannedPoints(resolved.sweep)
+  // A sweep belongs to a scenario version: the one named, else the scenario's newest.
+  let versionId = body.versionId
   if (body.scenarioId) {
     const scenario = await Scenario.findOne({ where: { id: body.scenarioId, workspaceId } })
     if (!scenario) throw errors.notFound('scenario')
-    if (body.versionId && !(await ScenarioVersion.findOne({ where: { id: body.versionId, scenarioId: scenario.id } }))) throw errors.notFound('scenario version')
-  } else if (body.versionId) throw errors.validation({ versionId: 'A version needs its scenarioId' })
+    const version = await ScenarioVersion.findOne({ where: versionId ? { id: versionId, scenarioId: scenario.id } : { scenarioId: scenario.id, number: scenario.version } })
+    if (!version) throw errors.notFound('scenario version')
+    versionId = version.id
+  } else if (versionId) throw errors.validation({ versionId: 'A version needs its scenarioId' })
 
   if (body.runner === 'browser') {
     body.points.forEach((p, i) => {
@@ -73,7 +77,7 @@ export async function createSweep(ctx: AppContext, user: User, workspaceId: stri
         throw errors.validation({ [`points.${i}`]: `point ${p.index} does not belong to this sweep (its values are ${JSON.stringify(expected)})` })
       }
     })
-    const s = await Sweep.create({ workspaceId, scenarioId: body.scenarioId, versionId: body.versionId, title: body.title, definition: body.definition, runner: 'browser', status: body.status, planned, message: body.message, createdById: user.id })
+    const s = await Sweep.create({ workspaceId, scenarioId: body.scenarioId, versionId, title: body.title, definition: body.definition, runner: 'browser', status: body.status, planned, message: body.message, createdById: user.id })
     await insertPoints(ctx, s.id, body.points)
     return summary(s, new Set(body.points.map((p) => p.index)).size)
   }
@@ -85,7 +89,7 @@ export async function createSweep(ctx: AppContext, user: User, workspaceId: stri
   if (today + planned > SWEEP_SERVER_POINTS_PER_DAY) {
     throw new ApiError(429, 'rate_limited', `This sweep's ${planned} points would take the workspace past its ${SWEEP_SERVER_POINTS_PER_DAY} server points a day (${today} used in the last 24 hours)`, undefined, 3600)
   }
-  const s = await Sweep.create({ workspaceId, scenarioId: body.scenarioId, versionId: body.versionId, title: body.title, definition: body.definition, runner: 'server', status: 'queued', planned, message: null, createdById: user.id })
+  const s = await Sweep.create({ workspaceId, scenarioId: body.scenarioId, versionId, title: body.title, definition: body.definition, runner: 'server', status: 'queued', planned, message: null, createdById: user.id })
   await ctx.sweeps.enqueue(s.id, planned)
   return summary(s, 0)
 }

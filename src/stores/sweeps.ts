@@ -44,6 +44,8 @@ export const useSweepsStore = defineStore('sweeps', () => {
   const machine = ref<Record<string, unknown>>(structuredClone(defaultMachine) as unknown as Record<string, unknown>)
   const parameters = ref<SweepParameter[]>([{ path: 'AVL', spec: '1..256' }])
   const maxPoints = ref(SWEEP_DEFAULT_MAX_POINTS)
+  /** The Bench's scenario when "Sweep this" was pressed: a saved sweep belongs to its newest version. */
+  const scenarioId = ref<string | null>(null)
 
   const status = ref<SweepStatus>('idle')
   const issues = ref<SweepDefinitionIssue[]>([])
@@ -88,7 +90,8 @@ export const useSweepsStore = defineStore('sweeps', () => {
   const parameterNames = computed(() => [...symbols.value, ...MACHINE_FIELD_PATHS])
   const arrived = computed(() => points.value.filter((p): p is SweepPointResult => p !== undefined))
 
-  function fromBench(text: string, benchMachine: object): void {
+  function fromBench(text: string, benchMachine: object, fromScenario: string | null = null): void {
+    scenarioId.value = fromScenario
     program.value = text
     // The Bench's machine is a reactive proxy, which structuredClone refuses; it is plain JSON.
     machine.value = JSON.parse(JSON.stringify(benchMachine)) as Record<string, unknown>
@@ -171,7 +174,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
     const def = definition()
     if (!def.ok || !sweep.value) return null
     const st = status.value === 'cancelled' ? 'cancelled' : status.value === 'stopped' ? 'stopped' : 'done'
-    const r = await guarded(() => auth.api.sweeps.create(workspaceId(), { title, runner: 'browser', definition: def.definition, points: arrived.value, status: st, message: message.value }))
+    const r = await guarded(() => auth.api.sweeps.create(workspaceId(), { title, runner: 'browser', definition: def.definition, scenarioId: scenarioId.value, points: arrived.value, status: st, message: message.value }))
     if (!r) return null
     savedId.value = r.sweep.id
     await loadSaved()
@@ -212,7 +215,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
       issues.value = def.issues
       return null
     }
-    const r = await guarded(() => auth.api.sweeps.create(workspaceId(), { title, runner: 'server', definition: def.definition }))
+    const r = await guarded(() => auth.api.sweeps.create(workspaceId(), { title, runner: 'server', definition: def.definition, scenarioId: scenarioId.value }))
     if (!r) return null
     await loadSaved()
     await open(r.sweep.id)
@@ -233,7 +236,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
   }
 
   return {
-    program, machine, parameters, maxPoints, status, issues, message, points, arrived, progress, sweep, firstPointMs, totalMs, symbols, parameterNames,
+    program, machine, parameters, maxPoints, scenarioId, status, issues, message, points, arrived, progress, sweep, firstPointMs, totalMs, symbols, parameterNames,
     saved, savedId, apiError, following,
     fromBench, start, pause, resume, cancel, addParameter, removeParameter, loadSaved, save, open, runOnServer, stopFollowing,
   }

@@ -11,10 +11,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { sweepDefinitionSchema, type SweepPointResult } from '../../shared/schemas/sweep'
 import { resolveSweep } from '../../shared/sweep/resolve'
 import { runSweep } from '../../shared/sweep/runSweep'
+import { ScenarioVersion } from '../../server/models'
 import type { Runtime } from '../../server/runtime'
 import { insertPoints } from '../../server/services/sweeps'
 import { startSweepWorker, type SweepWorker } from '../../server/worker-sweeps'
 import { buildUser, buildWorkspace, startTestServer, type BuiltUser } from '../server/helpers'
+import { content } from '../server/scenario-helpers'
 import { FMA_CURVE } from './programs'
 
 let runtime: Runtime
@@ -67,6 +69,16 @@ describe('server sweeps', () => {
     const got = (await api().get(`/api/workspaces/${ws}/sweeps/${id}`).set(owner.auth).expect(200)).body.sweep
     expect(got.points.map((p: SweepPointResult) => p.index)).toEqual([0, 1, 2, 3, 4])
     expect(got.points.slice(0, 3)).toEqual(sequential().slice(0, 3))
+  })
+
+  it("belongs to the scenario's newest version when saved from a scenario", async () => {
+    const scenario = (await api().post(`/api/workspaces/${ws}/scenarios`).set(editor.auth).send({ content: content() }).expect(201)).body.scenario
+    await api().post(`/api/workspaces/${ws}/scenarios/${scenario.id}/versions`).set(editor.auth).send({ baseVersion: 1, content: content({ title: 'v2' }) }).expect(201)
+    // The API names versions by number; their ids are the database's.
+    const v2 = await ScenarioVersion.findOne({ where: { scenarioId: scenario.id, number: 2 } })
+    const created = await api().post(`/api/workspaces/${ws}/sweeps`).set(editor.auth).send({ title: 'of v2', runner: 'browser', definition, scenarioId: scenario.id })
+    expect(created.status).toBe(201)
+    expect(created.body.sweep).toMatchObject({ scenarioId: scenario.id, versionId: v2?.id })
   })
 
   it('answers a bad definition with a 400 naming the field, the value and the range', async () => {
