@@ -4,7 +4,7 @@
  * Ctrl-C stops the app; `npm run db:stop` stops the database.
  * CHIMELINE_EXIT_WHEN_HEALTHY=1 exits 0 once /api/health answers ok (fresh-clone check).
  */
-import { spawnSync } from 'node:child_process'
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process'
 import { loadConfig } from '../server/config'
 import { mainCluster, projectRoot } from '../server/db/cluster'
 import { createRuntime, listen } from '../server/runtime'
@@ -46,7 +46,14 @@ async function main(): Promise<void> {
   const demo = config.seedDemo ? await seedDemoWithScenarios(runtime.ctx) : null
 
   const { server, url } = await listen(runtime)
+
+  // Sweeps: one worker process takes the server sweeps' chunks (more: `npm run worker`, here or on another machine).
+  const sweepWorkers: ChildProcess[] = Array.from({ length: Number(process.env.SWEEP_WORKERS ?? 1) }, () =>
+    spawn(process.execPath, ['--import', 'tsx', 'server/worker.ts'], { cwd: projectRoot, stdio: 'inherit', env: { ...process.env, DATABASE_URL: config.databaseUrl } }),
+  )
+
   const stop = async (code: number) => {
+    for (const w of sweepWorkers) w.kill('SIGTERM')
     server.close()
     server.closeAllConnections()
     await runtime.close()

@@ -19,6 +19,7 @@ import { meRoutes } from './routes/me'
 import { workspaceRoutes } from './routes/workspaces'
 import { docsRoutes } from './routes/docs'
 import { scenarioRoutes } from './routes/scenarios'
+import { sweepRoutes } from './routes/sweeps'
 import { shareLinkRoutes } from './routes/share-links'
 import { shareOpenRouter } from './routes/shares'
 import { uploadRoutes } from './routes/uploads'
@@ -57,6 +58,7 @@ export function buildApp(ctx: AppContext): Express {
   adminRoutes(api)
   workspaceTrashRoutes(api)
   scenarioRoutes(ctx, api)
+  sweepRoutes(ctx, api)
   shareLinkRoutes(ctx, api)
   uploadRoutes(ctx, api)
   docsRoutes(api)

@@ -6,6 +6,7 @@ import type { Mailer } from './services/mailer'
 import type { RunPool } from './services/run-pool'
 import type { WorkPool } from './services/work-pool'
 import type { ShareOpens } from './services/share-links-open'
+import type { SweepQueue } from './services/sweeps-queue'
 
 /** What routes and services need from the running server; built once in runtime.ts. */
 export interface AppContext {
@@ -21,4 +22,6 @@ export interface AppContext {
   signInGuard: SignInGuard
   /** Opens share links from an in-memory cache; counts opens and writes them every few seconds. */
   shares: ShareOpens
+  /** Queues server sweeps as chunks for the worker processes (pg-boss, started on first use). */
+  sweeps: SweepQueue
 }

@@ -1,4 +1,5 @@
 import http, { type RequestListener, type Server } from 'node:http'
+import { createSweepQueue } from './services/sweeps-queue'
 import type { AddressInfo } from 'node:net'
 import type { Sequelize } from 'sequelize'
 import { buildApp, securityHeaders } from './app'
@@ -45,7 +46,8 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   const work = createWorkPool(config.work)
   const shares = new ShareOpens(sequelize, createOpenCounter(sequelize, logger, config.shareCountFlushMs))
   const shareListener = await listenForShareLinkChanges(config.databaseUrl, shares, logger)
-  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shares }
+  const sweeps = createSweepQueue(config.databaseUrl)
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shares, sweeps }
   const app = buildApp(ctx)
   return {
     ctx,
@@ -59,6 +61,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
       mailer.close()
       await runs.close()
       await work.close()
+      await sweeps.close()
       await sink?.close()
       if (!options.sequelize) await sequelize.close()
     },

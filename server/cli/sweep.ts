@@ -13,20 +13,16 @@
  * (a program that does not assemble, say); 0 otherwise, failed points included
  * as rows with their stage and message.
  */
-import { createRequire } from 'node:module'
 import { readFileSync, writeFileSync } from 'node:fs'
-import { pathToFileURL } from 'node:url'
-import { Piscina } from 'piscina'
 import { defaultMachine } from '../../shared/schemas/machine'
-import { sweepDefinitionSchema, SWEEP_HARD_MAX_POINTS, type SweepDefinition, type SweepPointResult } from '../../shared/schemas/sweep'
+import { sweepDefinitionSchema, SWEEP_HARD_MAX_POINTS, type SweepDefinition } from '../../shared/schemas/sweep'
 import { PRESETS } from '../../shared/sim/presets'
 import { resolveSweep, type ResolvedSweep } from '../../shared/sweep/resolve'
-import { plannedPoints, pointsLimitMessage, timeLimitMessage } from '../../shared/sweep/runSweep'
 import { toSweepCsv } from '../../shared/sweep/csv'
 import { ESTIMATE_NOTE } from '../../shared/sim/trace/summary'
 import { applySets, mergeMachine, UsageError } from './simArgs'
 import { parseSweepArgs, type SweepArgs } from './sweepArgs'
-import type { SweepChunkTask } from './sweepWorker'
+import { runOnThreads } from './sweepThreads'
 
 /** A program or model error: exit code 1. */
 class SweepFailure extends Error {}
@@ -77,35 +73,6 @@ export function definitionFromArgs(args: SweepArgs): { definition: SweepDefiniti
   const resolved = resolveSweep(parsed.data)
   if (!resolved.ok) throw new UsageError(resolved.issues.map((i) => i.message).join('; '))
   return { definition: parsed.data, sweep: resolved.sweep }
-}
-
-/** Point indexes in chunks dealt round-robin, so that the threads get similar mixes of a grid. */
-function chunks(count: number, workers: number): number[][] {
-  const size = Math.max(1, Math.min(32, Math.ceil(count / (workers * 8))))
-  const out: number[][] = []
-  for (let start = 0; start < count; start += size) out.push(Array.from({ length: Math.min(size, count - start) }, (_, k) => start + k))
-  return out
-}
-
-const tsxLoader = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href
-
-export async function runOnThreads(definition: SweepDefinition, sweep: ResolvedSweep, workers: number): Promise<{ points: SweepPointResult[]; stopped: string | null }> {
-  const planned = plannedPoints(sweep)
-  const pool = new Piscina<SweepChunkTask, SweepPointResult[]>({
-    filename: new URL('./sweepWorker.ts', import.meta.url).href,
-    minThreads: Math.min(workers, planned),
-    maxThreads: Math.min(workers, planned),
-    execArgv: ['--import', tsxLoader],
-  })
-  const deadline = Date.now() + sweep.limits.timeLimitMs
-  try {
-    const parts = await Promise.all(chunks(planned, workers).map((indexes) => pool.run({ definition, indexes, deadline })))
-    const points = parts.flat().sort((a, b) => a.index - b.index)
-    const stopped = points.length < planned ? timeLimitMessage(sweep, points.length) : pointsLimitMessage(sweep)
-    return { points, stopped }
-  } finally {
-    await pool.destroy()
-  }
 }
 
 export async function main(argv: string[]): Promise<number> {

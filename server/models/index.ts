@@ -8,16 +8,17 @@ import { RefreshToken } from './refresh-token'
 import { Scenario } from './scenario'
 import { ScenarioVersion } from './scenario-version'
 import { ShareLink } from './share-link'
+import { Sweep } from './sweep'
 import { Upload } from './upload'
 import { User } from './user'
 import { UserSession } from './user-session'
 import { Workspace } from './workspace'
 
-export { Invitation, MailSend, Membership, OutboxMessage, PasswordReset, RefreshToken, Scenario, ScenarioVersion, ShareLink, Upload, User, UserSession, Workspace }
+export { Invitation, MailSend, Membership, OutboxMessage, PasswordReset, RefreshToken, Scenario, ScenarioVersion, ShareLink, Sweep, Upload, User, UserSession, Workspace }
 
 /** Binds every model to the connection and declares the associations. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage, Upload, Scenario, ScenarioVersion, ShareLink, UserSession, MailSend]) {
+  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage, Upload, Scenario, ScenarioVersion, ShareLink, UserSession, MailSend, Sweep]) {
     model.initModel(sequelize)
   }
   Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' })

@@ -105,3 +105,46 @@ export const SWEEP_FIGURE_COLUMNS = [
   'laneBusyMin',
   ...STALL_REASONS.map((r) => `stall.${r}` as const),
 ] as const
+
+/** Where a saved sweep ran: in the browser (saved with its points) or on the server's workers. */
+export const SWEEP_RUNNERS = ['browser', 'server'] as const
+export const SWEEP_STATUSES = ['queued', 'running', 'done', 'cancelled', 'stopped'] as const
+export type SweepRunStatus = (typeof SWEEP_STATUSES)[number]
+/** Points a workspace's server sweeps may run a day, and its sweeps queued or running at once. */
+export const SWEEP_SERVER_POINTS_PER_DAY = 200_000
+export const SWEEP_SERVER_CONCURRENT = 2
+
+export const createSweepBodySchema = z
+  .object({
+    title: z.string().trim().min(1, 'A title is required').max(200, 'A title has at most 200 characters'),
+    definition: sweepDefinitionSchema,
+    runner: z.enum(SWEEP_RUNNERS, { error: `The runner is one of ${SWEEP_RUNNERS.join(', ')}` }),
+    /** The scenario version the sweep belongs to, if any. */
+    scenarioId: z.uuid().nullable().default(null),
+    versionId: z.uuid().nullable().default(null),
+    /** A browser sweep's results (at most its points). */
+    points: z.array(sweepPointResultSchema).max(SWEEP_DEFAULT_MAX_POINTS).default([]),
+    status: z.enum(['done', 'cancelled', 'stopped']).default('done'),
+    message: z.string().max(1000).nullable().default(null),
+  })
+  .strict()
+export type CreateSweepBody = z.output<typeof createSweepBodySchema>
+
+export const sweepSummarySchema = z.object({
+  id: z.uuid(),
+  title: z.string(),
+  runner: z.enum(SWEEP_RUNNERS),
+  status: z.enum(SWEEP_STATUSES),
+  planned: z.number().int(),
+  done: z.number().int(),
+  message: z.string().nullable(),
+  scenarioId: z.uuid().nullable(),
+  versionId: z.uuid().nullable(),
+  parameters: z.array(sweepParameterSchema),
+  createdAt: z.string(),
+})
+export type SweepSummary = z.output<typeof sweepSummarySchema>
+
+export const sweepListResponseSchema = z.object({ sweeps: z.array(sweepSummarySchema) })
+export const sweepResponseSchema = z.object({ sweep: sweepSummarySchema.extend({ definition: sweepDefinitionSchema, points: z.array(sweepPointResultSchema) }) })
+export const sweepCreatedResponseSchema = z.object({ sweep: sweepSummarySchema })

@@ -3,19 +3,22 @@
  * figures. A point whose run fails (machine, assembly, execution, a cycle
  * limit) is a result with the stage and message, never an abort of the sweep.
  *
- * A PointRunner keeps the programs it assembled, keyed by text: a swept
- * machine field leaves the text as it is, so the program is assembled once.
+ * A PointRunner assembles and executes each distinct (program text, VLEN)
+ * once (prepareRun) and re-times the prepared stream for every machine
+ * (timePrepared): a swept machine field other than vlen never executes again.
+ * It keeps the last PREPARED_CACHE preparations; points come in index order,
+ * the first parameter slowest, so a small cache serves a whole grid.
  */
+import { checkMachine } from '../schemas/machine'
 import type { SweepPointResult, SweepValue } from '../schemas/sweep'
-import { assemble } from '../sim/isa/assembler'
-import type { Program } from '../sim/isa/types'
-import { runPipeline, type RunError } from '../sim/run'
+import { prepareRun, timePrepared, type PrepareResult, type RunError } from '../sim/run'
 import { figuresOf } from './figures'
 import { inlineSymbols } from './inlineSymbols'
 import { pointInput, pointValues, type ResolvedSweep } from './resolve'
 import { withSymbols } from './symbols'
 
-type Assembled = { ok: true; program: Program } | { ok: false; error: RunError }
+/** Preparations kept by a runner (each holds one dynamic stream). */
+export const PREPARED_CACHE = 64
 
 const errorOf = (e: RunError): SweepPointResult['error'] => {
   const d = e.diagnostics?.[0]
@@ -29,29 +32,31 @@ export function pointProgram(sweep: ResolvedSweep, values: readonly SweepValue[]
 }
 
 export function createPointRunner(sweep: ResolvedSweep) {
-  const programs = new Map<string, Assembled>()
-  const assembled = (text: string): Assembled => {
-    let a = programs.get(text)
-    if (!a) {
-      const r = assemble(inlineSymbols(text))
-      const first = r.ok ? undefined : r.errors[0]
-      a = r.ok
-        ? { ok: true, program: r.program }
-        : { ok: false, error: { stage: 'assemble', code: first?.code ?? 'assemble', message: first?.message ?? 'the program does not assemble', diagnostics: r.errors } }
-      programs.set(text, a)
+  const prepared = new Map<string, PrepareResult>()
+  const prepare = (text: string, vlen: number): PrepareResult => {
+    const key = `${vlen}\n${text}`
+    let p = prepared.get(key)
+    if (p) {
+      prepared.delete(key) // re-inserted below: the Map's order is the use order
+    } else {
+      p = prepareRun({ program: inlineSymbols(text) }, { vlen })
+      if (prepared.size >= PREPARED_CACHE) prepared.delete(prepared.keys().next().value as string)
     }
-    return a
+    prepared.set(key, p)
+    return p
   }
 
   return {
     run(index: number): SweepPointResult {
       const values = pointValues(sweep, index)
-      const { machine } = pointInput(sweep, values)
-      const text = pointProgram(sweep, values)
-      const program = assembled(text)
       const failed = (e: RunError): SweepPointResult => ({ index, values, status: 'failed', figures: null, error: errorOf(e) })
-      if (!program.ok) return failed(program.error)
-      const r = runPipeline({ program: program.program, machine }, { timing: { cycleLimit: sweep.limits.cycleLimit, recordUsage: false } })
+      const machine = checkMachine(pointInput(sweep, values).machine)
+      if (!machine.ok) {
+        return failed({ stage: 'machine', code: 'invalid-machine', message: machine.issues.map((i) => `${i.field}: ${i.message}`).join('; ') })
+      }
+      const p = prepare(pointProgram(sweep, values), machine.machine.vlen)
+      if (!p.ok) return failed(p.error)
+      const r = timePrepared(p.prepared, machine.machine, { timing: { cycleLimit: sweep.limits.cycleLimit, recordUsage: false } })
       if (!r.ok) return failed(r.error)
       return { index, values, status: 'ok', figures: figuresOf(r.trace.metrics), error: null }
     },

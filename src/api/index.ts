@@ -4,6 +4,7 @@ import { createHttp, type HttpOptions } from './http'
 import { createMembersApi } from './members'
 import { createScenarioApi } from './scenarios'
 import { createShareApi } from './shares'
+import { createSweepApi } from './sweeps'
 import { createUploadApi } from './uploads'
 import { createWorkspaceApi } from './workspaces'
 
@@ -21,6 +22,7 @@ export function createApi(options: HttpOptions = {}) {
     scenarios: createScenarioApi(http),
     shares: createShareApi(http),
     uploads: createUploadApi(http),
+    sweeps: createSweepApi(http),
   }
 }
 

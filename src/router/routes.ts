@@ -50,6 +50,13 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Sweeps', requiresAuth: true },
   },
   {
+    path: '/sweeps/:id',
+    name: 'sweep',
+    component: () => import('@/views/SweepsView.vue'),
+    props: true,
+    meta: { title: 'Sweep', requiresAuth: true },
+  },
+  {
     path: '/learn',
     name: 'learn',
     component: () => import('@/views/LearnView.vue'),

@@ -1,0 +1,63 @@
+/**
+ * `npm run bench:sweep`: the sweeps of issue 16 on this machine, in Node.
+ *   - the vl curve: 64 vfmacc.vv at e64, AVL = 1..256 x issue = serial,staggered (512 points);
+ *   - the accumulator curve: one vfredusum.vs, AVL = 8..256:8 x reductionAccumulators = 1,2,4,8 (128 points);
+ *   - the heavy grid: the 1,000-instruction long stream, AVL = 8..256:8 x the three issue policies (96 points).
+ * Each runs on one thread in this process (the yardstick: lane-cycles per
+ * second of the single-thread engine, measured in the same run), then on 1
+ * and 2 worker threads as the CLI runs it. Parallel efficiency = lane-cycles
+ * per second per worker / the single-thread rate. Figures vary with the load
+ * of the shared machine (printed); the ratios measured in one run less so.
+ * The threads' figures must equal the single thread's, point by point.
+ */
+import { loadavg } from 'node:os'
+import { isDeepStrictEqual } from 'node:util'
+import { defaultMachine } from '../../shared/schemas/machine'
+import { sweepDefinitionSchema, type SweepDefinition, type SweepPointResult } from '../../shared/schemas/sweep'
+import { resolveSweep, type ResolvedSweep } from '../../shared/sweep/resolve'
+import { runSweep } from '../../shared/sweep/runSweep'
+import { runOnThreads } from '../../server/cli/sweepThreads'
+import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
+import { longStream } from './programs'
+
+/** The long stream with its vector length as a swept symbol (examples/long-stream.s sets it with li a0, 256). */
+const LONG_STREAM_AVL = longStream().replace('li      a0, 256\n', '.equ    AVL, 256\n    li      a0, AVL\n')
+
+const GRIDS: { name: string; definition: SweepDefinition }[] = [
+  { name: 'vl curve (512 points)', definition: sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'AVL', spec: '1..256' }, { path: 'issue', spec: 'serial,staggered' }] }) },
+  { name: 'accumulator curve (128 points)', definition: sweepDefinitionSchema.parse({ program: REDUCTION_CURVE, parameters: [{ path: 'AVL', spec: '8..256:8' }, { path: 'reductionAccumulators', spec: '1,2,4,8' }] }) },
+  { name: 'heavy grid (96 points)', definition: sweepDefinitionSchema.parse({ program: LONG_STREAM_AVL, parameters: [{ path: 'AVL', spec: '8..256:8' }, { path: 'issue', spec: 'serial,lockstep,staggered' }] }) },
+]
+
+const laneCycles = (points: SweepPointResult[]) => points.reduce((n, p) => n + (p.figures?.cycles ?? 0) * defaultMachine.lanes, 0)
+const fmt = (x: number, d = 2) => x.toFixed(d)
+
+function resolve(d: SweepDefinition): ResolvedSweep {
+  const r = resolveSweep(d)
+  if (!r.ok) throw new Error(r.issues.map((i) => i.message).join('; '))
+  return r.sweep
+}
+
+const loadBefore = loadavg()[0] ?? 0
+console.log('| sweep | runner | wall s | first point ms | points/s | lane-cycles/s per worker | efficiency |')
+console.log('| --- | --- | ---: | ---: | ---: | ---: | ---: |')
+for (const g of GRIDS) {
+  const sweep = resolve(g.definition)
+  let first: number | null = null
+  const t0 = performance.now()
+  const single = runSweep(sweep, { onPoint: () => (first ??= performance.now() - t0) })
+  const singleS = (performance.now() - t0) / 1000
+  const failed = single.points.filter((p) => p.status !== 'ok')
+  if (failed.length) throw new Error(`${g.name}: ${failed.length} points failed, e.g. ${failed[0]?.error?.message}`)
+  const rate = laneCycles(single.points) / singleS
+  console.log(`| ${g.name} | 1 thread in process | ${fmt(singleS)} | ${fmt(first ?? 0, 0)} | ${fmt(single.points.length / singleS, 1)} | ${fmt(rate / 1e6)} M | 1 |`)
+  for (const workers of [1, 2]) {
+    const t1 = performance.now()
+    const threaded = await runOnThreads(g.definition, sweep, workers)
+    const s = (performance.now() - t1) / 1000
+    if (!isDeepStrictEqual(threaded.points, single.points)) throw new Error(`${g.name}: the ${workers}-thread figures differ from the single thread's`)
+    const perWorker = laneCycles(threaded.points) / s / workers
+    console.log(`| ${g.name} | ${workers} worker thread${workers > 1 ? 's' : ''} | ${fmt(s)} | | ${fmt(threaded.points.length / s, 1)} | ${fmt(perWorker / 1e6)} M | ${fmt(perWorker / rate)} |`)
+  }
+}
+console.log(`\nload average (1 min): ${fmt(loadBefore)} before, ${fmt(loadavg()[0] ?? 0)} after; worker threads include their start-up (tsx loader, ~1 s)`)

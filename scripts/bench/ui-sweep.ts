@@ -1,0 +1,74 @@
+/**
+ * `npm run bench:sweep:browser`: the sweeps of `npm run bench:sweep` on the
+ * browser's Worker pool, in Debian's Chromium (headless): wall time from Run
+ * sweep to the last point, time to the first point, points a second, and the
+ * Workers the pool started (one per core the browser reports). It builds the
+ * client, starts the test server (scripts/serve-test.ts) on CHIMELINE_E2E_PORT
+ * (default 3190), signs in as the demo editor and runs each sweep from the
+ * Sweeps page. Not a timed test: it prints the figures.
+ */
+import { spawn } from 'node:child_process'
+import { loadavg } from 'node:os'
+import { chromium } from '@playwright/test'
+import { build } from 'vite'
+import { DEMO, DEMO_PASSWORD } from '../../e2e/helpers/auth'
+import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
+import { longStream } from './programs'
+
+const port = Number(process.env.CHIMELINE_E2E_PORT ?? 3190)
+const base = `http://127.0.0.1:${port}`
+const LONG_STREAM_AVL = longStream().replace('li      a0, 256\n', '.equ    AVL, 256\n    li      a0, AVL\n')
+const SWEEPS = [
+  { name: 'vl curve (512 points)', program: FMA_CURVE, params: [['AVL', '1..256'], ['issue', 'serial,staggered']], points: 512 },
+  { name: 'accumulator curve (128 points)', program: REDUCTION_CURVE, params: [['AVL', '8..256:8'], ['reductionAccumulators', '1,2,4,8']], points: 128 },
+  { name: 'heavy grid (96 points)', program: LONG_STREAM_AVL, params: [['AVL', '8..256:8'], ['issue', 'serial,lockstep,staggered']], points: 96 },
+]
+
+async function waitForHealth(ms: number) {
+  const end = Date.now() + ms
+  while (Date.now() < end) {
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) return
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 300))
+  }
+  throw new Error(`the test server did not answer on ${base} within ${ms} ms`)
+}
+
+await build({ logLevel: 'warn' })
+const server = spawn('node_modules/.bin/tsx', ['scripts/serve-test.ts'], { env: { ...process.env, CHIMELINE_E2E_PORT: String(port) }, stdio: ['ignore', 'ignore', 'inherit'], detached: true })
+try {
+  await waitForHealth(60_000)
+  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'] })
+  const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } })
+  await page.goto(`${base}/signin`)
+  await page.getByLabel('E-mail').fill(DEMO.editor)
+  await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD)
+  await page.getByRole('button', { name: 'Sign in' }).click()
+  await page.getByTestId('user-menu').waitFor({ timeout: 60_000 })
+  const cores = await page.evaluate(() => navigator.hardwareConcurrency)
+  const loadBefore = loadavg()[0] ?? 0
+  console.log(`| sweep | Workers | wall s | first point ms | points/s |`)
+  console.log(`| --- | ---: | ---: | ---: | ---: |`)
+  for (const s of SWEEPS) {
+    await page.goto(`${base}/sweeps`)
+    await page.getByTestId('sweep-program').locator('textarea').fill(s.program)
+    for (const [k, [path, spec]] of s.params.entries()) {
+      if ((await page.getByLabel(`Parameter ${k + 1}: machine field or symbol`).count()) === 0) await page.getByRole('button', { name: 'Add a parameter' }).click()
+      await page.getByLabel(`Parameter ${k + 1}: machine field or symbol`).fill(path as string)
+      await page.getByLabel(`Values of parameter ${k + 1}`).fill(spec as string)
+    }
+    await page.getByTestId('sweep-run').click()
+    const results = page.getByTestId('sweep-results')
+    await page.waitForFunction(() => document.querySelector('[data-testid="sweep-results"]')?.getAttribute('data-total-ms'), null, { timeout: 600_000 })
+    const total = Number(await results.getAttribute('data-total-ms'))
+    const first = Number(await results.getAttribute('data-first-ms'))
+    console.log(`| ${s.name} | ${Math.min(cores, s.points)} | ${(total / 1000).toFixed(2)} | ${first.toFixed(0)} | ${((s.points * 1000) / total).toFixed(1)} |`)
+  }
+  console.log(`\nload average (1 min): ${loadBefore.toFixed(2)} before, ${(loadavg()[0] ?? 0).toFixed(2)} after`)
+  await browser.close()
+} finally {
+  if (server.pid) process.kill(-server.pid, 'SIGTERM')
+}

@@ -1,0 +1,42 @@
+/**
+ * Runs a sweep on worker threads (piscina, sweepWorker.ts): the points in
+ * chunks, all chunks queued at once so that a free thread takes the next.
+ * Used by the CLI and by `npm run bench:sweep`.
+ */
+import { createRequire } from 'node:module'
+import { pathToFileURL } from 'node:url'
+import { Piscina } from 'piscina'
+import type { SweepDefinition, SweepPointResult } from '../../shared/schemas/sweep'
+import type { ResolvedSweep } from '../../shared/sweep/resolve'
+import { plannedPoints, pointsLimitMessage, timeLimitMessage } from '../../shared/sweep/runSweep'
+import type { SweepChunkTask } from './sweepWorker'
+
+/** Point indexes in chunks dealt round-robin, so that the threads get similar mixes of a grid. */
+function chunks(count: number, workers: number): number[][] {
+  const size = Math.max(1, Math.min(32, Math.ceil(count / (workers * 8))))
+  const out: number[][] = []
+  for (let start = 0; start < count; start += size) out.push(Array.from({ length: Math.min(size, count - start) }, (_, k) => start + k))
+  return out
+}
+
+const tsxLoader = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href
+
+export async function runOnThreads(definition: SweepDefinition, sweep: ResolvedSweep, workers: number): Promise<{ points: SweepPointResult[]; stopped: string | null }> {
+  const planned = plannedPoints(sweep)
+  const pool = new Piscina<SweepChunkTask, SweepPointResult[]>({
+    filename: new URL('./sweepWorker.ts', import.meta.url).href,
+    minThreads: Math.min(workers, planned),
+    maxThreads: Math.min(workers, planned),
+    execArgv: ['--import', tsxLoader],
+  })
+  const deadline = Date.now() + sweep.limits.timeLimitMs
+  try {
+    const parts = await Promise.all(chunks(planned, workers).map((indexes) => pool.run({ definition, indexes, deadline })))
+    const points = parts.flat().sort((a, b) => a.index - b.index)
+    const stopped = points.length < planned ? timeLimitMessage(sweep, points.length) : pointsLimitMessage(sweep)
+    return { points, stopped }
+  } finally {
+    await pool.destroy()
+  }
+}
+

@@ -1,0 +1,73 @@
+/**
+ * A sweep worker: takes chunks of server sweeps from the pg-boss queue, runs
+ * their points with the shared point runner and writes each point once
+ * (ON CONFLICT DO NOTHING), so a chunk retried after a worker died adds
+ * nothing twice. A cancelled sweep's remaining chunks are dropped; a sweep
+ * past its time limit is stopped with a message; the last point marks it done.
+ */
+import type PgBoss from 'pg-boss'
+import type { Logger } from 'pino'
+import { QueryTypes, type Sequelize } from 'sequelize'
+import { resolveSweep } from '../shared/sweep/resolve'
+import { createPointRunner } from '../shared/sweep/runPoint'
+import { Sweep } from './models'
+import { SWEEP_QUEUE, startBoss, type SweepChunkJob } from './services/sweeps-queue'
+import { insertPoints } from './services/sweeps'
+
+/** How often a running chunk looks at its sweep's status (a cancel). */
+const STATUS_CHECK_MS = 1000
+
+export interface SweepWorker {
+  stop(): Promise<void>
+}
+
+async function runChunk(sequelize: Sequelize, runners: Map<string, ReturnType<typeof createPointRunner>>, job: SweepChunkJob, logger: Logger): Promise<void> {
+  let sweep = await Sweep.findByPk(job.sweepId)
+  if (!sweep || sweep.status === 'cancelled' || sweep.status === 'stopped') return
+  if (sweep.status === 'queued') await Sweep.update({ status: 'running' }, { where: { id: sweep.id, status: 'queued' } })
+  let runner = runners.get(sweep.id)
+  if (!runner) {
+    const resolved = resolveSweep(sweep.definition)
+    if (!resolved.ok) {
+      await sweep.update({ status: 'stopped', message: resolved.issues.map((i) => i.message).join('; ') })
+      return
+    }
+    runner = createPointRunner(resolved.sweep)
+    // One sweep's programs at a time per worker: chunks of one sweep come together.
+    runners.clear()
+    runners.set(sweep.id, runner)
+  }
+  const limitMs = sweep.definition.limits.timeLimitMs
+  let checked = Date.now()
+  for (const index of job.indexes) {
+    if (Date.now() - checked > STATUS_CHECK_MS) {
+      checked = Date.now()
+      sweep = await Sweep.findByPk(job.sweepId)
+      if (!sweep || sweep.status !== 'running') return
+    }
+    if (Date.now() - sweep.createdAt.getTime() > limitMs) {
+      await Sweep.update({ status: 'stopped', message: `the sweep reached its time limit of ${limitMs / 1000} s (counted from when it was queued); the points done are kept` }, { where: { id: job.sweepId, status: 'running' } })
+      return
+    }
+    await insertPoints({ sequelize }, job.sweepId, [runner.run(index)])
+  }
+  const [row] = await sequelize.query<{ n: string }>('SELECT count(*) AS n FROM sweep_points WHERE sweep_id = :id', { replacements: { id: job.sweepId }, type: QueryTypes.SELECT })
+  if (Number(row?.n ?? 0) >= sweep.planned) {
+    await Sweep.update({ status: 'done' }, { where: { id: job.sweepId, status: 'running' } })
+    logger.info({ sweep: job.sweepId, points: sweep.planned }, 'sweep done')
+  }
+}
+
+/** Starts taking chunks; the models must be bound to `sequelize` (connect()). */
+export async function startSweepWorker(options: { databaseUrl: string; sequelize: Sequelize; logger: Logger }): Promise<SweepWorker> {
+  const boss: PgBoss = await startBoss(options.databaseUrl)
+  const runners = new Map<string, ReturnType<typeof createPointRunner>>()
+  await boss.work<SweepChunkJob>(SWEEP_QUEUE, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async (jobs) => {
+    for (const job of jobs) await runChunk(options.sequelize, runners, job.data, options.logger)
+  })
+  return {
+    async stop() {
+      await boss.stop({ graceful: true, wait: true, timeout: 10_000 })
+    },
+  }
+}

@@ -1,0 +1,120 @@
+/**
+ * Runs a sweep on a pool of point runners (Comlink-wrapped Workers in the
+ * app, in-process services in tests): each runner takes the next point index
+ * as soon as it is free, so results stream back as they finish, in whatever
+ * order. Pause stops handing out points (those running finish), resume goes
+ * on, cancel ends the sweep keeping the points done. The time limit counts
+ * running time only, not time paused.
+ */
+import type { SweepDefinition, SweepPointResult } from '@shared/schemas/sweep'
+import type { SweepDefinitionIssue } from '@shared/sweep/resolve'
+
+/** One runner of the pool: what src/workers/sweepService.ts exposes. */
+export interface PointRunnerPort {
+  load(definition: SweepDefinition): Promise<SweepDefinitionIssue[] | null> | SweepDefinitionIssue[] | null
+  run(index: number): Promise<SweepPointResult> | SweepPointResult
+}
+
+export interface SweepProgress {
+  done: number
+  planned: number
+  /** Milliseconds of running time (pauses excluded). */
+  elapsedMs: number
+  /** Points a second so far, and the estimated milliseconds left (null before the first point). */
+  rate: number | null
+  remainingMs: number | null
+}
+
+export type SweepEnd = { reason: 'done' | 'cancelled' | 'time-limit'; message: string | null }
+
+export interface SweepPoolRun {
+  pause(): void
+  resume(): void
+  cancel(): void
+  readonly paused: boolean
+  /** Settles when every runner has stopped. */
+  finished: Promise<SweepEnd>
+}
+
+export interface SweepPoolCallbacks {
+  onPoint(point: SweepPointResult, progress: SweepProgress): void
+}
+
+export interface SweepPoolOptions {
+  planned: number
+  timeLimitMs: number
+  now?: () => number
+}
+
+export async function loadPool(runners: PointRunnerPort[], definition: SweepDefinition): Promise<SweepDefinitionIssue[] | null> {
+  const answers = await Promise.all(runners.map((r) => r.load(definition)))
+  return answers[0] ?? null
+}
+
+export function runPool(runners: PointRunnerPort[], options: SweepPoolOptions, callbacks: SweepPoolCallbacks): SweepPoolRun {
+  const now = options.now ?? (() => performance.now())
+  let next = 0
+  let done = 0
+  let paused = false
+  let stop: SweepEnd | null = null
+  let runningSince: number | null = now()
+  let elapsedBefore = 0
+  let wake: (() => void)[] = []
+
+  const elapsed = () => elapsedBefore + (runningSince === null ? 0 : now() - runningSince)
+  const progress = (): SweepProgress => {
+    const ms = elapsed()
+    const rate = done > 0 && ms > 0 ? (done * 1000) / ms : null
+    return { done, planned: options.planned, elapsedMs: ms, rate, remainingMs: rate ? ((options.planned - done) * 1000) / rate : null }
+  }
+
+  async function lane(runner: PointRunnerPort): Promise<void> {
+    for (;;) {
+      while (paused && !stop) await new Promise<void>((resolve) => wake.push(resolve))
+      if (stop || next >= options.planned) return
+      if (elapsed() > options.timeLimitMs) {
+        stop ??= { reason: 'time-limit', message: `the sweep reached its time limit of ${options.timeLimitMs / 1000} s after ${done} of ${options.planned} points; the points done are kept` }
+        return
+      }
+      const index = next++
+      const point = await runner.run(index)
+      done++
+      callbacks.onPoint(point, progress())
+    }
+  }
+
+  const wakeAll = () => {
+    const w = wake
+    wake = []
+    for (const f of w) f()
+  }
+
+  const finished = Promise.all(runners.map(lane)).then((): SweepEnd => {
+    if (runningSince !== null) elapsedBefore = elapsed()
+    runningSince = null
+    return stop ?? { reason: 'done', message: null }
+  })
+
+  return {
+    pause() {
+      if (paused || stop) return
+      paused = true
+      elapsedBefore = elapsed()
+      runningSince = null
+    },
+    resume() {
+      if (!paused) return
+      paused = false
+      runningSince = now()
+      wakeAll()
+    },
+    cancel() {
+      stop ??= { reason: 'cancelled', message: `cancelled after ${done} of ${options.planned} points; the points done are kept` }
+      wakeAll()
+    },
+    get paused() {
+      return paused
+    },
+    finished,
+  }
+}
