@@ -24,7 +24,7 @@ afterAll(async () => {
 
 const cycles = { kind: 'metric', metric: 'cycles', op: '<=', value: 120 } as const
 const bank = { kind: 'stall', reason: 'bank', op: '==', value: 0 } as const
-const res = { kind: 'memory', label: 'y', type: 'f64', values: ['12', '24'] } as const
+const res = { kind: 'memory' as const, label: 'y', type: 'f64' as const, values: ['12', '24'] }
 
 describe('expectations on scenarios', () => {
   it('keeps them on the scenario and its versions, lists their changes in the diff and exports them', async () => {
@@ -53,7 +53,7 @@ describe('expectations on scenarios', () => {
     const many = await request(runtime.app).post(base).set(team.editor.auth).send({ content: content({ expectations: Array(EXPECTATIONS_MAX + 1).fill(cycles) }) })
     expect(many.status).toBe(400)
     expect(JSON.stringify(many.body.error)).toContain(`At most ${EXPECTATIONS_MAX} expectations per scenario`)
-    const bad = await request(runtime.app).post(base).set(team.editor.auth).send({ content: content({ expectations: [{ ...cycles, op: '=<' }] }) })
+    const bad = await request(runtime.app).post(base).set(team.editor.auth).send({ content: { ...content(), expectations: [{ ...cycles, op: '=<' }] } })
     expect(bad.status).toBe(400)
     expect(JSON.stringify(bad.body.error)).toContain('content.expectations.0.op')
   })
