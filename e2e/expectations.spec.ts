@@ -2,18 +2,24 @@
  * Expectations on the Bench (issue 13): a verification engineer adds three
  * claims to saxpy, sees them pass, changes the machine and sees the cycles
  * claim fail with the cycle that decides it; the button moves the cursor
- * there. Expected values: cycles from the same pipeline in Node
+ * there. Saved, the scenario comes back with its claims, and its export
+ * checked by `chimeline check` in a shell gives the same verdicts. Expected values: cycles from the same pipeline in Node
  * (shared/sim/run.ts), flops and the memory values by hand from the example
  * (y = 2.5 x + y on 19 floats: one vfmacc strip, 2 x 19 = 38 flops;
  * y[0..2] = 2.5 + 0.5, 5 + 0.5, 7.5 + 0.5 = 3, 5.5, 8, exact in binary32).
  */
-import { readFileSync } from 'node:fs'
+import { spawnSync } from 'node:child_process'
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
 import { expect, test, type Page } from '@playwright/test'
 import { evaluateExpectations } from '../shared/expectations/evaluate'
 import { parseMachine } from '../shared/schemas/machine'
 import { DEFAULT_PRESET_ID, PRESETS } from '../shared/sim/presets'
 import { runPipeline } from '../shared/sim/run'
+import { accessToken, workspaceId } from './helpers/api'
 import { DEMO, signIn, watchConsole } from './helpers/auth'
+import { scenarioApi } from './helpers/scenario-api'
 import { screenshot } from './helpers/screenshots'
 
 // The Bench starts on the default preset (the handbook defaults).
@@ -33,8 +39,8 @@ async function choose(page: Page, testId: string, option: string) {
   await page.locator('.n-base-select-option', { hasText: new RegExp(`^${option.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`) }).first().click()
 }
 
-test('add three expectations, see them pass, change the machine and follow the failing one to its cycle', async ({ page }) => {
-  test.setTimeout(180_000)
+test('add three expectations, see them pass, change the machine, follow the failing one to its cycle, and get the same verdicts from chimeline check on the export', async ({ page, request }) => {
+  test.setTimeout(240_000)
   const problems = watchConsole(page)
   await signIn(page, DEMO.editor)
   await expect(page.getByTestId('lane-chart')).toBeVisible({ timeout: 60_000 })
@@ -93,5 +99,31 @@ test('add three expectations, see them pass, change the machine and follow the f
   await go.click()
   await expect(page.getByTestId('cursor-cycle')).toContainText(`cycle ${at.cycle} /`)
   await screenshot(page, 'expectations-fail')
+
+  // Saved as a scenario, the claims come back with it.
+  const title = `Saxpy expectations ${Date.now()}`
+  await page.getByTestId('scenario-toolbar').getByRole('button', { name: 'Save as…' }).click()
+  await page.getByLabel('Title').fill(title)
+  await page.getByRole('button', { name: 'Save', exact: true }).last().click()
+  await expect(page.getByTestId('scenario-title')).toHaveText(title)
+  const id = new URL(page.url()).searchParams.get('scenario')!
+  await page.goto(`/bench?scenario=${id}`)
+  await expect(rows).toHaveCount(3)
+  await expect(rows.nth(0)).toHaveAttribute('data-status', 'fail', { timeout: 60_000 })
+  await expect(rows.nth(0).getByTestId('measured')).toHaveText(String(four.trace.cycles))
+
+  // Exported, the command line a team's CI runs gives the same verdicts.
+  const token = await accessToken(request, DEMO.editor)
+  const bundle = await scenarioApi(request, token, await workspaceId(request, token)).exportBundle([id])
+  const file = join(mkdtempSync(join(tmpdir(), 'chimeline-e2e-')), 'saxpy.chimeline.json')
+  writeFileSync(file, JSON.stringify(bundle, null, 2))
+  const cli = spawnSync(process.execPath, ['bin/chimeline.js', 'check', file], { encoding: 'utf8', timeout: 120_000 })
+  expect(cli.stderr).toBe('')
+  expect(cli.status).toBe(1)
+  expect(cli.stdout.trimEnd().split('\n').slice(0, 3)).toEqual([
+    `FAIL  ${title} › cycles <= ${eight.trace.cycles} (measured ${four.trace.cycles}; cycle ${at.cycle}, lane ${at.lane}, instruction ${at.instruction})`,
+    `PASS  ${title} › flops == 38 (measured 38)`,
+    `PASS  ${title} › memory at label y (f32 x 3) equals [3, 5.5, 8] (measured [3, 5.5, 8])`,
+  ])
   expect(problems).toEqual([])
 })

@@ -6,7 +6,7 @@
  * assemble or a machine with an invalid field is a failed run for "run fails
  * at stage ..." claims, though the Bench does not send it to the Worker).
  */
-import { computed, ref } from 'vue'
+import { computed, shallowRef } from 'vue'
 import { defineStore } from 'pinia'
 import { evaluateExpectations, type ExpectationRun } from '@shared/expectations/evaluate'
 import { EXPECTATIONS_MAX, expectationListSchema, type Expectation, type ExpectationResult } from '@shared/schemas/expectation'
@@ -14,7 +14,8 @@ import { useBenchStore } from './bench'
 
 export const useExpectationsStore = defineStore('expectations', () => {
   const bench = useBenchStore()
-  const list = ref<Expectation[]>([])
+  // Replaced, never changed in place: plain objects that content snapshots can structuredClone.
+  const list = shallowRef<Expectation[]>([])
 
   /** What the claims are checked against, or null before the first run. */
   const run = computed<ExpectationRun | null>(() => {
