@@ -9,6 +9,7 @@ import type { Runtime } from '../../server/runtime'
 import { bundleSchema } from '../../shared/schemas/bundle'
 import { EXPECTATIONS_MAX } from '../../shared/schemas/expectation'
 import { scenarioContentSchema, scenarioResponseSchema, versionDiffResponseSchema } from '../../shared/schemas/scenario'
+import { createShareLinkResponseSchema, sharedScenarioResponseSchema } from '../../shared/schemas/share-link'
 import { startTestServer } from '../server/helpers'
 import { buildScenario, buildTeam, content, type Team } from '../server/scenario-helpers'
 
@@ -46,6 +47,14 @@ describe('expectations on scenarios', () => {
     const exported = await request(runtime.app).post(`${base}/export`).set(team.viewer.auth).send({ scenarioIds: [s.id] }).expect(200)
     const bundle = bundleSchema.parse(JSON.parse(exported.text as string))
     expect(bundle.scenarios[0]!.versions.map((v) => v.content.expectations)).toEqual([[cycles, bank], [cycles, res]])
+  })
+
+  it('carries them in a share link', async () => {
+    const s = await buildScenario(runtime, team, { expectations: [cycles, res] })
+    const made = await request(runtime.app).post(`/api/workspaces/${team.workspace.id}/scenarios/${s.id}/share-links`).set(team.editor.auth).send({}).expect(201)
+    const { token } = createShareLinkResponseSchema.parse(made.body)
+    const { share } = sharedScenarioResponseSchema.parse((await request(runtime.app).get(`/api/shares/${token}`).expect(200)).body)
+    expect(share.content.expectations).toEqual([cycles, res])
   })
 
   it(`refuses more than ${EXPECTATIONS_MAX} expectations and a bad claim with a 400 naming the field`, async () => {
