@@ -30,6 +30,7 @@ export function contentOf(s: Scenario): ScenarioContent {
     machine: s.machine,
     initialData: s.initialData,
     view: s.view,
+    expectations: s.expectations,
   })
 }
 
