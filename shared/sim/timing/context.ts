@@ -8,7 +8,7 @@ import { STALL_RANK } from '../trace/types'
 import type { Derived } from './config'
 import type { Inst } from './inst'
 import { UNIT_COUNT, UNITS } from './config'
-import type { Recorder } from './recorder'
+import type { SpanRecorder } from './recorder'
 import type { RegFile } from './regfile'
 import type { Renamer } from './rename'
 
@@ -61,7 +61,7 @@ export class Ctx {
     readonly d: Derived,
     readonly rf: RegFile,
     readonly ren: Renamer,
-    readonly rec: Recorder,
+    readonly rec: SpanRecorder,
     readonly laneTimes: Int32Array,
   ) {
     this.m = d.machine

@@ -100,7 +100,7 @@ const U_AMOUNT = 3
 const U_RESOURCE = 4
 const U_WRITES = 5
 
-export class Recorder {
+export class SpanRecorder {
   readonly resources: ResourceInfo[] = []
   /** Uses summed over the run, per resource. */
   readonly totals: Float64Array

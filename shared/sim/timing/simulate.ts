@@ -16,7 +16,7 @@ import { opFlops } from './inst'
 import { derive } from './config'
 import { Ctx } from './context'
 import { computeMetrics } from './metrics'
-import { Recorder } from './recorder'
+import { SpanRecorder } from './recorder'
 import { RegFile } from './regfile'
 import { Renamer } from './rename'
 import { replicate } from './symmetry'
@@ -87,7 +87,7 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
   if (k > 1) {
     // One lane was timed for all: spread its results over the machine's lanes (symmetry.ts).
     const d = derive(s.sourceMachine)
-    full = new Ctx(d, new RegFile(d, s.sourceMachine.physRegs), new Renamer(s.sourceMachine.physRegs), new Recorder(d.lanes, false), new Int32Array(0))
+    full = new Ctx(d, new RegFile(d, s.sourceMachine.physRegs), new Renamer(s.sourceMachine.physRegs), new SpanRecorder(d.lanes, false), new Int32Array(0))
     const r = replicate(ctx, full, spans)
     spans = r
     laneTimes = r.laneTimes
