@@ -6,8 +6,8 @@
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process'
 import { loadConfig } from '../server/config'
 import { mainCluster, projectRoot } from '../server/db/cluster'
-import { connect } from '../server/db/connection'
-import { DEMO_PASSWORD, seedDemo } from '../server/services/demo-seed'
+import { createRuntime } from '../server/runtime'
+import { DEMO_PASSWORD, seedDemoWithScenarios } from '../server/services/demo-seed'
 import { migrateDatabase, prepareCluster } from './db'
 
 async function main(): Promise<void> {
@@ -15,14 +15,17 @@ async function main(): Promise<void> {
   if (process.env.DATABASE_URL) await migrateDatabase(process.env.DATABASE_URL)
   else await prepareCluster(mainCluster)
   const config = loadConfig()
+  const devPublicUrl = process.env.PUBLIC_URL ?? 'http://127.0.0.1:5173'
   if (config.seedDemo) {
-    const sequelize = connect(config.databaseUrl)
-    await seedDemo(sequelize)
-    await sequelize.close()
+    // A short-lived runtime: the demo scenarios are saved with their run summaries.
+    const runtime = await createRuntime({ ...config, publicUrl: devPublicUrl })
+    const demo = await seedDemoWithScenarios(runtime.ctx)
+    await runtime.close()
+    if (demo.shareUrl) console.log(`A demo scenario shared with anyone: ${demo.shareUrl}`)
   }
 
   // The API serves no client in dev mode: Vite does, on its own port.
-  const env = { ...process.env, CLIENT_DIR: '', PUBLIC_URL: process.env.PUBLIC_URL ?? 'http://127.0.0.1:5173' }
+  const env = { ...process.env, CLIENT_DIR: '', PUBLIC_URL: devPublicUrl }
   const children: ChildProcess[] = [
     spawn('npx', ['tsx', 'watch', '--clear-screen=false', 'server/index.ts'], { cwd: projectRoot, env, stdio: 'inherit' }),
     spawn('npx', ['vite'], { cwd: projectRoot, env, stdio: 'inherit' }),

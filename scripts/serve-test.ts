@@ -6,7 +6,7 @@
 import { loadConfig } from '../server/config'
 import { databaseUrl, testCluster } from '../server/db/cluster'
 import { createRuntime, listen } from '../server/runtime'
-import { seedDemo } from '../server/services/demo-seed'
+import { seedDemoWithScenarios } from '../server/services/demo-seed'
 import { prepareCluster } from './db'
 
 const port = process.env.CHIMELINE_E2E_PORT ?? '3100'
@@ -23,7 +23,7 @@ const config = loadConfig({
   LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
 })
 const runtime = await createRuntime(config)
-await seedDemo(runtime.ctx.sequelize)
+await seedDemoWithScenarios(runtime.ctx)
 const { server, url } = await listen(runtime)
 console.log(`Chimeline test server at ${url}`)
 

@@ -1,6 +1,6 @@
 /**
  * `npm start`: PostgreSQL (installed when missing), the private data cluster,
- * migrations, the demo seed, a client build, then app + API on one port.
+ * migrations, a client build, the demo seed, then app + API on one port.
  * Ctrl-C stops the app; `npm run db:stop` stops the database.
  * CHIMELINE_EXIT_WHEN_HEALTHY=1 exits 0 once /api/health answers ok (fresh-clone check).
  */
@@ -8,7 +8,7 @@ import { spawnSync } from 'node:child_process'
 import { loadConfig } from '../server/config'
 import { mainCluster, projectRoot } from '../server/db/cluster'
 import { createRuntime, listen } from '../server/runtime'
-import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE, seedDemo } from '../server/services/demo-seed'
+import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE, seedDemoWithScenarios } from '../server/services/demo-seed'
 import { migrateDatabase, prepareCluster } from './db'
 
 function run(cmd: string, args: string[], what: string): void {
@@ -37,12 +37,13 @@ async function main(): Promise<void> {
   if (process.env.DATABASE_URL) await migrateDatabase(process.env.DATABASE_URL)
   else await prepareCluster(mainCluster)
 
-  const config = loadConfig()
-  const runtime = await createRuntime(config)
-  if (config.seedDemo) await seedDemo(runtime.ctx.sequelize)
-
+  // The client is built before the app exists, so the very first start serves it.
   console.log('Chimeline: building the client ...')
   run('npx', ['vite', 'build', '--logLevel', 'warn'], 'vite build')
+
+  const config = loadConfig()
+  const runtime = await createRuntime(config)
+  const demo = config.seedDemo ? await seedDemoWithScenarios(runtime.ctx) : null
 
   const { server, url } = await listen(runtime)
   const stop = async (code: number) => {
@@ -58,6 +59,7 @@ async function main(): Promise<void> {
   if (config.seedDemo) {
     console.log(`\nDemo sign-ins (workspace "${DEMO_WORKSPACE}"), password for all: ${DEMO_PASSWORD}`)
     for (const u of DEMO_USERS) console.log(`  ${u.email.padEnd(26)} ${u.workspace ?? `site ${u.site}`}`)
+    if (demo?.shareUrl) console.log(`\nA demo scenario shared with anyone (no sign-in): ${demo.shareUrl}`)
   }
   if (runtime.sink) console.log(`\nE-mail goes to the local sink (127.0.0.1:${runtime.sink.port}); read it on the Outbox page as admin.`)
   console.log('\nCtrl-C stops the app; `npm run db:stop` stops the database.')

@@ -22,14 +22,24 @@ export interface ServerConfig {
   mailFrom: string
   /** Attempts per client address and window on sign-in, sign-up, forgot and reset. */
   authRateLimit: { max: number; windowMs: number }
+  /** Failed sign-ins per account and window (auth/signin-guard.ts). */
+  signInLimit: { perAccount: number; windowMs: number }
   logLevel: string
+  /** null: the log goes to stdout; else this file, created readable by its owner only. */
+  logFile: string | null
+  /** Log one in this many share-link opens (1: all); errors of the others still log. */
+  shareOpenLogEvery: number
+  /** Share-link open counts are written every this many ms (0: only when the process stops). */
+  shareCountFlushMs: number
   /** Folder of the built client (vite build); null serves no client (dev, tests). */
   clientDir: string | null
   /** Set the Secure flag on the refresh cookie (behind HTTPS). */
   secureCookies: boolean
   seedDemo: boolean
   /** The worker threads that compute saved versions' run summaries (services/run-pool.ts). */
-  saveRuns: { threads: number; queue: number; timeLimitMs: number }
+  saveRuns: { threads: number; queue: number; perWorkspace: number; timeLimitMs: number }
+  /** The worker threads of other request work that can take long (services/work-pool.ts: version diffs). */
+  work: { threads: number; queue: number; perOwner: number; timeLimitMs: number }
 }
 
 /** One thread per core the request thread does not need, at least one, at most four. */
@@ -83,14 +93,28 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
       max: intEnv(env, 'AUTH_RATE_LIMIT_MAX', 10),
       windowMs: intEnv(env, 'AUTH_RATE_LIMIT_WINDOW_MS', 15 * 60 * 1000),
     },
+    signInLimit: {
+      perAccount: Math.max(1, intEnv(env, 'SIGNIN_ACCOUNT_LIMIT_MAX', 10)),
+      windowMs: Math.max(1, intEnv(env, 'SIGNIN_ACCOUNT_LIMIT_WINDOW_MS', 15 * 60 * 1000)),
+    },
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
+    logFile: env.LOG_FILE ? path.resolve(env.LOG_FILE) : null,
+    shareOpenLogEvery: Math.max(1, intEnv(env, 'SHARE_OPEN_LOG_EVERY', 100)),
+    shareCountFlushMs: intEnv(env, 'SHARE_COUNT_FLUSH_MS', 5000),
     clientDir: env.CLIENT_DIR === '' ? null : path.resolve(env.CLIENT_DIR ?? 'dist'),
     secureCookies: (env.PUBLIC_URL ?? '').startsWith('https:'),
     seedDemo: !production || env.CHIMELINE_SEED_DEMO === '1',
     saveRuns: {
       threads: Math.max(1, intEnv(env, 'SAVE_RUN_THREADS', defaultRunThreads())),
       queue: intEnv(env, 'SAVE_RUN_QUEUE', 16),
+      perWorkspace: Math.max(1, intEnv(env, 'SAVE_RUN_PER_WORKSPACE', 3)),
       timeLimitMs: Math.max(1, intEnv(env, 'SAVE_RUN_TIME_LIMIT_MS', 20_000)),
+    },
+    work: {
+      threads: Math.max(1, intEnv(env, 'WORK_THREADS', 1)),
+      queue: intEnv(env, 'WORK_QUEUE', 32),
+      perOwner: Math.max(1, intEnv(env, 'WORK_PER_WORKSPACE', 4)),
+      timeLimitMs: Math.max(1, intEnv(env, 'WORK_TIME_LIMIT_MS', 10_000)),
     },
   }
 }

@@ -1,9 +1,11 @@
 import type { Logger } from 'pino'
 import type { Sequelize } from 'sequelize'
+import type { SignInGuard } from './auth/signin-guard'
 import type { ServerConfig } from './config'
 import type { Mailer } from './services/mailer'
 import type { RunPool } from './services/run-pool'
-import type { ShareBodyCache } from './services/share-bodies'
+import type { WorkPool } from './services/work-pool'
+import type { ShareOpens } from './services/share-links-open'
 
 /** What routes and services need from the running server; built once in runtime.ts. */
 export interface AppContext {
@@ -13,6 +15,10 @@ export interface AppContext {
   logger: Logger
   /** Computes saved versions' run summaries on worker threads. */
   runs: RunPool
-  /** The immutable bodies of opened share links, by link id. */
-  shareBodies: ShareBodyCache
+  /** Other request work that can take long (version diffs), on worker threads with a time limit. */
+  work: WorkPool
+  /** Failed sign-ins per account. */
+  signInGuard: SignInGuard
+  /** Opens share links from an in-memory cache; counts opens and writes them every few seconds. */
+  shares: ShareOpens
 }

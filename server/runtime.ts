@@ -1,19 +1,26 @@
-import type { Server } from 'node:http'
+import http, { type RequestListener, type Server } from 'node:http'
 import type { AddressInfo } from 'node:net'
-import { pino } from 'pino'
 import type { Sequelize } from 'sequelize'
-import { buildApp } from './app'
+import { buildApp, securityHeaders } from './app'
+import { createSignInGuard } from './auth/signin-guard'
+import { withShareFastOpen } from './routes/shares/fast-open'
 import type { ServerConfig } from './config'
 import type { AppContext } from './context'
 import { connect } from './db/connection'
+import { createLogger } from './http/request-log'
 import { createMailer, sinkSmtpUrl } from './services/mailer'
 import { createRunPool } from './services/run-pool'
-import { createShareBodyCache } from './services/share-bodies'
+import { createOpenCounter } from './services/share-links-counts'
+import { listenForShareLinkChanges } from './services/share-links-notify'
+import { ShareOpens } from './services/share-links-open'
 import { startSmtpSink, type SmtpSink } from './services/smtp-sink'
+import { createWorkPool } from './services/work-pool'
 
 export interface Runtime {
   ctx: AppContext
   app: ReturnType<typeof buildApp>
+  /** What the HTTP server runs: warm share opens (routes/shares/fast-open.ts), else the app. */
+  handler: RequestListener
   /** Set when SMTP_URL is unset: the in-process sink that feeds the Outbox. */
   sink: SmtpSink | null
   close(): Promise<void>
@@ -30,20 +37,28 @@ export interface RuntimeOptions {
 
 /** Connects to PostgreSQL, starts the SMTP sink when needed, builds the app. */
 export async function createRuntime(config: ServerConfig, options: RuntimeOptions = {}): Promise<Runtime> {
-  const logger = pino({ level: config.logLevel })
+  const logger = createLogger(config)
   const sequelize = options.sequelize ?? connect(config.databaseUrl)
   const sink = config.smtpUrl ? null : await startSmtpSink(config.smtpSinkPort, logger)
   const mailer = createMailer(config.smtpUrl ?? sinkSmtpUrl((sink as SmtpSink).port), config.mailFrom)
   const runs = createRunPool(config.saveRuns)
-  const ctx: AppContext = { config, sequelize, mailer, logger, runs, shareBodies: createShareBodyCache() }
+  const work = createWorkPool(config.work)
+  const shares = new ShareOpens(sequelize, createOpenCounter(sequelize, logger, config.shareCountFlushMs))
+  const shareListener = await listenForShareLinkChanges(config.databaseUrl, shares, logger)
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shares }
   const app = buildApp(ctx)
   return {
     ctx,
     app,
+    handler: withShareFastOpen(ctx, app, securityHeaders(ctx)),
     sink,
     async close() {
+      // Before the connection closes: the opens counted since the last flush.
+      await shareListener.close()
+      await shares.counts.close()
       mailer.close()
       await runs.close()
+      await work.close()
       await sink?.close()
       if (!options.sequelize) await sequelize.close()
     },
@@ -54,7 +69,9 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
 export async function listen(runtime: Runtime): Promise<{ server: Server; url: string }> {
   const { host, port } = runtime.ctx.config
   const server = await new Promise<Server>((resolve, reject) => {
-    const s = runtime.app.listen(port, host, (err?: Error) => (err ? reject(err) : resolve(s)))
+    const s = http.createServer(runtime.handler)
+    s.once('error', reject)
+    s.listen(port, host, () => resolve(s))
   })
   const address = server.address() as AddressInfo
   return { server, url: `http://${host}:${address.port}` }

@@ -5,8 +5,9 @@ import { ACCESS_TOKEN_TTL_SECONDS } from '../../shared/schemas/auth'
 export const JWT_ISSUER = 'chimeline'
 export const JWT_AUDIENCE = 'chimeline-api'
 
-export function signAccessToken(userId: string, secret: string): string {
-  return jwt.sign({}, secret, {
+/** An access token of one session: `sub` the user, `sid` the session (sessions table), checked per request. */
+export function signAccessToken(userId: string, sessionId: string, secret: string): string {
+  return jwt.sign({ sid: sessionId }, secret, {
     algorithm: 'HS256',
     subject: userId,
     issuer: JWT_ISSUER,

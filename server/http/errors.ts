@@ -7,6 +7,8 @@ export class ApiError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fields?: Record<string, string>,
+    /** Sent as the Retry-After header (RFC 9110, section 10.2.3) of a 429 or 503. */
+    readonly retryAfterSeconds?: number,
   ) {
     super(message)
     this.name = 'ApiError'
@@ -31,8 +33,10 @@ export const errors = {
   conflict: (message: string, fields?: Record<string, string>) => new ApiError(409, 'conflict', message, fields),
   payloadTooLarge: (limitBytes: number) =>
     new ApiError(413, 'payload_too_large', `The request body is larger than the limit of ${formatBytes(limitBytes)}`),
-  rateLimited: (retryAfterSeconds: number) =>
-    new ApiError(429, 'rate_limited', `Too many attempts; try again in ${Math.max(1, Math.ceil(retryAfterSeconds / 60))} minute(s)`),
+  unsupportedMediaType: (header: string, message: string) =>
+    new ApiError(415, 'unsupported_media_type', `The request body cannot be read: ${message}`, { [header]: message }),
+  rateLimited: (retryAfterSeconds: number, message = 'Too many attempts') =>
+    new ApiError(429, 'rate_limited', `${message}; try again in ${Math.max(1, Math.ceil(retryAfterSeconds / 60))} minute(s)`, undefined, Math.max(1, Math.ceil(retryAfterSeconds))),
   internal: () => new ApiError(500, 'internal', 'Something went wrong on the server'),
 }
 

@@ -9,13 +9,14 @@ import { ScenarioVersion } from './scenario-version'
 import { ShareLink } from './share-link'
 import { Upload } from './upload'
 import { User } from './user'
+import { UserSession } from './user-session'
 import { Workspace } from './workspace'
 
-export { Invitation, Membership, OutboxMessage, PasswordReset, RefreshToken, Scenario, ScenarioVersion, ShareLink, Upload, User, Workspace }
+export { Invitation, Membership, OutboxMessage, PasswordReset, RefreshToken, Scenario, ScenarioVersion, ShareLink, Upload, User, UserSession, Workspace }
 
 /** Binds every model to the connection and declares the associations. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage, Upload, Scenario, ScenarioVersion, ShareLink]) {
+  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage, Upload, Scenario, ScenarioVersion, ShareLink, UserSession]) {
     model.initModel(sequelize)
   }
   Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' })

@@ -2,7 +2,9 @@ import type { Sequelize } from 'sequelize'
 import type { SiteRole } from '../../shared/schemas/user'
 import type { WorkspaceRole } from '../../shared/schemas/workspace'
 import { hashPassword } from '../auth/passwords'
+import type { AppContext } from '../context'
 import { Membership, User, Workspace } from '../models'
+import { seedDemoScenarios, type DemoScenariosResult } from './demo-scenarios'
 
 /** Our own demo: one workspace, one user per workspace role, and a site admin. */
 export const DEMO_PASSWORD = 'chimeline-demo-2026'
@@ -18,8 +20,8 @@ export const DEMO_USERS: readonly { email: string; name: string; site: SiteRole;
  * Creates what is missing of the demo and changes nothing that exists (a demo
  * user who changed their password keeps it). Safe to run on every start.
  */
-export async function seedDemo(sequelize: Sequelize): Promise<void> {
-  await sequelize.transaction(async (transaction) => {
+export async function seedDemo(sequelize: Sequelize): Promise<{ workspace: Workspace; owner: User }> {
+  return sequelize.transaction(async (transaction) => {
     // Serialises concurrent seeds (npm start and the test server at once).
     await sequelize.query("SELECT pg_advisory_xact_lock(hashtext('chimeline-demo-seed'))", { transaction })
     const users = new Map<string, User>()
@@ -49,5 +51,15 @@ export async function seedDemo(sequelize: Sequelize): Promise<void> {
         transaction,
       })
     }
+    return { workspace, owner }
   })
+}
+
+/**
+ * The whole demo: users, workspace and the example scenarios with their share
+ * link. Returns that link's URL for `npm start` to print.
+ */
+export async function seedDemoWithScenarios(ctx: AppContext): Promise<DemoScenariosResult> {
+  const { workspace, owner } = await seedDemo(ctx.sequelize)
+  return seedDemoScenarios(ctx, workspace, owner)
 }

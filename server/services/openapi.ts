@@ -50,7 +50,7 @@ export const DOCUMENTED_ROUTES: DocumentedRoute[] = [
   { method: 'get', path: '/api/workspaces', summary: 'My workspaces', access: 'signed in', ok: 200, response: ws.workspaceListResponseSchema },
   { method: 'post', path: '/api/workspaces', summary: 'Create a workspace (creator becomes owner)', access: 'signed in', body: ws.workspaceBodySchema, ok: 201, response: ws.workspaceResponseSchema },
   { method: 'get', path: '/api/workspaces/:id', summary: 'One workspace', access: 'member', ok: 200, response: ws.workspaceResponseSchema },
-  { method: 'patch', path: '/api/workspaces/:id', summary: 'Rename', access: 'owner', body: ws.workspaceBodySchema, ok: 200, response: ws.workspaceResponseSchema },
+  { method: 'patch', path: '/api/workspaces/:id', summary: 'Rename, or set the default preset of imports', access: 'owner', body: ws.workspacePatchSchema, ok: 200, response: ws.workspaceResponseSchema },
   { method: 'delete', path: '/api/workspaces/:id', summary: 'Soft delete (undo within 30 days)', access: 'owner', ok: 204 },
   { method: 'post', path: '/api/workspaces/:id/undo-delete', summary: 'Bring a deleted workspace back within 30 days (410 undo_expired after)', access: 'owner', ok: 200, response: ws.workspaceResponseSchema },
   { method: 'get', path: '/api/workspaces/:id/members', summary: 'Members and pending invitations', access: 'member', ok: 200, response: ws.membersResponseSchema },

@@ -143,7 +143,7 @@ export interface NewScenarioOptions {
 
 /** Creates a scenario with its version 1. */
 export async function createScenario(ctx: AppContext, user: User, workspaceId: string, body: CreateScenarioBody, options: NewScenarioOptions = {}): Promise<Scenario> {
-  const run = options.run ?? (await ctx.runs.summarize(body.content))
+  const run = options.run ?? (await ctx.runs.summarize(body.content, workspaceId))
   const work = async (transaction: Transaction) => {
     const c = body.content
     const scenario = await Scenario.create(
@@ -170,22 +170,29 @@ async function latestVersion(scenarioId: string, transaction?: Transaction): Pro
  * client can offer "keep mine as a new version" or "reload theirs".
  */
 export async function saveScenario(ctx: AppContext, user: User, workspaceId: string, scenarioId: string, body: SaveScenarioBody): Promise<{ scenario: Scenario; version: ScenarioVersion }> {
-  // The run is CPU work on a worker thread: do it before taking the row lock.
-  await findScenario(workspaceId, scenarioId)
-  const run = await ctx.runs.summarize(body.content)
+  // A save that is stale already is answered before its run: a stale save costs
+  // one read, not a simulation (and cannot crowd the run pool).
+  const current = await findScenario(workspaceId, scenarioId)
+  if (current.version !== body.baseVersion) await conflict(current.id, body)
+  // The run is CPU work on a worker thread: do it before taking the row lock,
+  // and check the version again under the lock, since someone may have saved meanwhile.
+  const run = await ctx.runs.summarize(body.content, workspaceId)
   return ctx.sequelize.transaction(async (transaction) => {
     const scenario = await findScenario(workspaceId, scenarioId, { transaction, lock: true })
-    if (scenario.version !== body.baseVersion) {
-      const theirs = await latestVersion(scenario.id, transaction)
-      throw new DetailedApiError(
-        409,
-        'version_conflict',
-        `${theirs.authorName} saved version ${theirs.number} after version ${body.baseVersion}, which your edit started from`,
-        { conflict: { baseVersion: body.baseVersion, theirs: versionDto(theirs), mine: body.content } },
-      )
-    }
+    if (scenario.version !== body.baseVersion) await conflict(scenario.id, body, transaction)
     return writeVersion(scenario, user, body.content, body.message, run, transaction)
   })
+}
+
+/** The 409 of a save that started from an older version: theirs (the newest) and mine. */
+async function conflict(scenarioId: string, body: SaveScenarioBody, transaction?: Transaction): Promise<never> {
+  const theirs = await latestVersion(scenarioId, transaction)
+  throw new DetailedApiError(
+    409,
+    'version_conflict',
+    `${theirs.authorName} saved version ${theirs.number} after version ${body.baseVersion}, which your edit started from`,
+    { conflict: { baseVersion: body.baseVersion, theirs: versionDto(theirs), mine: body.content } },
+  )
 }
 
 async function writeVersion(scenario: Scenario, user: User, content: ScenarioContent, message: string, run: RunSummary, transaction: Transaction) {

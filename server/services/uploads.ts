@@ -8,15 +8,18 @@ import crypto from 'node:crypto'
 import path from 'node:path'
 import { bundleSchema, type Bundle } from '../../shared/schemas/bundle'
 import type { ScenarioContent } from '../../shared/schemas/scenario'
-import { scenarioContentSchema } from '../../shared/schemas/scenario'
+import { SCENARIO_PROGRAM_MAX_LENGTH, scenarioContentSchema } from '../../shared/schemas/scenario'
 import { IMPORT_MAX_INSTRUCTIONS, type FileDiagnostic, type UploadFields, type Upload as UploadDto, type UploadInspection, type UploadKind } from '../../shared/schemas/upload'
+import { parseMachine, type Machine } from '../../shared/schemas/machine'
 import { assemble } from '../../shared/sim/isa/assembler'
+import { DEFAULT_PRESET_ID, findPreset } from '../../shared/sim/presets'
 import { parseObjdump } from '../../shared/sim/isa/objdump'
 import type { SimDiagnostic } from '../../shared/sim/isa/types'
 import type { AppContext } from '../context'
 import { DetailedApiError } from '../http/detailed-error'
+import { badTextFields } from '../http/text-guard'
 import { issuesToFields } from '../http/validate'
-import { Scenario, Upload, type User } from '../models'
+import { Scenario, Upload, Workspace, type User } from '../models'
 import { ElfError, readElf } from './elf/reader'
 import { decodeFunction, listFunctions } from './elf/import'
 import { importBundle } from './scenario-bundles'
@@ -80,6 +83,9 @@ function readBundle(file: ReceivedFile): Bundle {
     const where = at ? position(text, Number(at[1])) : {}
     throw invalid(`${file.originalname} is not valid JSON: ${(err as Error).message}`, [{ ...where, code: 'json', message: (err as Error).message }])
   }
+  const badText = badTextFields(json)
+  const [firstBad] = Object.entries(badText)
+  if (firstBad) throw new DetailedApiError(400, 'invalid_file', `${file.originalname}: ${firstBad[0]}: ${firstBad[1]}`, { diagnostics: [] }, badText)
   const parsed = bundleSchema.safeParse(json)
   if (!parsed.success) {
     const fields = issuesToFields(parsed.error.issues)
@@ -96,8 +102,15 @@ function elfProblem(file: ReceivedFile, err: unknown): never {
 
 const baseTitle = (file: ReceivedFile) => path.basename(file.originalname).replace(/\.[^.]+$/, '').slice(0, 200) || 'Imported program'
 
-function contentFor(title: string, program: string): ScenarioContent {
-  return scenarioContentSchema.parse({ title, program, description: '' })
+/** The content of an import; a program made longer than a scenario may keep is a 400 naming the limit. */
+function contentFor(file: ReceivedFile, title: string, program: string): ScenarioContent {
+  const parsed = scenarioContentSchema.safeParse({ title, program, description: '' })
+  if (parsed.success) return parsed.data
+  const fields = issuesToFields(parsed.error.issues)
+  const why = fields.program
+    ? `the program it makes has ${program.length.toLocaleString('en')} characters; a scenario's program has at most ${SCENARIO_PROGRAM_MAX_LENGTH.toLocaleString('en')} characters (import a smaller part)`
+    : Object.entries(fields).map(([k, v]) => `${k}: ${v}`).join('; ')
+  throw new DetailedApiError(400, 'invalid_file', `${file.originalname}: ${why}`, { diagnostics: [] }, fields)
 }
 
 /** Reads a file fully: the content of one scenario, or a bundle. Throws a 400 that says where on any problem. */
@@ -111,7 +124,7 @@ function readUpload(file: ReceivedFile, kind: UploadKind, fields: UploadFields):
         const first = r.errors[0] as SimDiagnostic
         throw invalid(`${file.originalname} line ${first.line}, column ${first.column}: ${first.message}${r.errors.length > 1 ? ` (and ${r.errors.length - 1} more)` : ''}`, r.errors.map(fromSim))
       }
-      return { content: contentFor(title, text) }
+      return { content: contentFor(file, title, text) }
     }
     case 'objdump': {
       const r = parseObjdump(asText(file), { maxInstructions: IMPORT_MAX_INSTRUCTIONS })
@@ -121,7 +134,7 @@ function readUpload(file: ReceivedFile, kind: UploadKind, fields: UploadFields):
       }
       const asm = instructionsToAssembly(r.program.instructions, `# Imported from ${path.basename(file.originalname)} (an objdump -d listing)`)
       if (!asm.ok) throw invalid(`${file.originalname}: ${asm.message}`, [{ code: 'reassemble', message: asm.message }])
-      return { content: contentFor(title, asm.text) }
+      return { content: contentFor(file, title, asm.text) }
     }
     case 'elf': {
       let functions
@@ -139,11 +152,17 @@ function readUpload(file: ReceivedFile, kind: UploadKind, fields: UploadFields):
       }
       const asm = instructionsToAssembly(decoded.instructions, `# Imported from ${path.basename(file.originalname)}: function ${decoded.name} (RISC-V ELF)`)
       if (!asm.ok) throw invalid(`${file.originalname}: ${asm.message}`, [{ code: 'reassemble', message: asm.message }])
-      return { content: contentFor(fields.title ?? decoded.name, asm.text) }
+      return { content: contentFor(file, fields.title ?? decoded.name, asm.text) }
     }
     case 'bundle':
       return { bundle: readBundle(file) }
   }
+}
+
+/** The machine an imported program starts on: the preset the upload names, else the workspace's default preset. */
+async function importMachine(workspaceId: string, presetId: string | undefined): Promise<Machine> {
+  const id = presetId ?? (await Workspace.findByPk(workspaceId))?.defaultPreset ?? DEFAULT_PRESET_ID
+  return parseMachine(findPreset(id)?.machine ?? {})
 }
 
 /** What a file holds, without storing anything (the ELF function list for the chooser). */
@@ -178,7 +197,8 @@ export function uploadDto(upload: Upload, uploader: User | null, scenarioIds: st
 export async function importUpload(ctx: AppContext, user: User, workspaceId: string, file: ReceivedFile, fields: UploadFields): Promise<{ upload: Upload; scenarios: Scenario[] }> {
   const kind = detectKind(file, fields.kind)
   const read = readUpload(file, kind, fields)
-  const run = 'content' in read ? await ctx.runs.summarize(read.content) : undefined
+  if ('content' in read) read.content.machine = await importMachine(workspaceId, fields.preset)
+  const run = 'content' in read ? await ctx.runs.summarize(read.content, workspaceId) : undefined
   return ctx.sequelize.transaction(async (transaction) => {
     const upload = await Upload.create(
       {

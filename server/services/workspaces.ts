@@ -1,10 +1,11 @@
-import { Op } from 'sequelize'
+import { Op, type Transaction } from 'sequelize'
 import {
   INVITATION_TTL_SECONDS,
   type Invitation as InvitationDto,
   type InvitationBody,
   type Member,
   type MembersResponse,
+  type WorkspacePatch,
   type WorkspaceRole,
   type WorkspaceSummary,
 } from '../../shared/schemas/workspace'
@@ -20,26 +21,32 @@ export async function listWorkspaces(userId: string): Promise<WorkspaceSummary[]
     include: [{ model: Workspace, as: 'workspace', required: true }],
   })
   return memberships
-    .map((m) => ({ id: m.workspaceId, name: (m.workspace as Workspace).name, role: m.role }))
+    .map((m) => summaryOf(m.workspace as Workspace, m.role))
     .sort((a, b) => a.name.localeCompare(b.name))
 }
 
-export async function createWorkspace(ctx: AppContext, user: User, name: string): Promise<WorkspaceSummary> {
-  return ctx.sequelize.transaction(async (transaction) => {
+function summaryOf(workspace: Workspace, role: WorkspaceRole): WorkspaceSummary {
+  return { id: workspace.id, name: workspace.name, role, defaultPreset: workspace.defaultPreset }
+}
+
+/** A workspace owned by `user`; inside the caller's transaction when given (sign-up's personal workspace). */
+export async function createWorkspace(ctx: AppContext, user: User, name: string, outer?: Transaction): Promise<WorkspaceSummary> {
+  const work = async (transaction: Transaction) => {
     const workspace = await Workspace.create({ name }, { transaction })
     await Membership.create({ workspaceId: workspace.id, userId: user.id, role: 'owner' }, { transaction })
-    return { id: workspace.id, name: workspace.name, role: 'owner' }
-  })
+    return summaryOf(workspace, 'owner')
+  }
+  return outer ? work(outer) : ctx.sequelize.transaction(work)
 }
 
 export async function getWorkspace(membership: Membership): Promise<WorkspaceSummary> {
   const workspace = await Workspace.findByPk(membership.workspaceId)
   if (!workspace) throw errors.notFound('workspace')
-  return { id: workspace.id, name: workspace.name, role: membership.role }
+  return summaryOf(workspace, membership.role)
 }
 
-export async function renameWorkspace(membership: Membership, name: string): Promise<WorkspaceSummary> {
-  await Workspace.update({ name }, { where: { id: membership.workspaceId } })
+export async function updateWorkspace(membership: Membership, patch: WorkspacePatch): Promise<WorkspaceSummary> {
+  await Workspace.update(patch, { where: { id: membership.workspaceId } })
   return getWorkspace(membership)
 }
 
@@ -110,8 +117,9 @@ export async function invite(ctx: AppContext, inviter: User, workspaceId: string
 }
 
 /**
- * The token is the capability: whoever holds the e-mailed link and is signed in
- * joins with the invited role (once). A member already keeps their role.
+ * The e-mailed token, used once, by the account of the address it was sent
+ * to: a forwarded or leaked link lets nobody else in (and stays usable by the
+ * invitee). A member already keeps their role.
  */
 export async function acceptInvitation(ctx: AppContext, user: User, token: string): Promise<WorkspaceSummary> {
   return ctx.sequelize.transaction(async (transaction) => {
@@ -121,6 +129,10 @@ export async function acceptInvitation(ctx: AppContext, user: User, token: strin
       lock: transaction.LOCK.UPDATE,
     })
     if (!invitation) throw errors.invalidToken('invitation')
+    // Both addresses are stored lower-cased by the e-mail schema.
+    if (invitation.email !== user.email) {
+      throw errors.forbidden('This invitation was sent to another e-mail address: sign in with the address it was sent to, or ask for an invitation to yours')
+    }
     const workspace = await Workspace.findByPk(invitation.workspaceId, { transaction })
     if (!workspace) throw errors.invalidToken('invitation')
     await invitation.update({ acceptedAt: new Date(), acceptedById: user.id }, { transaction })
@@ -129,7 +141,7 @@ export async function acceptInvitation(ctx: AppContext, user: User, token: strin
       defaults: { workspaceId: workspace.id, userId: user.id, role: invitation.role },
       transaction,
     })
-    return { id: workspace.id, name: workspace.name, role: membership.role }
+    return summaryOf(workspace, membership.role)
   })
 }
 

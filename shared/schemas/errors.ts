@@ -19,6 +19,7 @@ export const errorCodeSchema = z.enum([
   'undo_expired', // 410: the 30 days to undo a delete are over
   'invalid_file', // 400: an upload that cannot be read; `diagnostics` says where
   'payload_too_large', // 413
+  'unsupported_media_type', // 415: a body in a charset or content coding the server does not read; `fields` names the header
   'rate_limited', // 429
   'internal', // 500: nothing internal is leaked
   'server_busy', // 503: the run summaries of saves are queued to their limit; nothing was saved, try again

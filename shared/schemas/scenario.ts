@@ -24,7 +24,12 @@ export const UNDO_DAYS = 30
 
 const cycle = z.number().int('A cycle is a whole number').min(0, 'A cycle is at least 0').max(VIEW_MAX_CYCLE, `A cycle is at most ${VIEW_MAX_CYCLE}`)
 
-/** What the Bench shows: cursor cycle, zoom window and selected instruction (null: not set). */
+/**
+ * What the Bench shows: cursor cycle, zoom window and selected instruction
+ * (null: not set), whole cycles only; optionally the Lane chart's R/E/W rows
+ * and Dependencies switches and the vector register the inspector shows
+ * (absent in views saved before they existed: off and none).
+ */
 export const scenarioViewSchema = z
   .object({
     cursor: cycle.nullable().default(null),
@@ -34,6 +39,9 @@ export const scenarioViewSchema = z
       .nullable()
       .default(null),
     selected: z.number().int().min(0, 'An instruction index is at least 0').nullable().default(null),
+    subRows: z.boolean().optional(),
+    dependencies: z.boolean().optional(),
+    register: z.number().int('A register is a whole number').min(0, 'A register is v0 to v31').max(31, 'A register is v0 to v31').nullable().optional(),
   })
   .strict()
 export type ScenarioView = z.output<typeof scenarioViewSchema>
@@ -259,7 +267,17 @@ export type LineChange = z.infer<typeof lineChangeSchema>
 export const versionDiffSchema = z.object({
   from: z.number().int(),
   to: z.number().int(),
-  program: z.object({ changes: z.array(lineChangeSchema), added: z.number().int(), removed: z.number().int() }),
+  program: z.object({
+    changes: z.array(lineChangeSchema),
+    added: z.number().int(),
+    removed: z.number().int(),
+    /**
+     * False when the programs differ in more lines than the server diffs line
+     * by line: the changes are then the common head and tail and one replaced
+     * block between them (correct, not minimal).
+     */
+    exact: z.boolean().default(true),
+  }),
   /** Dotted machine field names whose value differs, e.g. `units.fpu.latency`. */
   machine: z.array(z.object({ field: z.string(), before: z.unknown(), after: z.unknown() })),
   /** Other content fields that differ (title, description, tags, initialData, view). */

@@ -73,13 +73,16 @@ export const emailShareLinkBodySchema = z
 export type EmailShareLinkBody = z.output<typeof emailShareLinkBodySchema>
 export const emailShareLinkResponseSchema = z.object({ sent: z.array(z.string()) })
 
-/** GET /api/shares/:token: what a reader sees, without signing in when the link allows it. */
+/**
+ * GET /api/shares/:token: what a reader sees, without signing in when the link
+ * allows it. It names no user, workspace or scenario id: the readers of an
+ * `anyone` link are outside the workspace, and the answer is the same for all.
+ */
 export const sharedScenarioSchema = z.object({
-  scenarioId: z.uuid(),
-  workspace: z.object({ id: z.uuid(), name: z.string() }),
+  workspace: z.object({ name: z.string() }),
   version: z.number().int(),
   message: z.string(),
-  author: personSchema,
+  author: personSchema.pick({ name: true }),
   savedAt: z.iso.datetime(),
   content: scenarioContentSchema,
   run: runSummarySchema,

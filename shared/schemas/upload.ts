@@ -3,12 +3,13 @@
  * (bytes in PostgreSQL, with its SHA-256) and linked to what it produced.
  *
  * POST /api/workspaces/:id/uploads/inspect (multipart: file[, kind]) -> UploadInspection; nothing is stored
- * POST /api/workspaces/:id/uploads (multipart: file[, kind, function, title]) -> 201 { upload, scenarios }
+ * POST /api/workspaces/:id/uploads (multipart: file[, kind, function, title, preset]) -> 201 { upload, scenarios }
  */
 import { z } from 'zod'
 import { scenarioSummarySchema } from './scenario'
 import { personSchema } from './scenario'
 import { errorCodeSchema } from './errors'
+import { PRESET_IDS } from '../sim/presets'
 
 /** Largest file accepted. */
 export const UPLOAD_MAX_BYTES = 4 * 1024 * 1024
@@ -26,6 +27,8 @@ export const uploadFieldsSchema = z
     function: z.string().min(1).max(200).optional(),
     /** Title of the scenario made (not for bundles, which carry their own). */
     title: z.string().trim().min(1).max(200).optional(),
+    /** The preset the imported program runs on (not for bundles); the workspace's default preset when absent. */
+    preset: z.enum(PRESET_IDS, { error: `preset is one of ${PRESET_IDS.join(', ')}` }).optional(),
   })
   .strict()
 export type UploadFields = z.output<typeof uploadFieldsSchema>

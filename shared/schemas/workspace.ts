@@ -2,6 +2,7 @@ import { z } from 'zod'
 import { textFieldError } from './text'
 import { emailSchema, userSchema } from './user'
 import { oneTimeTokenSchema } from './auth'
+import { PRESET_IDS } from '../sim/presets'
 
 /** What a member may do in a workspace: owners administer, editors write, viewers read. */
 export const workspaceRoleSchema = z.enum(['owner', 'editor', 'viewer'])
@@ -20,6 +21,8 @@ export const workspaceSummarySchema = z.object({
   id: z.uuid(),
   name: z.string(),
   role: workspaceRoleSchema,
+  /** The preset imports start on unless they name one. */
+  defaultPreset: z.string(),
 })
 export type WorkspaceSummary = z.infer<typeof workspaceSummarySchema>
 
@@ -31,9 +34,18 @@ export type MeResponse = z.infer<typeof meResponseSchema>
 export const workspaceListResponseSchema = z.object({ workspaces: z.array(workspaceSummarySchema) })
 export type WorkspaceListResponse = z.infer<typeof workspaceListResponseSchema>
 
-/** POST /api/workspaces, PATCH /api/workspaces/:id */
+export const presetIdSchema = z.enum(PRESET_IDS, { error: `a preset is one of ${PRESET_IDS.join(', ')}` })
+
+/** POST /api/workspaces */
 export const workspaceBodySchema = z.object({ name: workspaceNameSchema })
 export type WorkspaceBody = z.infer<typeof workspaceBodySchema>
+
+/** PATCH /api/workspaces/:id: a new name, a new default preset, or both. */
+export const workspacePatchSchema = z
+  .object({ name: workspaceNameSchema.optional(), defaultPreset: presetIdSchema.optional() })
+  .strict()
+  .refine((b) => b.name !== undefined || b.defaultPreset !== undefined, { message: 'Send a name or a defaultPreset' })
+export type WorkspacePatch = z.infer<typeof workspacePatchSchema>
 
 /** GET, POST, PATCH /api/workspaces[/:id]; POST /api/invitations/accept */
 export const workspaceResponseSchema = z.object({ workspace: workspaceSummarySchema })

@@ -11,7 +11,16 @@ export interface Preset {
   machine: MachineInput
 }
 
+/** The machine every new thing starts on: the Bench, imports, the CLI, a new workspace. */
+export const DEFAULT_PRESET_ID = 'default-8'
+
 export const PRESETS: readonly Preset[] = [
+  {
+    id: DEFAULT_PRESET_ID,
+    name: 'Default 8-lane',
+    description: 'The handbook defaults: 8 lanes, VLEN 8192 (128 FP64 elements a register), 6 single-port banks a lane, one memory port with 512-bit buses.',
+    machine: {},
+  },
   {
     id: 'starter-4',
     name: 'Starter 4-lane',
@@ -49,3 +58,10 @@ export const PRESETS: readonly Preset[] = [
     },
   },
 ]
+
+/** A preset by id, or undefined. */
+export function findPreset(id: string): Preset | undefined {
+  return PRESETS.find((p) => p.id === id)
+}
+
+export const PRESET_IDS = PRESETS.map((p) => p.id) as [string, ...string[]]

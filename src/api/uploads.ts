@@ -6,6 +6,8 @@ export interface UploadChoice {
   /** ELF: the function to import. */
   function?: string
   title?: string
+  /** The preset the imported program runs on; the workspace's default when absent. */
+  preset?: string
 }
 
 function form(file: File, choice: UploadChoice): FormData {
@@ -14,6 +16,7 @@ function form(file: File, choice: UploadChoice): FormData {
   if (choice.kind) data.set('kind', choice.kind)
   if (choice.function) data.set('function', choice.function)
   if (choice.title) data.set('title', choice.title)
+  if (choice.preset) data.set('preset', choice.preset)
   data.set('file', file, file.name)
   return data
 }

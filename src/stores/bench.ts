@@ -8,17 +8,18 @@ import { computed, ref, shallowRef, watch } from 'vue'
 import { defineStore } from 'pinia'
 import { assemble } from '@shared/sim/isa'
 import { checkMachine, defaultMachine, parseMachine, type Machine } from '@shared/schemas/machine'
-import { PRESETS } from '@shared/sim/presets'
+import { DEFAULT_PRESET_ID, findPreset, PRESETS } from '@shared/sim/presets'
 import type { FpReductionOrder } from '@shared/sim/run'
 import { useSimulator, type UseSimulatorOptions } from '@/composables/useSimulator'
 import { clampCycle, nextEvent, previousEvent, scrubberEvents } from '@/lib/bench/events'
-import { exampleList, type Example } from '@/lib/bench/examples'
+import { exampleList, type Example } from '@shared/examples'
 import { indexTrace, inspectCycle } from '@/lib/bench/inspector'
 import { instructionRows } from '@/lib/bench/instructionRows'
 import { issuesByField, machineSummary, matchingPreset, setField } from '@/lib/bench/machineFields'
 import { dependenciesOf, firstWritten, writtenRegisters } from '@/lib/bench/registerUse'
+import { staleness } from '@/lib/bench/staleness'
 import { explainStalls } from '@/lib/bench/stallExplanation'
-import { EMPTY_VIEW, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
+import { benchViewOf, EMPTY_VIEW, wholeCycle, wholeWindow, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
 
 const exampleFiles = import.meta.glob<string>('/examples/*.s', { query: '?raw', import: 'default', eager: true })
 export const EXAMPLES: Example[] = exampleList(exampleFiles)
@@ -47,9 +48,11 @@ export const useBenchStore = defineStore('bench', () => {
   const firstExample = EXAMPLES[0]
   const exampleId = ref<string | null>(firstExample?.id ?? null)
   const source = ref(firstExample?.source ?? '')
-  const presetId = ref<string | null>(PRESETS[1]?.id ?? null)
-  /** What the form holds: may be invalid (then it is not run). */
-  const machineDraft = ref<Machine>(parseMachine(PRESETS[1]?.machine ?? {}))
+  const presetId = ref<string | null>(DEFAULT_PRESET_ID)
+  /** What the form holds: may be invalid (then it is not run). The default preset is the schema's defaults. */
+  const machineDraft = ref<Machine>(parseMachine(findPreset(DEFAULT_PRESET_ID)?.machine ?? {}))
+  /** The title of the scenario on the Bench (exports are named after it), null when there is none. */
+  const title = ref<string | null>(null)
   const autoRun = ref(true)
   /** The order vfredusum sums in: element order (as QEMU) or this machine's; only the rounding differs. */
   const fpOrder = ref<FpReductionOrder>('element')
@@ -80,6 +83,19 @@ export const useBenchStore = defineStore('bench', () => {
   const currentPreset = computed(() => matchingPreset(machine.value, PRESETS))
 
   const trace = sim.trace
+  /** Set while the text or the machine cannot run: what is shown is the last successful run. */
+  const stale = computed(() =>
+    staleness({
+      hasTrace: trace.value !== null,
+      programErrors: assembled.value.ok ? [] : assembled.value.errors,
+      machineErrors: Object.keys(fieldErrors.value).length,
+    }),
+  )
+  /** A request to the editor to show a place (1-based line and column); `n` tells two requests apart. */
+  const reveal = ref<{ line: number; column: number; n: number } | null>(null)
+  function revealInEditor(line: number, column: number): void {
+    reveal.value = { line, column, n: (reveal.value?.n ?? 0) + 1 }
+  }
   const traceIndex = computed(() => (trace.value ? indexTrace(trace.value) : null))
   const events = computed(() => (trace.value ? scrubberEvents(trace.value) : new Int32Array()))
   const explanation = computed(() => (trace.value ? explainStalls(trace.value) : null))
@@ -90,11 +106,16 @@ export const useBenchStore = defineStore('bench', () => {
   const dependencies = computed(() => (selected.value === null ? [] : dependenciesOf(registerGroups.value, selected.value)))
   const cycleState = computed(() => (traceIndex.value && cursor.value !== null ? inspectCycle(traceIndex.value, cursor.value) : null))
 
-  // Selecting an instruction shows its destination register's values in the inspector.
-  watch(selected, (index) => {
+  /**
+   * Selects an instruction (null: none) the way a user does: its destination
+   * register's values show in the inspector. A view put back (setView) keeps
+   * its own register instead.
+   */
+  function select(index: number | null): void {
+    selected.value = index
     const first = index === null ? null : firstWritten(registerGroups.value, index)
     if (first !== null) selectedRegister.value = first
-  })
+  }
 
   async function run(): Promise<void> {
     if (!machine.value) return
@@ -196,29 +217,42 @@ export const useBenchStore = defineStore('bench', () => {
     if (playing.value) play()
   })
 
-  const view = computed<BenchView>(() => ({ cursor: cursor.value, window: window.value, selected: selected.value }))
-  function setView(v: BenchView): void {
+  // The view as it is saved, shared and put in the URL: whole cycles (the chart zooms through fractions).
+  const view = computed<BenchView>(() => ({
+    cursor: wholeCycle(cursor.value),
+    window: wholeWindow(window.value),
+    selected: selected.value,
+    subRows: subRows.value,
+    dependencies: showDependencies.value,
+    register: selectedRegister.value,
+  }))
+  /** Puts a view back: from the URL, a saved scenario or a share link (older ones lack the switches and register). */
+  function setView(input: Parameters<typeof benchViewOf>[0]): void {
+    const v = benchViewOf(input)
     cursor.value = v.cursor
     window.value = v.window
     selected.value = v.selected
+    subRows.value = v.subRows
+    showDependencies.value = v.dependencies
+    selectedRegister.value = v.register
   }
 
   function $reset(): void {
     pause()
     if (autoTimer) clearTimeout(autoTimer)
     loadExample(firstExample?.id ?? '')
-    applyPreset(PRESETS[1]?.id ?? '')
+    applyPreset(DEFAULT_PRESET_ID)
     setView(EMPTY_VIEW)
+    title.value = null
     autoRun.value = true
     fpOrder.value = 'element'
-    selectedRegister.value = null
   }
 
   return {
-    exampleId, source, presetId, machineDraft, autoRun, fpOrder, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
-    assembled, program, machine, fieldErrors, summary, preset, currentPreset, trace, traceIndex, events, explanation, rows, registerGroups, registers, dependencies, cycleState, cycles, view,
+    exampleId, title, source, presetId, machineDraft, autoRun, fpOrder, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
+    assembled, program, machine, fieldErrors, stale, reveal, revealInEditor, summary, preset, currentPreset, trace, traceIndex, events, explanation, rows, registerGroups, registers, dependencies, cycleState, cycles, view,
     functional: sim.functional, error: sim.error, progress: sim.progress, running: sim.running,
     run, cancel: sim.cancel, scheduleRun, loadExample, setSource, applyPreset, resetMachine, setMachineField,
-    setCursor, step, toNextEvent, toPreviousEvent, play, pause, togglePlay, setView, $reset,
+    select, setCursor, step, toNextEvent, toPreviousEvent, play, pause, togglePlay, setView, $reset,
   }
 })

@@ -49,6 +49,20 @@ export const useWorkspaceStore = defineStore('workspace', () => {
     }
   }
 
+  /** Creates a workspace owned by the user and switches to it. */
+  async function create(name: string): Promise<WorkspaceSummary> {
+    const { workspace } = await auth.api.workspaces.create({ name })
+    workspaces.value = [...workspaces.value, workspace].sort((a, b) => a.name.localeCompare(b.name))
+    select(workspace.id)
+    return workspace
+  }
+
+  /** Sets the preset imports start on (owners only). */
+  async function setDefaultPreset(id: string, presetId: string): Promise<void> {
+    const { workspace } = await auth.api.workspaces.update(id, { defaultPreset: presetId })
+    workspaces.value = workspaces.value.map((w) => (w.id === workspace.id ? workspace : w))
+  }
+
   // Another user's workspaces must never show after a sign-out or a change of account.
   watch(
     () => auth.user?.id,
@@ -58,5 +72,5 @@ export const useWorkspaceStore = defineStore('workspace', () => {
     },
   )
 
-  return { workspaces, current, loading, error, load, select }
+  return { workspaces, current, loading, error, load, select, create, setDefaultPreset }
 })

@@ -52,4 +52,4 @@ export const editor = {
 
 export const admin = { ...editor, id: '7a2d3b4f-5c6e-4f70-9bac-1d2e3f4a5b6c', email: 'admin@vector-lab.test', name: 'Ada Admin', role: 'admin' } as const
 
-export const vectorLab = { id: '0b1c2d3e-4f50-4617-8293-a4b5c6d7e8f9', name: 'Vector Lab', role: 'editor' } as const
+export const vectorLab = { id: '0b1c2d3e-4f50-4617-8293-a4b5c6d7e8f9', name: 'Vector Lab', role: 'editor', defaultPreset: 'default-8' } as const

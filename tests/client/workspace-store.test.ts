@@ -6,7 +6,7 @@ import { useAuthStore } from '@/stores/auth'
 import { WORKSPACE_STORAGE_KEY, useWorkspaceStore } from '@/stores/workspace'
 import { apiError, editor, installFakeServer, json, vectorLab } from './fakeServer'
 
-const ringLab = { id: '1c2d3e4f-5061-4728-93a4-b5c6d7e8f901', name: 'Ring Lab', role: 'viewer' } as const
+const ringLab = { id: '1c2d3e4f-5061-4728-93a4-b5c6d7e8f901', name: 'Ring Lab', role: 'viewer', defaultPreset: 'default-8' } as const
 
 function signedInServer() {
   return installFakeServer({

@@ -32,7 +32,8 @@ describe('sign-up', () => {
     expect(cookie).toMatch(/Path=\/api\/auth/)
     expect(cookie).toMatch(/Max-Age=604800/)
     const me = await api().get('/api/me').set('Authorization', `Bearer ${body.accessToken}`)
-    expect(meResponseSchema.parse(me.body)).toEqual({ user: body.user, workspaces: [] })
+    // Sign-up makes a personal workspace owned by the new user, so Save and Share work at once.
+    expect(meResponseSchema.parse(me.body)).toEqual({ user: body.user, workspaces: [{ id: expect.any(String), name: "Lane Walker's workspace", role: 'owner', defaultPreset: 'default-8' }] })
   })
 
   it('stores an argon2id hash, never the password', async () => {

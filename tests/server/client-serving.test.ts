@@ -34,6 +34,23 @@ describe('serving the built client on the API port', () => {
     expect(res.text).toContain('<title>Chimeline shell</title>')
   })
 
+  it('serves a build that appears after the app was created (the first npm start builds the client late)', async () => {
+    const late = fs.mkdtempSync(path.join(os.tmpdir(), 'chimeline-late-dist-'))
+    const second = await startTestServer({ clientDir: late }, runtime)
+    try {
+      const before = await request(second.app).get('/bench')
+      expect(before.status).toBe(503)
+      expect(before.text).toMatch(/not built yet/)
+      fs.writeFileSync(path.join(late, 'index.html'), '<!doctype html><title>Late shell</title>')
+      const after = await request(second.app).get('/bench')
+      expect(after.status).toBe(200)
+      expect(after.text).toContain('<title>Late shell</title>')
+    } finally {
+      await second.close()
+      fs.rmSync(late, { recursive: true, force: true })
+    }
+  })
+
   it('keeps unknown API routes as JSON 404s', async () => {
     const res = await request(runtime.app).get('/api/bench')
     expect(res.status).toBe(404)

@@ -10,7 +10,7 @@ import { hashPassword } from '../../server/auth/passwords'
 import { signAccessToken } from '../../server/auth/tokens'
 import { loadConfig, type ServerConfig } from '../../server/config'
 import { databaseUrl, testCluster } from '../../server/db/cluster'
-import { Membership, OutboxMessage, User, Workspace } from '../../server/models'
+import { Membership, OutboxMessage, User, UserSession, Workspace } from '../../server/models'
 import { createRuntime, type Runtime } from '../../server/runtime'
 import type { SiteRole } from '../../shared/schemas/user'
 import type { WorkspaceRole } from '../../shared/schemas/workspace'
@@ -34,6 +34,7 @@ export async function startTestServer(overrides: Partial<ServerConfig> = {}, sha
       CLIENT_DIR: '',
       PUBLIC_URL: 'http://127.0.0.1:3100',
       AUTH_RATE_LIMIT_MAX: '1000',
+      SIGNIN_ACCOUNT_LIMIT_MAX: '1000',
     }),
     ...overrides,
   }
@@ -65,7 +66,8 @@ export async function buildUser(runtime: Runtime, overrides: { role?: SiteRole; 
     role: overrides.role ?? 'member',
     passwordHash: await sharedHash,
   })
-  const token = signAccessToken(user.id, runtime.ctx.config.jwtSecret)
+  const session = await UserSession.create({ userId: user.id })
+  const token = signAccessToken(user.id, session.id, runtime.ctx.config.jwtSecret)
   return { user, password: TEST_PASSWORD, token, auth: { Authorization: `Bearer ${token}` } }
 }
 

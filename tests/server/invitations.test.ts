@@ -37,7 +37,7 @@ describe('invitations by e-mail', () => {
 
     const accepted = await request(runtime.app).post('/api/invitations/accept').set(invitee.auth).send({ token })
     expect(accepted.status).toBe(200)
-    expect(accepted.body.workspace).toEqual({ id: workspace.id, name: 'Ring Lab', role: 'editor' })
+    expect(accepted.body.workspace).toEqual({ id: workspace.id, name: 'Ring Lab', role: 'editor', defaultPreset: 'default-8' })
 
     const after = membersResponseSchema.parse((await request(runtime.app).get(`/api/workspaces/${workspace.id}/members`).set(invitee.auth)).body)
     expect(after.members.map((m) => m.role)).toEqual(['owner', 'editor'])
@@ -46,6 +46,26 @@ describe('invitations by e-mail', () => {
     const reused = await request(runtime.app).post('/api/invitations/accept').set(invitee.auth).send({ token })
     expect(reused.status).toBe(400)
     expect(reused.body.error.code).toBe('invalid_token')
+  })
+
+  it('only the address the invitation was sent to may accept it (issue 9, item 8); the link stays valid for that address', async () => {
+    const owner = await buildUser(runtime)
+    const invitee = await buildUser(runtime)
+    const forwardedTo = await buildUser(runtime)
+    const workspace = await buildWorkspace([{ user: owner.user, role: 'owner' }], 'Address lab')
+    const since = new Date()
+    await request(runtime.app).post(`/api/workspaces/${workspace.id}/invitations`).set(owner.auth).send({ email: invitee.user.email.toUpperCase(), role: 'editor' }).expect(201)
+    const token = linkToken((await waitForMail(invitee.user.email, since)).text, '/invite')
+
+    const refused = await request(runtime.app).post('/api/invitations/accept').set(forwardedTo.auth).send({ token })
+    expect(refused.status).toBe(403)
+    expect(refused.body.error.code).toBe('forbidden')
+    expect(refused.body.error.message).toContain('another e-mail address')
+    await request(runtime.app).get(`/api/workspaces/${workspace.id}`).set(forwardedTo.auth).expect(404)
+
+    const accepted = await request(runtime.app).post('/api/invitations/accept').set(invitee.auth).send({ token })
+    expect(accepted.status).toBe(200)
+    expect(accepted.body.workspace.role).toBe('editor')
   })
 
   it('refuses to invite someone who is a member already', async () => {

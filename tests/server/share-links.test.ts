@@ -1,17 +1,22 @@
+import crypto from 'node:crypto'
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ShareLink } from '../../server/models'
+import { ShareOpens } from '../../server/services/share-links-open'
+import { listenForShareLinkChanges } from '../../server/services/share-links-notify'
+import { securityHeaders } from '../../server/app'
+import { withShareFastOpen } from '../../server/routes/shares/fast-open'
 import type { Runtime } from '../../server/runtime'
 import { createShareLinkResponseSchema, shareLinkListResponseSchema, sharedScenarioResponseSchema } from '../../shared/schemas/share-link'
 import { scenarioResponseSchema } from '../../shared/schemas/scenario'
 import { buildUser, startTestServer, waitForMail } from './helpers'
-import { createShareBodyCache, type SharedBody } from '../../server/services/share-bodies'
 import { buildScenario, buildTeam, content, type Team } from './scenario-helpers'
 
 let runtime: Runtime
 let team: Team
 beforeAll(async () => {
-  runtime = await startTestServer()
+  // No timer: counts are written when a test flushes them (or at close).
+  runtime = await startTestServer({ shareCountFlushMs: 0 })
   team = await buildTeam(runtime, 'Share lab')
 })
 afterAll(async () => {
@@ -19,6 +24,11 @@ afterAll(async () => {
 })
 
 const api = () => request(runtime.app)
+
+/** A change made straight in the database reaches this process as a notice; wait for it. */
+async function untilDropped(token: string) {
+  for (let i = 0; i < 200 && runtime.ctx.shares.cached(token); i++) await new Promise((resolve) => setTimeout(resolve, 10))
+}
 
 async function makeLink(body: object = {}, by = team.editor) {
   const s = await buildScenario(runtime, team, { view: { cursor: 12, window: { start: 0, end: 40 }, selected: 3 } })
@@ -49,11 +59,54 @@ describe('share links', () => {
     const { share } = sharedScenarioResponseSchema.parse(res.body)
     expect(share).toMatchObject({ version: 1, view: { cursor: 31, window: { start: 10, end: 60 }, selected: 5 }, accessMode: 'anyone', workspace: { name: 'Share lab' }, author: { name: 'Eddie Editor' } })
     expect(share.content).toEqual(scenario.content)
-    expect(res.headers['cache-control']).toBe('no-store')
     await api().get(`/api/shares/${token}`).expect(200)
+    // No write per open: the counts wait in memory for the next flush.
+    expect((await ShareLink.findByPk(link.id))?.openCount).toBe(0)
+    await runtime.ctx.shares.counts.flush()
     const row = await ShareLink.findByPk(link.id)
     expect(row?.openCount).toBe(2)
     expect(row?.lastOpenedAt).not.toBeNull()
+  })
+
+  it('the owner sees the right open counts after a flush, from several readers, and a flush keeps the cache', async () => {
+    const { token, link, scenario } = await makeLink()
+    const list = async () => shareLinkListResponseSchema.parse((await api().get(`/api/workspaces/${team.workspace.id}/scenarios/${scenario.id}/share-links`).set(team.owner.auth).expect(200)).body).links
+    await Promise.all(Array.from({ length: 25 }, () => api().get(`/api/shares/${token}`).expect(200)))
+    await runtime.ctx.shares.counts.flush()
+    expect(runtime.ctx.shares.cached(token)).toBe(true)
+    await api().get(`/api/shares/${token}`).set(team.outsider.auth).expect(200)
+    await api().get(`/api/shares/${token}`).expect(200)
+    const before = (await list()).find((l) => l.id === link.id)
+    expect(before?.openCount).toBe(25)
+    await runtime.ctx.shares.counts.flush()
+    const after = (await list()).find((l) => l.id === link.id)
+    expect(after?.openCount).toBe(27)
+    expect(Date.parse(after?.lastOpenedAt ?? '')).toBeGreaterThanOrEqual(Date.parse(before?.lastOpenedAt ?? ''))
+  })
+
+  it('an anyone-link answer names no user, workspace or scenario id, and is the same for every reader', async () => {
+    const { token, scenario, link } = await makeLink()
+    const anon = await api().get(`/api/shares/${token}`).expect(200)
+    const member = await api().get(`/api/shares/${token}`).set(team.owner.auth).expect(200)
+    expect(member.text).toBe(anon.text)
+    for (const id of [team.workspace.id, team.owner.user.id, team.editor.user.id, scenario.id, link.id]) expect(anon.text).not.toContain(id)
+    expect(Object.keys(anon.body.share.author)).toEqual(['name'])
+    expect(anon.body.share.workspace).toEqual({ name: 'Share lab' })
+  })
+
+  it('a reload revalidates: the same ETag answers 304 without a body, and a revoked link 410 despite it', async () => {
+    const { token, link } = await makeLink()
+    const first = await api().get(`/api/shares/${token}`).expect(200)
+    const etag = first.headers.etag as string
+    expect(etag).toMatch(/^"[A-Za-z0-9_-]+"$/)
+    // RFC 9111 5.2.2.4: no-cache lets the browser keep it but not use it unchecked; private keeps it out of shared caches.
+    expect(first.headers['cache-control']).toBe('private, no-cache')
+    const again = await api().get(`/api/shares/${token}`).set('If-None-Match', etag)
+    expect(again.status).toBe(304)
+    expect(again.text ?? '').toBe('')
+    expect((await api().get(`/api/shares/${token}`).set('If-None-Match', '"something-else"')).status).toBe(200)
+    await api().post(`/api/workspaces/${team.workspace.id}/share-links/${link.id}/revoke`).set(team.owner.auth).expect(200)
+    expect((await api().get(`/api/shares/${token}`).set('If-None-Match', etag)).status).toBe(410)
   })
 
   it('without a view the link takes the version\'s own view', async () => {
@@ -75,6 +128,7 @@ describe('share links', () => {
     const { token, link } = await makeLink({ expiresAt: new Date(Date.now() + 60_000).toISOString() })
     await api().get(`/api/shares/${token}`).expect(200)
     await ShareLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id: link.id } })
+    await untilDropped(token)
     const res = await api().get(`/api/shares/${token}`)
     expect(res.status).toBe(410)
     expect(res.body.error.code).toBe('share_expired')
@@ -142,29 +196,79 @@ describe('share links', () => {
   })
 })
 
-describe('the cache of shared versions', () => {
-  it('keeps a link\'s version body after the first open and serves the same body from it', async () => {
-    const { token, link } = await makeLink()
-    expect(runtime.ctx.shareBodies.has(link.id)).toBe(false)
-    const first = sharedScenarioResponseSchema.parse((await api().get(`/api/shares/${token}`).expect(200)).body).share
-    expect(runtime.ctx.shareBodies.get(link.id)?.content).toEqual(first.content)
-    const second = sharedScenarioResponseSchema.parse((await api().get(`/api/shares/${token}`).expect(200)).body).share
-    expect(second).toEqual(first)
+describe('the cache of opened links', () => {
+  it('keeps a link after its first open and answers warm opens without a database query', async () => {
+    const { token } = await makeLink()
+    expect(runtime.ctx.shares.cached(token)).toBe(false)
+    const first = (await api().get(`/api/shares/${token}`).expect(200)).text
+    expect(runtime.ctx.shares.cached(token)).toBe(true)
+    let queries = 0
+    const count = () => {
+      queries++
+    }
+    runtime.ctx.sequelize.addHook('beforeQuery', 'count-share-queries', count)
+    try {
+      for (let i = 0; i < 5; i++) expect((await api().get(`/api/shares/${token}`).expect(200)).text).toBe(first)
+    } finally {
+      runtime.ctx.sequelize.removeHook('beforeQuery', 'count-share-queries')
+    }
+    expect(queries).toBe(0)
   })
 
-  it('a revoke takes effect at once for a cached link, through the API and from another process alike', async () => {
+  it('a revoke takes effect at once for a cached link, through the API and from a change made straight in the database', async () => {
     const byApi = await makeLink()
     await api().get(`/api/shares/${byApi.token}`).expect(200)
     await api().post(`/api/workspaces/${team.workspace.id}/share-links/${byApi.link.id}/revoke`).set(team.owner.auth).expect(200)
     expect((await api().get(`/api/shares/${byApi.token}`)).body.error.code).toBe('share_revoked')
-    expect(runtime.ctx.shareBodies.has(byApi.link.id)).toBe(false)
 
-    // Another server process revoking writes only the row: this process checks it on every open.
+    // psql, a script or another process writes only the row: the table's trigger notifies every process.
     const elsewhere = await makeLink()
     await api().get(`/api/shares/${elsewhere.token}`).expect(200)
-    expect(runtime.ctx.shareBodies.has(elsewhere.link.id)).toBe(true)
+    expect(runtime.ctx.shares.cached(elsewhere.token)).toBe(true)
     await ShareLink.update({ revokedAt: new Date() }, { where: { id: elsewhere.link.id } })
+    await untilDropped(elsewhere.token)
     expect((await api().get(`/api/shares/${elsewhere.token}`)).body.error.code).toBe('share_revoked')
+  })
+
+  it('deleting the scenario closes its cached links, and undoing the delete opens them again', async () => {
+    const { token, scenario } = await makeLink()
+    await api().get(`/api/shares/${token}`).expect(200)
+    await api().delete(`/api/workspaces/${team.workspace.id}/scenarios/${scenario.id}`).set(team.owner.auth).expect(200)
+    await untilDropped(token)
+    expect((await api().get(`/api/shares/${token}`)).status).toBe(410)
+    await api().post(`/api/workspaces/${team.workspace.id}/scenarios/${scenario.id}/undo-delete`).set(team.owner.auth).expect(200)
+    await untilDropped(token)
+    await api().get(`/api/shares/${token}`).expect(200)
+  })
+
+  it('caches nothing while its notice connection is lost, so a revoke then still shows; caches again once it is back', async () => {
+    const opens = new ShareOpens(runtime.ctx.sequelize, runtime.ctx.shares.counts)
+    const name = `chimeline test notices ${crypto.randomUUID()}`
+    const listener = await listenForShareLinkChanges(runtime.ctx.config.databaseUrl, opens, runtime.ctx.logger, name)
+    const until = async (what: () => boolean) => {
+      for (let i = 0; i < 500 && !what(); i++) await new Promise((resolve) => setTimeout(resolve, 20))
+      expect(what()).toBe(true)
+    }
+    try {
+      const { token, link } = await makeLink()
+      await opens.open(token, null)
+      expect(opens.cached(token)).toBe(true)
+      // The database ends the connection (a restart, a network cut, an administrator).
+      await runtime.ctx.sequelize.query('SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE application_name = $1', { bind: [name] })
+      await until(() => !opens.isListening())
+      expect(opens.cached(token)).toBe(false)
+      await opens.open(token, null)
+      expect(opens.cached(token)).toBe(false)
+      await ShareLink.update({ revokedAt: new Date() }, { where: { id: link.id } })
+      await expect(opens.open(token, null)).rejects.toMatchObject({ status: 410, code: 'share_revoked' })
+      // It reconnects by itself and caches again.
+      await until(() => opens.isListening())
+      const other = await makeLink()
+      await opens.open(other.token, null)
+      expect(opens.cached(other.token)).toBe(true)
+    } finally {
+      await listener.close()
+    }
   })
 
   it('counts only the opens it allows', async () => {
@@ -172,21 +276,69 @@ describe('the cache of shared versions', () => {
     await api().get(`/api/shares/${token}`).expect(401)
     await api().get(`/api/shares/${token}`).set(team.outsider.auth).expect(404)
     await api().get(`/api/shares/${token}`).set(team.viewer.auth).expect(200)
+    await runtime.ctx.shares.counts.flush()
     const row = await ShareLink.findByPk(link.id)
     expect(row?.openCount).toBe(1)
   })
 
-  it('is bounded by entries and by size, dropping the least recently used first', () => {
-    const cache = createShareBodyCache({ entries: 2, size: 10_000 })
-    const body = (title: string, program = '') => ({ number: 1, message: '', author: { id: null, name: 'A' }, createdAt: new Date(0).toISOString(), content: { ...content({ title, program }), description: '', initialData: [], view: { cursor: null, window: null, selected: null } }, run: { status: 'failed', stage: 'assemble', code: 'x', message: '' } }) as SharedBody
-    cache.set('a', body('A'))
-    cache.set('b', body('B'))
-    cache.get('a')
-    cache.set('c', body('C'))
-    expect([...cache.keys()].sort()).toEqual(['a', 'c'])
-    // One body over the whole size budget is not kept at all.
-    cache.set('big', body('Big', 'x'.repeat(20_000)))
-    expect(cache.has('big')).toBe(false)
+  it('is bounded by entries and by size, dropping the least recently used first', async () => {
+    const small = new ShareOpens(runtime.ctx.sequelize, runtime.ctx.shares.counts, { entries: 2, size: 1_000_000 })
+    small.setListening(true)
+    const links = [await makeLink(), await makeLink(), await makeLink()]
+    await small.open(links[0]!.token, null)
+    await small.open(links[1]!.token, null)
+    await small.open(links[0]!.token, null)
+    await small.open(links[2]!.token, null)
+    expect(links.map((l) => small.cached(l.token))).toEqual([true, false, true])
+    // A body over the whole size budget is served but not kept.
+    const tiny = new ShareOpens(runtime.ctx.sequelize, runtime.ctx.shares.counts, { entries: 10, size: 100 })
+    tiny.setListening(true)
+    await tiny.open(links[0]!.token, null)
+    expect(tiny.cached(links[0]!.token)).toBe(false)
+  })
+})
+
+describe('the fast path of warm opens', () => {
+  /** The same listener as runtime.handler, over a stand-in app that marks what reached it. */
+  const fastOnly = () => withShareFastOpen(runtime.ctx, (_req, res) => res.writeHead(599).end(), securityHeaders(runtime.ctx))
+  const comparable = (headers: Record<string, string>) => {
+    const { date: _date, connection: _connection, 'keep-alive': _keepAlive, ...rest } = headers
+    return rest
+  }
+
+  it('answers a warm anyone-link as the full route does: same body and headers, 304 alike', async () => {
+    const { token, link } = await makeLink()
+    const full = await api().get(`/api/shares/${token}`).expect(200)
+    const fast = await request(fastOnly()).get(`/api/shares/${token}`)
+    expect(fast.status).toBe(200)
+    expect(fast.text).toBe(full.text)
+    expect(comparable(fast.headers)).toEqual(comparable(full.headers))
+    const fullNotModified = await api().get(`/api/shares/${token}`).set('If-None-Match', full.headers.etag as string).expect(304)
+    const fastNotModified = await request(fastOnly()).get(`/api/shares/${token}`).set('If-None-Match', full.headers.etag as string)
+    expect(fastNotModified.status).toBe(304)
+    expect(comparable(fastNotModified.headers)).toEqual(comparable(fullNotModified.headers))
+    await runtime.ctx.shares.counts.flush()
+    expect((await ShareLink.findByPk(link.id))?.openCount).toBe(4)
+  })
+
+  it('leaves everything else to the app: cold, unknown, revoked, workspace links, a reader with a token, HEAD, another ETag', async () => {
+    const warm = await makeLink()
+    const cold = await makeLink()
+    const members = await makeLink({ accessMode: 'workspace' })
+    await api().get(`/api/shares/${warm.token}`).expect(200)
+    await api().get(`/api/shares/${members.token}`).set(team.viewer.auth).expect(200)
+    const reachesApp = async (r: request.Test) => expect((await r).status).toBe(599)
+    await reachesApp(request(fastOnly()).get(`/api/shares/${cold.token}`))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${'A'.repeat(43)}`))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${members.token}`).set(team.viewer.auth))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${warm.token}`).set(team.viewer.auth))
+    await reachesApp(request(fastOnly()).head(`/api/shares/${warm.token}`))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${warm.token}`).set('If-None-Match', '"other"'))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${warm.token}/more`))
+    await api().post(`/api/workspaces/${team.workspace.id}/share-links/${warm.link.id}/revoke`).set(team.owner.auth).expect(200)
+    await reachesApp(request(fastOnly()).get(`/api/shares/${warm.token}`))
+    // Through the real listener, the app then answers as before.
+    expect((await request(runtime.handler).get(`/api/shares/${warm.token}`)).status).toBe(410)
   })
 })
 
@@ -197,36 +349,5 @@ describe('token guessing', () => {
       expect(res.status).toBe(404)
       expect(res.body.error).toEqual({ code: 'not_found', message: 'No such share link' })
     }
-  })
-
-  it('tokens that share a long prefix with a real one take no measurably different time than random ones', async () => {
-    // The lookup is by SHA-256 of the token through a unique index: a near miss
-    // hashes to an unrelated value, so it cannot be found faster or slower.
-    const { token } = await makeLink()
-    const random = () => Array.from({ length: 43 }, () => 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-_'[Math.floor(Math.random() * 64)]).join('')
-    const near = () => `${token.slice(0, 40)}${random().slice(0, 3)}`
-    const time = async (t: string) => {
-      const start = process.hrtime.bigint()
-      const res = await api().get(`/api/shares/${t}`)
-      expect(res.status).toBe(404)
-      return Number(process.hrtime.bigint() - start) / 1e6
-    }
-    for (let i = 0; i < 20; i++) await time(random()) // warm up the JIT and the connection pool
-    const a: number[] = []
-    const b: number[] = []
-    // Interleaved in a random order, so drift on the machine falls on both alike.
-    for (let i = 0; i < 100; i++) {
-      if (Math.random() < 0.5) {
-        a.push(await time(random()))
-        b.push(await time(near()))
-      } else {
-        b.push(await time(near()))
-        a.push(await time(random()))
-      }
-    }
-    const median = (xs: number[]) => [...xs].sort((x, y) => x - y)[Math.floor(xs.length / 2)] as number
-    // Loopback on 2 shared cores jitters by a millisecond or so; a short-cut on a prefix would differ by a whole query.
-    console.info(`share token timing, median ms: random ${median(a).toFixed(2)}, near miss ${median(b).toFixed(2)}`)
-    expect(Math.abs(median(a) - median(b))).toBeLessThan(Math.max(1.5, 0.3 * median(a)))
   })
 })

@@ -10,6 +10,8 @@ import type { Runtime } from '../../server/runtime'
 import { IMPORT_MAX_INSTRUCTIONS, UPLOAD_MAX_BYTES, uploadErrorBodySchema, uploadInspectionSchema, uploadResponseSchema } from '../../shared/schemas/upload'
 import { scenarioResponseSchema } from '../../shared/schemas/scenario'
 import { startTestServer } from './helpers'
+import { defaultMachine, parseMachine } from '../../shared/schemas/machine'
+import { findPreset } from '../../shared/sim/presets'
 import { SAXPY, buildTeam, type Team } from './scenario-helpers'
 
 let runtime: Runtime
@@ -55,6 +57,25 @@ describe('uploads of good files', () => {
     const s = scenarioResponseSchema.parse((await request(runtime.app).get(`/api/workspaces/${team.workspace.id}/scenarios/${scenarios[0]?.id}`).set(team.viewer.auth)).body).scenario
     expect(s.content.program).toBe(SAXPY)
     expect(s.run.status).toBe('ok')
+  })
+
+  it("an import runs on the workspace's default preset, or on the preset it names (one default machine everywhere)", async () => {
+    const machineOf = async (res: request.Response) => {
+      const id = uploadResponseSchema.parse(res.body).scenarios[0]?.id
+      return scenarioResponseSchema.parse((await request(runtime.app).get(`/api/workspaces/${team.workspace.id}/scenarios/${id}`).set(team.viewer.auth)).body).scenario.content.machine
+    }
+    // A new workspace's default is the schema's defaults, the same machine the Bench and the CLI start on.
+    expect(await machineOf(await upload('default.s', SAXPY))).toEqual(defaultMachine)
+    expect(await machineOf(await upload('named.s', SAXPY, { preset: 'textbook-1' }))).toEqual(parseMachine(findPreset('textbook-1')!.machine))
+    const bad = await upload('bad-preset.s', SAXPY, { preset: 'no-such-preset' })
+    expect(bad.status).toBe(400)
+    expect(bad.body.error.fields.preset).toMatch(/preset is one of/)
+    await request(runtime.app).patch(`/api/workspaces/${team.workspace.id}`).set(team.owner.auth).send({ defaultPreset: 'starter-4' }).expect(200)
+    try {
+      expect(await machineOf(await upload('workspace-default.s', SAXPY))).toEqual(parseMachine(findPreset('starter-4')!.machine))
+    } finally {
+      await request(runtime.app).patch(`/api/workspaces/${team.workspace.id}`).set(team.owner.auth).send({ defaultPreset: 'default-8' }).expect(200)
+    }
   })
 
   it('an objdump -d listing becomes assembly that assembles back to the same words', async () => {

@@ -14,7 +14,6 @@ import { ALL_WORKSPACE_ROLES, access, currentMembership, currentUser } from '../
 import type { AppContext } from '../../context'
 import type { SecureRouter } from '../../http/secure-router'
 import { exportBundle } from '../../services/scenario-bundles'
-import { diffVersions } from '../../services/scenario-diff'
 import * as scenarios from '../../services/scenarios'
 import { copyFromShare } from '../../services/share-links'
 import { parseQuery } from './query'
@@ -88,7 +87,7 @@ export function scenarioRoutes(ctx: AppContext, r: SecureRouter): void {
   r.get(`${one}/versions/diff`, read, async (req, res) => {
     const q = parseQuery(versionDiffQuerySchema, req)
     const [from, to] = await Promise.all([scenarios.getVersion(ws(req), sid(req), q.from), scenarios.getVersion(ws(req), sid(req), q.to)])
-    res.json({ diff: diffVersions(from, to) })
+    res.json({ diff: await ctx.work.run('diff', { from, to }, ws(req)) })
   })
 
   r.get(`${one}/versions/:number`, read, async (req, res) => {

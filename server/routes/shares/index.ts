@@ -1,9 +1,9 @@
-import type { RequestHandler } from 'express'
+import type { RequestHandler, Router } from 'express'
 import { createAuthenticator } from '../../auth/passport'
 import { access } from '../../auth/access'
 import type { AppContext } from '../../context'
-import type { SecureRouter } from '../../http/secure-router'
-import { openShare, optionalUser } from '../../services/share-links'
+import { secureRouter } from '../../http/secure-router'
+import { optionalUser } from '../../services/share-links'
 
 /** Authenticates when an Authorization header is present; otherwise goes on as an anonymous reader. */
 function optionalAuth(ctx: AppContext): RequestHandler {
@@ -11,11 +11,24 @@ function optionalAuth(ctx: AppContext): RequestHandler {
   return (req, res, next) => (req.headers.authorization ? authenticate(req, res, next) : next())
 }
 
-/** The public reader's endpoint of share links: no sign-in for `anyone` links. */
-export function shareRoutes(ctx: AppContext, r: SecureRouter): void {
+/**
+ * The public reader's endpoint of share links: no sign-in for `anyone` links.
+ * Its own router, which app.ts mounts before the body parsers and the other
+ * routes: a crowd opening one link should cost little more per open than the
+ * cache look-up (README, "Share-link load").
+ */
+export function shareOpenRouter(ctx: AppContext): Router {
+  const r = secureRouter(createAuthenticator(ctx.config.jwtSecret))
   r.get('/shares/:token', { access: access.public, before: [optionalAuth(ctx)] }, async (req, res) => {
-    // A shared version never changes, but revocation must take effect at once.
-    res.setHeader('Cache-Control', 'no-store')
-    res.json({ share: await openShare(ctx, String(req.params.token), optionalUser(req)) })
+    const link = await ctx.shares.open(String(req.params.token), optionalUser(req))
+    // A browser may keep the answer but must ask again before each use (a reload
+    // answers 304 by the ETag), so a revoke or an expiry shows on the next open.
+    // `private`: no shared cache keeps it. The answer names no token.
+    res.setHeader('Cache-Control', 'private, no-cache')
+    res.setHeader('ETag', link.etag)
+    res.setHeader('Content-Type', 'application/json; charset=utf-8')
+    // res.send answers 304 when the request's If-None-Match holds the ETag.
+    res.send(link.body)
   })
+  return r.router
 }

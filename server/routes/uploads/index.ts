@@ -5,6 +5,7 @@ import { access, currentMembership, currentUser } from '../../auth/access'
 import type { AppContext } from '../../context'
 import { ApiError, errors } from '../../http/errors'
 import type { SecureRouter } from '../../http/secure-router'
+import { assertGoodText } from '../../http/text-guard'
 import { issuesToFields } from '../../http/validate'
 import { summaryDto } from '../../services/scenarios'
 import { importUpload, inspectUpload, uploadDto, type ReceivedFile } from '../../services/uploads'
@@ -27,10 +28,15 @@ async function received(req: Request, res: Response): Promise<{ file: ReceivedFi
         }
         return reject(errors.validation({ [err.field ?? 'file']: err.message }, 'The upload form is not valid: send one file in the field "file"'))
       }
+      // busboy's own errors: a multipart type without a boundary, or a body that ends mid-part.
+      const message = String((err as { message?: unknown }).message ?? '')
+      if (/boundary not found/i.test(message)) return reject(errors.validation({ 'Content-Type': 'multipart/form-data needs a boundary parameter (RFC 7578, section 4.1)' }, 'The upload form is not valid'))
+      if (/^(Multipart|Unexpected end of form|Malformed)/i.test(message)) return reject(errors.validation({ file: `The multipart body is cut short or malformed: ${message}` }, 'The upload form is not valid'))
       reject(err)
     })
   })
   if (!req.file) throw errors.validation({ file: 'Choose a file to upload (multipart field "file")' })
+  assertGoodText(req.body)
   const parsed = uploadFieldsSchema.safeParse({ ...(req.body as object) })
   if (!parsed.success) throw errors.validation(issuesToFields(parsed.error.issues))
   // multer gives the name as latin1; browsers send UTF-8.

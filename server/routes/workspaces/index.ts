@@ -2,9 +2,11 @@ import {
   invitationBodySchema,
   memberRoleBodySchema,
   workspaceBodySchema,
+  workspacePatchSchema,
   type InvitationBody,
   type MemberRoleBody,
   type WorkspaceBody,
+  type WorkspacePatch,
 } from '../../../shared/schemas/workspace'
 import { ALL_WORKSPACE_ROLES, access, currentMembership, currentUser } from '../../auth/access'
 import type { AppContext } from '../../context'
@@ -36,8 +38,8 @@ export function workspaceRoutes(ctx: AppContext, r: SecureRouter): void {
     res.json({ workspace: await workspaces.getWorkspace(currentMembership(req)) })
   })
 
-  r.patch('/workspaces/:id', { access: access.workspace(workspacePermissions.rename), body: workspaceBodySchema }, async (req, res) => {
-    res.json({ workspace: await workspaces.renameWorkspace(currentMembership(req), (req.body as WorkspaceBody).name) })
+  r.patch('/workspaces/:id', { access: access.workspace(workspacePermissions.rename), body: workspacePatchSchema }, async (req, res) => {
+    res.json({ workspace: await workspaces.updateWorkspace(currentMembership(req), req.body as WorkspacePatch) })
   })
 
   r.delete('/workspaces/:id', { access: access.workspace(workspacePermissions.delete) }, async (req, res) => {

@@ -34,6 +34,7 @@ export function useBenchBridge() {
     bench.pause()
     bench.exampleId = null
     bench.presetId = null
+    bench.title = c.title
     bench.setSource(c.program)
     bench.machineDraft = parseMachine(c.machine)
     bench.setView(c.view)

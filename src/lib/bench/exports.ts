@@ -37,6 +37,29 @@ export function fileBase(name: string): string {
   return name.replace(/[^A-Za-z0-9_-]+/g, '-').replace(/^-+|-+$/g, '') || 'chimeline'
 }
 
+/**
+ * What an export is called: files after the scenario's title (lower case,
+ * words joined by dashes); without a scenario, after the example the program
+ * is to the character (`example`: pass null once the text was edited, see
+ * exampleOf); else "untitled". The picture's heading keeps the title as
+ * written.
+ *
+ * @example
+ *   exportNames('Ragged vl=20') // { file: 'ragged-vl-20', heading: 'Chimeline: Ragged vl=20' }
+ *   exportNames(null, { id: 'dot', title: 'Dot product' }) // { file: 'dot', heading: 'Chimeline: Dot product' }
+ */
+export function exportNames(title: string | null, example: { id: string; title: string } | null = null): { file: string; heading: string } {
+  const t = title?.trim() ?? ''
+  const file = t
+    .toLowerCase()
+    .replace(/[^\p{L}\p{N}_-]+/gu, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 80)
+  if (file) return { file, heading: `Chimeline: ${t}` }
+  if (example) return { file: fileBase(example.id), heading: `Chimeline: ${example.title}` }
+  return { file: 'untitled', heading: 'Chimeline: untitled' }
+}
+
 export function exportFile(format: ExportFormat, input: ExportInput): ExportFile {
   const base = fileBase(input.name)
   if (format === 's') return { name: `${base}.s`, type: 'text/plain', text: input.source.endsWith('\n') ? input.source : `${input.source}\n` }

@@ -25,8 +25,12 @@ describe('share link helpers', () => {
   })
 
   it.each([
-    [{ cursor: 42, window: { start: 0, end: 120 }, selected: 3 }, 'cycle 42, cycles 0–120, instruction #3'],
+    [{ cursor: 42, window: { start: 0, end: 120 }, selected: 3 }, 'cycle 42, cycles 0–119, instruction #3'],
+    // A 23-cycle run runs cycles 0 to 22 (issue 10: it said 0–23).
+    [{ cursor: 11, window: { start: 0, end: 23 }, selected: null }, 'cycle 11, cycles 0–22'],
+    [{ cursor: 35494, window: null, selected: null }, 'cycle 35,494'],
     [{ cursor: 0, window: null, selected: null }, 'cycle 0'],
+    [{ cursor: 5, window: null, selected: 2, subRows: true, dependencies: true, register: 8 }, 'cycle 5, instruction #2, R/E/W rows, dependency arrows, register v8'],
     [{ cursor: null, window: null, selected: null }, 'the whole run'],
   ])('describes the view %j as "%s"', (view, text) => {
     expect(viewText(view)).toBe(text)

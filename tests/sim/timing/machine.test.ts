@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { checkMachine, defaultMachine, MachineConfigError, parseMachine } from '../../../shared/schemas/machine'
-import { PRESETS } from '../../../shared/sim/presets'
+import { DEFAULT_PRESET_ID, findPreset, PRESETS } from '../../../shared/sim/presets'
 
 describe('the machine configuration schema', () => {
   it('fills in the reference model defaults', () => {
@@ -38,9 +38,16 @@ describe('the machine configuration schema', () => {
     expect(checkMachine(preset.machine).ok).toBe(true)
   })
 
-  it('ships the four presets the product names', () => {
-    expect(PRESETS.map((p) => p.name)).toEqual(['Starter 4-lane', 'Long-vector 8-lane', 'Wide 16-lane', 'Textbook single lane'])
-    const textbook = parseMachine(PRESETS[3]!.machine)
+  it('has one default machine: the default preset is the schema defaults (handbook section 0: 8 lanes, VLEN 8192, 6 banks)', () => {
+    const preset = findPreset(DEFAULT_PRESET_ID)
+    expect(preset).toBeDefined()
+    expect(parseMachine(preset!.machine)).toEqual(defaultMachine)
+    expect(defaultMachine).toMatchObject({ lanes: 8, vlen: 8192, rfBanks: 6, rfPortsPerBank: 1 })
+  })
+
+  it('ships the five presets the product names', () => {
+    expect(PRESETS.map((p) => p.name)).toEqual(['Default 8-lane', 'Starter 4-lane', 'Long-vector 8-lane', 'Wide 16-lane', 'Textbook single lane'])
+    const textbook = parseMachine(PRESETS[4]!.machine)
     expect(textbook).toMatchObject({ lanes: 1, chaining: true, memoryPorts: 1 })
   })
 })

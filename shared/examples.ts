@@ -1,5 +1,5 @@
 /**
- * The examples menu: the shipped programs in examples/*.s, each titled by the
+ * The shipped programs in examples/*.s (the Bench menu and the demo seed), each titled by the
  * first line of its header comment.
  *
  * @example
@@ -28,4 +28,12 @@ export function exampleList(files: Record<string, string>): Example[] {
     return i < 0 ? ORDER.length : i
   }
   return list.sort((a, b) => rank(a.id) - rank(b.id) || a.id.localeCompare(b.id))
+}
+
+/** The label of the examples menu when the program is none of them (edited, or a scenario's own). */
+export const CUSTOM_PROGRAM = 'Custom program'
+
+/** The example whose text the program is, to the character, or null: an edited example is a custom program. */
+export function exampleOf(source: string, examples: readonly Example[]): Example | null {
+  return examples.find((e) => e.source === source) ?? null
 }
