@@ -83,7 +83,7 @@ test.describe('versions and workspace settings', () => {
     await page.getByRole('button', { name: 'History' }).click()
     const diff = page.getByTestId('version-diff')
     await expect(diff).toContainText('# elements to go')
-    await expect(diff).toContainText('lanes')
+    await expect(diff).toContainText('Lanes') // the machine form's label, not the field name (issue 10)
     await expect(diff).toContainText('cycles')
     await expect(page.getByTestId('version-list')).toContainText('four lanes')
     await expect(diff).not.toContainText('did not run')
