@@ -21,6 +21,12 @@
  * passes with identical lanes timed once. bank-conflicts.s was added later
  * (GOLDEN_WRITE=add).
  *
+ * Model version 2 (issue 11) re-recorded: every stall digest (lanes starved
+ * by the front end now stall, e.g. in the dispatch cycle 0; every timing
+ * digest unchanged), every case on the wide-16 preset (memoryPorts 2: one
+ * shared load bus and one store bus) and the cases of reduction.s and saxpy.s
+ * (FP32 work: the peak follows the element width).
+ *
  * A deliberate change of the stall rule re-records only the stall digests (and
  * fails if any timing digest moved):
  *   GOLDEN_WRITE=stalls npx vitest run tests/sim/timing/golden.test.ts
