@@ -37,7 +37,8 @@ function wholeMove(nr: number): Handler {
     const vd = checkGroup(ins.operands.vd, nr, 'vd', ins)
     const vs2 = checkGroup(ins.operands.vs2, nr, 'vs2', ins)
     m.u8.copyWithin(vd * m.vlenb, vs2 * m.vlenb, (vs2 + nr) * m.vlenb)
-    if (rec.on) rec.vector(ins, { eew: 8, vl: nr * m.vlenb, dstRegs: regGroup(vd, nr), srcRegs: [regGroup(vs2, nr)], wholeRegisters: nr })
+    // Timed as nr registers of SEW-wide elements: nr x VLEN / SEW of them, whatever vl is.
+    if (rec.on) rec.vector(ins, { vl: (nr * m.vlenb * 8) / m.vtype.sew, dstRegs: regGroup(vd, nr), srcRegs: [regGroup(vs2, nr)], wholeRegisters: nr })
   }
 }
 

@@ -21,8 +21,13 @@ export function execUnitOf(op: VectorOp): ExecUnit {
   return op.unit === 'mul' || op.unit === 'fpu' || op.unit === 'div' ? op.unit : 'alu'
 }
 
+/** Bits an element reads and writes: 1 for masks, else SEW, or the EEW of widening, narrowing and extending ops (docs/model.md). */
 export function maskBits(op: VectorOp): { src: number; dst: number; maskOnly: boolean } {
-  return { src: MASK_SRC.test(op.op) ? 1 : op.sew, dst: MASK_DST.test(op.op) ? 1 : op.sew, maskOnly: MASK_ONLY.test(op.op) }
+  return {
+    src: MASK_SRC.test(op.op) ? 1 : (op.widths?.vs2 ?? op.sew),
+    dst: MASK_DST.test(op.op) ? 1 : (op.widths?.dst ?? op.sew),
+    maskOnly: MASK_ONLY.test(op.op),
+  }
 }
 
 export class UnitInst extends Inst {

@@ -57,6 +57,7 @@ describe('the stack, the entry point and the stream', () => {
     expect(by('vlseg3e16.v').dstRegs).toEqual([8, 9, 10])
     // VLEN 128 = 16 bytes a register: two registers are 8 words of 32 bits, whatever vl says.
     expect(by('vl2re32.v')).toMatchObject({ wholeRegisters: 2, vl: 8, eew: 32 })
-    expect(by('vmv4r.v')).toMatchObject({ wholeRegisters: 4, dstRegs: [16, 17, 18, 19] })
+    // Four registers of 16-bit elements (the SEW in force): 4 x 128 / 16 = 32 elements.
+    expect(by('vmv4r.v')).toMatchObject({ wholeRegisters: 4, vl: 32, dstRegs: [16, 17, 18, 19] })
   })
 })
