@@ -201,6 +201,9 @@ test.describe('views on the Bench', () => {
     await page.locator('#save-description').fill('Now *slower*.')
     await page.getByRole('button', { name: 'Save', exact: true }).last().click()
     await expect(page.getByText('Saved version 2.')).toBeVisible()
+    // One Detach button, with a tooltip that says what it does.
+    await expect(page.getByTestId('detach')).toHaveCount(1)
+    await expect(page.getByTestId('detach')).toHaveAttribute('title', /next Save makes a new scenario/)
     await expect(page.getByTestId('scenario-title')).toHaveText(`${run} renamed`)
     await expect(desc.locator('em')).toHaveText('slower')
     await screenshot(page, 'bench-description')
