@@ -26,7 +26,9 @@ export default defineConfig({
     setupFiles: ['tests/setup/fast-check.ts'],
     // Integration tests share one PostgreSQL database: run files one at a time.
     fileParallelism: false,
-    testTimeout: 30_000,
-    hookTimeout: 60_000,
+    // Generous: the property and corpus tests take seconds on a quiet machine and
+    // several times longer beside another CPU-heavy process; a hang still fails.
+    testTimeout: 180_000,
+    hookTimeout: 120_000,
   },
 })

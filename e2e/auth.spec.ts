@@ -83,6 +83,9 @@ test.describe('password reset by e-mail', () => {
     await user.getByLabel('Password again').fill('first-password-2026')
     await user.getByRole('button', { name: 'Create account' }).click()
     await expect(user).toHaveURL(/\/bench$/)
+    // Sign-up makes a personal workspace, so Save works from the first minute.
+    await expect(user.getByTestId('workspace-switcher')).toContainText("Rita Reset's workspace")
+    await expect(user.getByRole('button', { name: 'Save', exact: true })).toBeEnabled()
     await userMenu(user, 'Sign out')
 
     await user.getByRole('link', { name: 'Forgot your password?' }).click()

@@ -81,7 +81,7 @@ test.describe('the Bench', () => {
       if ((await c.getAttribute('data-renderer')) === 'svg') {
         await expect(c.locator('g[data-lane][data-instruction]')).toHaveCount(expectedGroups(trace))
       }
-      await expect(page.getByTestId('metric-cycles')).toHaveText(String(trace.cycles))
+      await expect(page.getByTestId('metric-cycles')).toHaveText(trace.cycles.toLocaleString('en-US'))
       await expect(page.getByTestId('estimate-note')).toContainText('not sign-off for silicon')
     }
     expect(problems).toEqual([])
@@ -127,7 +127,7 @@ test.describe('the Bench', () => {
     await expect(page.getByTestId('preset-select')).toContainText('Custom machine')
     await screenshot(page, 'bench-custom-machine')
     const trace = modelRun('saxpy', { ...PRESET.machine, lanes: 4 })
-    await expect(page.getByTestId('metric-cycles')).toHaveText(String(trace.cycles))
+    await expect(page.getByTestId('metric-cycles')).toHaveText(trace.cycles.toLocaleString('en-US'))
     // Out of range: the schema's message under the field, and no run.
     await lanes.fill('99')
     await lanes.press('Enter')
@@ -149,7 +149,7 @@ test.describe('the Bench', () => {
     expect(machine.hex).not.toBe(element.hex)
     await openBench(page)
     await pickExample(page, 'reduction')
-    await expect(page.getByTestId('metric-cycles')).toHaveText(String(element.cycles))
+    await expect(page.getByTestId('metric-cycles')).toHaveText(element.cycles.toLocaleString('en-US'))
     await page.locator(`tr[data-index="${element.pos}"]`).first().click() // selects v16, the vfredusum destination
     const first = page.getByTestId('inspector').locator('ol.elements li').first()
     await expect(first).toHaveAttribute('title', new RegExp(`^element 0: ${element.hex}`))
@@ -157,7 +157,7 @@ test.describe('the Bench', () => {
     await page.getByTestId('fp-order').getByText("this machine's order").click()
     await waitForRunAfter(page, before)
     await expect(first).toHaveAttribute('title', new RegExp(`^element 0: ${machine.hex}`))
-    await expect(page.getByTestId('metric-cycles')).toHaveText(String(machine.cycles))
+    await expect(page.getByTestId('metric-cycles')).toHaveText(machine.cycles.toLocaleString('en-US'))
     // The dependency overlay of the selected vfredusum, from the run's register use: its loads' and v0's producers, its store.
     await page.getByLabel('Dependency arrows for the selected instruction').click()
     await expect.poll(() => chart(page).getByTestId('lane-chart-arrow').count()).toBeGreaterThan(0)
@@ -181,7 +181,7 @@ test.describe('the Bench', () => {
   test('exports the chart, the trace and the program as well-formed files', async ({ page }) => {
     await openBench(page)
     await pickExample(page, 'dot')
-    await expect(page.getByTestId('metric-cycles')).toHaveText(String(modelRun('dot').cycles))
+    await expect(page.getByTestId('metric-cycles')).toHaveText(modelRun('dot').cycles.toLocaleString('en-US'))
     const grab = async (label: string): Promise<{ name: string; bytes: Buffer }> => {
       await page.getByTestId('export').click()
       const wait = page.waitForEvent('download')
@@ -260,7 +260,7 @@ test.describe('the Bench', () => {
     await openBench(page)
     await pickExample(page, 'saxpy')
     const { metrics } = modelRun('saxpy')
-    await expect(page.getByTestId('metric-cycles')).toHaveText(String(metrics.cycles))
+    await expect(page.getByTestId('metric-cycles')).toHaveText(metrics.cycles.toLocaleString('en-US'))
     const banks = page.getByTestId('bank-utilization').getByRole('listitem')
     await expect(banks).toHaveCount(metrics.bankUtilization.length)
     for (const [b, v] of metrics.bankUtilization.entries()) {
@@ -277,7 +277,7 @@ test.describe('the Bench', () => {
     await page.setViewportSize({ width: 1440, height: 1000 })
     await openBench(page)
     await pickExample(page, 'reduction')
-    await expect(page.getByTestId('metric-cycles')).toHaveText(String(modelRun('reduction').cycles))
+    await expect(page.getByTestId('metric-cycles')).toHaveText(modelRun('reduction').cycles.toLocaleString('en-US'))
     await page.getByTestId('cursor-cycle').click()
     for (let i = 0; i < 20; i++) await page.keyboard.press('Shift+ArrowRight')
     await page.keyboard.press('?')

@@ -130,14 +130,16 @@ test('the dependency overlay draws arrows from producers to consumers of the sel
   await expect(chart.getByTestId('lane-chart-arrow')).toHaveCount(0)
 })
 
-test('the wheel zooms, a drag pans and the keys zoom, pan and fit', async ({ page }) => {
+test('Ctrl + wheel zooms (a plain wheel scrolls the page), a drag pans and the keys zoom, pan and fit', async ({ page }) => {
   const chart = await probe(page, 'example=long-stream&lanes=8')
   const full = await span(chart)
   const bars = chart.locator('.lc-bars')
   const box = (await bars.boundingBox())!
   await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2)
+  await page.keyboard.down('Control')
   await page.mouse.wheel(0, -300)
   await page.mouse.wheel(0, -300)
+  await page.keyboard.up('Control')
   await expect.poll(() => span(chart)).toBeLessThan(full / 2)
   await expect(page.locator('#window')).not.toHaveText('')
   const start = await num(chart, 'data-window-start')

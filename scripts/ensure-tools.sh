@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Installs the Debian packages Chimeline needs when they are missing.
-# Usage: scripts/ensure-tools.sh [postgres] [chromium] [riscv]
+# Usage: scripts/ensure-tools.sh [postgres] [chromium] [riscv] [clang]
 # As root it runs apt-get; otherwise it prints the one command to run.
 set -euo pipefail
 
@@ -14,6 +14,7 @@ for w in "${want[@]}"; do
       command -v riscv64-linux-gnu-as >/dev/null 2>&1 || pkgs+=(binutils-riscv64-linux-gnu)
       command -v qemu-riscv64 >/dev/null 2>&1 || pkgs+=(qemu-user)
       ;;
+    clang) command -v clang-16 >/dev/null 2>&1 || pkgs+=(clang-16) ;;
     *) echo "ensure-tools: unknown tool group '$w'" >&2; exit 2 ;;
   esac
 done

@@ -7,8 +7,8 @@ cd "$(dirname "$0")/.."
 
 step() { printf '\n== %s\n' "$*"; }
 
-step "Debian tools (PostgreSQL, Chromium, RISC-V binutils and QEMU)"
-if ! bash scripts/ensure-tools.sh postgres chromium riscv; then
+step "Debian tools (PostgreSQL, Chromium, RISC-V binutils and QEMU, clang-16)"
+if ! bash scripts/ensure-tools.sh postgres chromium riscv clang; then
   if [ "${CI:-}" = "true" ]; then echo "CI: required tools are missing" >&2; exit 1; fi
 fi
 

@@ -7,6 +7,7 @@ import fs from 'node:fs'
 import os from 'node:os'
 import path from 'node:path'
 import { dataDir, databaseUrl, mainCluster } from './db/cluster'
+import type { MailLimits } from './services/mail-limits'
 
 export interface ServerConfig {
   host: string
@@ -20,6 +21,8 @@ export interface ServerConfig {
   /** Port of the in-process SMTP sink; 0 picks a free one. */
   smtpSinkPort: number
   mailFrom: string
+  /** What an account may have the server e-mail (services/mail-limits.ts). */
+  mailLimits: MailLimits
   /** Attempts per client address and window on sign-in, sign-up, forgot and reset. */
   authRateLimit: { max: number; windowMs: number }
   /** Failed sign-ins per account and window (auth/signin-guard.ts). */
@@ -37,9 +40,9 @@ export interface ServerConfig {
   secureCookies: boolean
   seedDemo: boolean
   /** The worker threads that compute saved versions' run summaries (services/run-pool.ts). */
-  saveRuns: { threads: number; queue: number; perWorkspace: number; timeLimitMs: number }
-  /** The worker threads of other request work that can take long (services/work-pool.ts: version diffs). */
-  work: { threads: number; queue: number; perOwner: number; timeLimitMs: number }
+  saveRuns: { threads: number; queue: number; perWorkspace: number; perAccount: number; timeLimitMs: number }
+  /** The worker threads of other request work that can take long (services/work-pool.ts: version diffs, reading uploads). */
+  work: { threads: number; queue: number; perOwner: number; perAccount: number; timeLimitMs: number }
 }
 
 /** One thread per core the request thread does not need, at least one, at most four. */
@@ -89,6 +92,20 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
     smtpUrl: env.SMTP_URL || null,
     smtpSinkPort: intEnv(env, 'SMTP_SINK_PORT', 2525),
     mailFrom: env.MAIL_FROM ?? 'Chimeline <no-reply@chimeline.localhost>',
+    mailLimits: {
+      enabled: (env.MAIL_LIMITS ?? 'on') !== 'off',
+      regular: {
+        perHour: intEnv(env, 'MAIL_LIMIT_PER_HOUR', 50),
+        perDay: intEnv(env, 'MAIL_LIMIT_PER_DAY', 200),
+        recipientsPerMessage: Math.max(1, intEnv(env, 'MAIL_RECIPIENTS_MAX', 10)),
+      },
+      newAccountDays: intEnv(env, 'MAIL_NEW_ACCOUNT_DAYS', 3),
+      newAccount: {
+        perHour: intEnv(env, 'MAIL_NEW_ACCOUNT_PER_HOUR', 10),
+        perDay: intEnv(env, 'MAIL_NEW_ACCOUNT_PER_DAY', 30),
+        recipientsPerMessage: Math.max(1, intEnv(env, 'MAIL_NEW_ACCOUNT_RECIPIENTS_MAX', 3)),
+      },
+    },
     authRateLimit: {
       max: intEnv(env, 'AUTH_RATE_LIMIT_MAX', 10),
       windowMs: intEnv(env, 'AUTH_RATE_LIMIT_WINDOW_MS', 15 * 60 * 1000),
@@ -108,12 +125,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
       threads: Math.max(1, intEnv(env, 'SAVE_RUN_THREADS', defaultRunThreads())),
       queue: intEnv(env, 'SAVE_RUN_QUEUE', 16),
       perWorkspace: Math.max(1, intEnv(env, 'SAVE_RUN_PER_WORKSPACE', 3)),
+      perAccount: Math.max(1, intEnv(env, 'SAVE_RUN_PER_ACCOUNT', 6)),
       timeLimitMs: Math.max(1, intEnv(env, 'SAVE_RUN_TIME_LIMIT_MS', 20_000)),
     },
     work: {
       threads: Math.max(1, intEnv(env, 'WORK_THREADS', 1)),
       queue: intEnv(env, 'WORK_QUEUE', 32),
       perOwner: Math.max(1, intEnv(env, 'WORK_PER_WORKSPACE', 4)),
+      perAccount: Math.max(1, intEnv(env, 'WORK_PER_ACCOUNT', 8)),
       timeLimitMs: Math.max(1, intEnv(env, 'WORK_TIME_LIMIT_MS', 10_000)),
     },
   }

@@ -16,7 +16,7 @@ export interface AppContext {
   logger: Logger
   /** Computes saved versions' run summaries on worker threads. */
   runs: RunPool
-  /** Other request work that can take long (version diffs), on worker threads with a time limit. */
+  /** Other request work that can take long (version diffs, reading uploads), on worker threads with a time limit. */
   work: WorkPool
   /** Failed sign-ins per account. */
   signInGuard: SignInGuard

@@ -1,9 +1,10 @@
+import http, { type RequestListener, type Server } from 'node:http'
 import { createSweepQueue } from './services/sweeps-queue'
-import type { Server } from 'node:http'
 import type { AddressInfo } from 'node:net'
 import type { Sequelize } from 'sequelize'
-import { buildApp } from './app'
+import { buildApp, securityHeaders } from './app'
 import { createSignInGuard } from './auth/signin-guard'
+import { withShareFastOpen } from './routes/shares/fast-open'
 import type { ServerConfig } from './config'
 import type { AppContext } from './context'
 import { connect } from './db/connection'
@@ -19,6 +20,8 @@ import { createWorkPool } from './services/work-pool'
 export interface Runtime {
   ctx: AppContext
   app: ReturnType<typeof buildApp>
+  /** What the HTTP server runs: warm share opens (routes/shares/fast-open.ts), else the app. */
+  handler: RequestListener
   /** Set when SMTP_URL is unset: the in-process sink that feeds the Outbox. */
   sink: SmtpSink | null
   close(): Promise<void>
@@ -49,6 +52,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   return {
     ctx,
     app,
+    handler: withShareFastOpen(ctx, app, securityHeaders(ctx)),
     sink,
     async close() {
       // Before the connection closes: the opens counted since the last flush.
@@ -68,7 +72,9 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
 export async function listen(runtime: Runtime): Promise<{ server: Server; url: string }> {
   const { host, port } = runtime.ctx.config
   const server = await new Promise<Server>((resolve, reject) => {
-    const s = runtime.app.listen(port, host, (err?: Error) => (err ? reject(err) : resolve(s)))
+    const s = http.createServer(runtime.handler)
+    s.once('error', reject)
+    s.listen(port, host, () => resolve(s))
   })
   const address = server.address() as AddressInfo
   return { server, url: `http://${host}:${address.port}` }

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize'
 import { Invitation } from './invitation'
+import { MailSend } from './mail-send'
 import { Membership } from './membership'
 import { OutboxMessage } from './outbox-message'
 import { PasswordReset } from './password-reset'
@@ -13,11 +14,11 @@ import { User } from './user'
 import { UserSession } from './user-session'
 import { Workspace } from './workspace'
 
-export { Invitation, Membership, OutboxMessage, PasswordReset, RefreshToken, Scenario, ScenarioVersion, ShareLink, Sweep, Upload, User, UserSession, Workspace }
+export { Invitation, MailSend, Membership, OutboxMessage, PasswordReset, RefreshToken, Scenario, ScenarioVersion, ShareLink, Sweep, Upload, User, UserSession, Workspace }
 
 /** Binds every model to the connection and declares the associations. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage, Upload, Scenario, ScenarioVersion, ShareLink, UserSession, Sweep]) {
+  for (const model of [User, Workspace, Membership, Invitation, PasswordReset, RefreshToken, OutboxMessage, Upload, Scenario, ScenarioVersion, ShareLink, UserSession, MailSend, Sweep]) {
     model.initModel(sequelize)
   }
   Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' })

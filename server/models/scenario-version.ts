@@ -12,6 +12,9 @@ export class ScenarioVersion extends Model<InferAttributes<ScenarioVersion>, Inf
   declare content: ScenarioContent
   declare run: RunSummary
   declare createdAt: CreationOptional<Date>
+  /** Imported versions only: the author and date their bundle claimed (shown as "originally"). */
+  declare originalAuthorName: CreationOptional<string | null>
+  declare originalCreatedAt: CreationOptional<Date | null>
 
   static initModel(sequelize: Sequelize): void {
     ScenarioVersion.init(
@@ -25,6 +28,8 @@ export class ScenarioVersion extends Model<InferAttributes<ScenarioVersion>, Inf
         content: { type: DataTypes.JSONB, allowNull: false },
         run: { type: DataTypes.JSONB, allowNull: false },
         createdAt: DataTypes.DATE,
+        originalAuthorName: { type: DataTypes.STRING(200), allowNull: true },
+        originalCreatedAt: { type: DataTypes.DATE, allowNull: true },
       },
       { sequelize, tableName: 'scenario_versions', underscored: true, updatedAt: false },
     )

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize'
+import type { Expectation } from '../../shared/schemas/expectation'
 import type { Machine } from '../../shared/schemas/machine'
 import type { InitialDataEntry, RunSummary, ScenarioView } from '../../shared/schemas/scenario'
 import type { User } from './user'
@@ -18,6 +19,7 @@ export class Scenario extends Model<InferAttributes<Scenario>, InferCreationAttr
   declare machine: Machine
   declare initialData: InitialDataEntry[]
   declare view: ScenarioView
+  declare expectations: CreationOptional<Expectation[]>
   declare run: RunSummary
   declare authorId: string | null
   declare version: number
@@ -39,6 +41,7 @@ export class Scenario extends Model<InferAttributes<Scenario>, InferCreationAttr
         machine: { type: DataTypes.JSONB, allowNull: false },
         initialData: { type: DataTypes.JSONB, allowNull: false },
         view: { type: DataTypes.JSONB, allowNull: false },
+        expectations: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         run: { type: DataTypes.JSONB, allowNull: false },
         authorId: { type: DataTypes.UUID, allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false },

@@ -28,6 +28,11 @@ export interface FairPoolLimits {
   queue: number
   /** Tasks of one owner in flight (running and waiting). */
   perOwner: number
+  /**
+   * Tasks of one account in flight, over all its owners: an account may make
+   * any number of workspaces, and must not fill the queue through them.
+   */
+  perAccount: number
   /** Wall-clock limit of one task, from its start on a thread. */
   timeLimitMs: number
 }
@@ -41,10 +46,11 @@ export interface Started {
 export class TaskTimeLimit extends Error {}
 
 export interface FairPool<T, R> {
-  run(task: T, owner: string): Promise<R>
+  /** Runs a task for an owner (a workspace), asked by an account (a user). */
+  run(task: T, owner: string, account: string): Promise<R>
   /** Tasks in flight (running and waiting). */
   readonly inFlight: number
-  /** Tasks that reached a thread since the pool was made (tests use it to prove that work was skipped). */
+  /** Tasks handed to a thread since the pool was made (tests use it to prove where work ran, or that it was skipped). */
   readonly started: number
   close(): Promise<void>
 }
@@ -52,6 +58,7 @@ export interface FairPool<T, R> {
 interface Job<T, R> {
   task: T
   owner: string
+  account: string
   resolve: (r: R) => void
   reject: (e: unknown) => void
 }
@@ -79,6 +86,7 @@ export function createFairPool<T extends object, R>(workerUrl: URL, limits: Fair
   /** Owners with waiting tasks, in turn order. */
   const ring: string[] = []
   const perOwner = new Map<string, number>()
+  const perAccount = new Map<string, number>()
   /** When each owner with tasks in flight last had one started (a counter, not a clock). */
   const lastServed = new Map<string, number>()
   let serves = 0
@@ -113,6 +121,7 @@ export function createFairPool<T extends object, R>(workerUrl: URL, limits: Fair
       else waiting.delete(owner)
       lastServed.set(owner, ++serves)
       running++
+      started++
       execute(job).finally(() => {
         running--
         const n = (perOwner.get(job.owner) ?? 1) - 1
@@ -121,6 +130,9 @@ export function createFairPool<T extends object, R>(workerUrl: URL, limits: Fair
           perOwner.delete(job.owner)
           lastServed.delete(job.owner)
         }
+        const a = (perAccount.get(job.account) ?? 1) - 1
+        if (a) perAccount.set(job.account, a)
+        else perAccount.delete(job.account)
         next()
       })
     }
@@ -131,7 +143,6 @@ export function createFairPool<T extends object, R>(workerUrl: URL, limits: Fair
     const { port1, port2 } = new MessageChannel()
     let timer: NodeJS.Timeout | undefined
     port1.once('message', () => {
-      started++
       timer = setTimeout(() => stop.abort(), limits.timeLimitMs)
     })
     try {
@@ -144,20 +155,26 @@ export function createFairPool<T extends object, R>(workerUrl: URL, limits: Fair
     }
   }
 
-  function run(task: T, owner: string): Promise<R> {
+  function run(task: T, owner: string, account: string): Promise<R> {
     const mine = perOwner.get(owner) ?? 0
     if (mine >= limits.perOwner) {
       return Promise.reject(busy(`This workspace has ${mine} ${what} in progress already, its share of the server; nothing was done: try again in a moment`))
+    }
+    const theirs = perAccount.get(account) ?? 0
+    if (theirs >= limits.perAccount) {
+      return Promise.reject(busy(`Your account has ${theirs} ${what} in progress already, its share of the server; nothing was done: try again in a moment`))
     }
     if (running >= limits.threads && queued >= limits.queue) {
       return Promise.reject(busy(`The server is busy with ${running + queued} ${what}, its limit; nothing was done: try again in a moment`))
     }
     perOwner.set(owner, mine + 1)
+    perAccount.set(account, theirs + 1)
     return new Promise<R>((resolve, reject) => {
+      const job = { task, owner, account, resolve, reject }
       const jobs = waiting.get(owner)
-      if (jobs) jobs.push({ task, owner, resolve, reject })
+      if (jobs) jobs.push(job)
       else {
-        waiting.set(owner, [{ task, owner, resolve, reject }])
+        waiting.set(owner, [job])
         ring.push(owner)
       }
       queued++

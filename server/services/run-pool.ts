@@ -28,6 +28,8 @@ export interface RunPoolLimits {
   queue: number
   /** Runs of one workspace in flight (running and waiting). */
   perWorkspace: number
+  /** Runs one account asked for in flight, over all its workspaces. */
+  perAccount: number
   /** Wall-clock limit of one run, from its start on a worker. */
   timeLimitMs: number
 }
@@ -38,7 +40,7 @@ export interface RunPool {
    * initial data that does not fit, 503 when the workspace's share or the
    * queue is full.
    */
-  summarize(content: RunTask['content'], workspaceId: string): Promise<RunSummary>
+  summarize(content: RunTask['content'], workspaceId: string, userId: string): Promise<RunSummary>
   /** Runs in flight (running and queued). */
   readonly inFlight: number
   /** Runs that reached a thread since start. */
@@ -49,15 +51,15 @@ export interface RunPool {
 export function createRunPool(limits: RunPoolLimits): RunPool {
   const pool = createFairPool<Omit<RunTask, 'started'>, RunOutcome>(
     new URL('./run-worker.ts', import.meta.url),
-    { threads: limits.threads, queue: limits.queue, perOwner: limits.perWorkspace, timeLimitMs: limits.timeLimitMs },
+    { threads: limits.threads, queue: limits.queue, perOwner: limits.perWorkspace, perAccount: limits.perAccount, timeLimitMs: limits.timeLimitMs },
     'run summaries',
   )
   const seconds = `${limits.timeLimitMs / 1000} s`
 
-  async function summarize(content: RunTask['content'], workspaceId: string): Promise<RunSummary> {
+  async function summarize(content: RunTask['content'], workspaceId: string, userId: string): Promise<RunSummary> {
     let outcome: RunOutcome
     try {
-      outcome = await pool.run({ content }, workspaceId)
+      outcome = await pool.run({ content }, workspaceId, userId)
     } catch (err) {
       if (err instanceof TaskTimeLimit) {
         return { status: 'failed', stage: 'simulate', code: 'time_limit', message: `The run took longer than ${seconds}, the server's limit for a saved version's summary; the version is kept without its figures (run it on the Bench to see them)` }

@@ -4,6 +4,8 @@
  * changed, the other content fields that changed, and the run metrics before
  * and after. The route runs it on the work pool (work-tasks.ts).
  */
+import { describeExpectation } from '../../shared/expectations/describe'
+import type { Expectation } from '../../shared/schemas/expectation'
 import type { ScenarioVersion, VersionDiff } from '../../shared/schemas/scenario'
 import { lineDiff } from './line-diff'
 
@@ -13,6 +15,17 @@ function flatten(value: unknown, prefix = '', out: Record<string, unknown> = {})
     for (const [k, v] of Object.entries(value as Record<string, unknown>)) flatten(v, prefix ? `${prefix}.${k}` : k, out)
   } else out[prefix] = value
   return out
+}
+
+/** Claims of `a` that `b` lacks, counted as a multiset (a claim kept twice and dropped once is one removal). */
+function missingFrom(a: Expectation[], b: Expectation[]): string[] {
+  const left = new Map<string, number>()
+  for (const e of b) left.set(JSON.stringify(e), (left.get(JSON.stringify(e)) ?? 0) + 1)
+  return a.filter((e) => {
+    const n = left.get(JSON.stringify(e)) ?? 0
+    if (n > 0) left.set(JSON.stringify(e), n - 1)
+    return n === 0
+  }).map(describeExpectation)
 }
 
 export function diffVersions(from: ScenarioVersion, to: ScenarioVersion): VersionDiff {
@@ -30,6 +43,7 @@ export function diffVersions(from: ScenarioVersion, to: ScenarioVersion): Versio
     program: lineDiff(from.content.program, to.content.program),
     machine,
     fields,
+    expectations: { added: missingFrom(to.content.expectations, from.content.expectations), removed: missingFrom(from.content.expectations, to.content.expectations) },
     metrics: { before: from.run, after: to.run },
   }
 }

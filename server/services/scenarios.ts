@@ -30,6 +30,7 @@ export function contentOf(s: Scenario): ScenarioContent {
     machine: s.machine,
     initialData: s.initialData,
     view: s.view,
+    expectations: s.expectations,
   })
 }
 
@@ -63,6 +64,8 @@ export function summaryDto(s: Scenario): ScenarioSummary {
   }
 }
 
+const originally = (v: ScenarioVersion) => (v.originalAuthorName !== null && v.originalCreatedAt ? { author: v.originalAuthorName, createdAt: v.originalCreatedAt.toISOString() } : null)
+
 export function versionDto(v: ScenarioVersion): VersionDto {
   return {
     number: v.number,
@@ -71,11 +74,12 @@ export function versionDto(v: ScenarioVersion): VersionDto {
     createdAt: v.createdAt.toISOString(),
     content: scenarioContentSchema.parse(v.content),
     run: v.run,
+    originally: originally(v),
   }
 }
 
 function versionSummaryDto(v: ScenarioVersion): ScenarioVersionSummary {
-  return { number: v.number, message: v.message, author: { id: v.authorId, name: v.authorName }, createdAt: v.createdAt.toISOString(), run: v.run }
+  return { number: v.number, message: v.message, author: { id: v.authorId, name: v.authorName }, createdAt: v.createdAt.toISOString(), run: v.run, originally: originally(v) }
 }
 
 /** `%`, `_` and `\` are ILIKE wildcards; a search for them means the characters. */
@@ -143,7 +147,7 @@ export interface NewScenarioOptions {
 
 /** Creates a scenario with its version 1. */
 export async function createScenario(ctx: AppContext, user: User, workspaceId: string, body: CreateScenarioBody, options: NewScenarioOptions = {}): Promise<Scenario> {
-  const run = options.run ?? (await ctx.runs.summarize(body.content, workspaceId))
+  const run = options.run ?? (await ctx.runs.summarize(body.content, workspaceId, user.id))
   const work = async (transaction: Transaction) => {
     const c = body.content
     const scenario = await Scenario.create(
@@ -176,7 +180,7 @@ export async function saveScenario(ctx: AppContext, user: User, workspaceId: str
   if (current.version !== body.baseVersion) await conflict(current.id, body)
   // The run is CPU work on a worker thread: do it before taking the row lock,
   // and check the version again under the lock, since someone may have saved meanwhile.
-  const run = await ctx.runs.summarize(body.content, workspaceId)
+  const run = await ctx.runs.summarize(body.content, workspaceId, user.id)
   return ctx.sequelize.transaction(async (transaction) => {
     const scenario = await findScenario(workspaceId, scenarioId, { transaction, lock: true })
     if (scenario.version !== body.baseVersion) await conflict(scenario.id, body, transaction)

@@ -17,7 +17,8 @@ export interface ShareLinkListener {
 
 const RETRY_MS = { first: 500, max: 30_000 }
 
-export async function listenForShareLinkChanges(databaseUrl: string, opens: ShareOpens, logger: Logger): Promise<ShareLinkListener> {
+/** `name` is the connection's application_name, as pg_stat_activity shows it. */
+export async function listenForShareLinkChanges(databaseUrl: string, opens: ShareOpens, logger: Logger, name = 'chimeline share-link notices'): Promise<ShareLinkListener> {
   let client: pg.Client | null = null
   let closed = false
   let retryMs = RETRY_MS.first
@@ -37,7 +38,7 @@ export async function listenForShareLinkChanges(databaseUrl: string, opens: Shar
 
   async function connect(): Promise<void> {
     retry = null
-    const c = new pg.Client({ connectionString: databaseUrl, keepAlive: true })
+    const c = new pg.Client({ connectionString: databaseUrl, keepAlive: true, application_name: name })
     client = c
     c.on('notification', (msg) => {
       if (msg.channel === SHARE_LINK_CHANNEL) opens.invalidate(msg.payload ?? '*')

@@ -125,9 +125,25 @@ export class ShareOpens {
     return entry
   }
 
+  /**
+   * The fast path's look-up (routes/shares/fast-open.ts): a cached `anyone`
+   * link that opens now (the caller counts the open if it answers); null for
+   * anything else, which the full route then answers. No database, no await.
+   */
+  warmAnyone(token: string): OpenLink | null {
+    const e = this.cache.get(hashToken(token))
+    if (!e || e.kind !== 'open' || e.accessMode !== 'anyone' || (e.expiresAt !== null && e.expiresAt <= Date.now())) return null
+    return e
+  }
+
   /** The shared scenario of an open link, as the answer's body holds it. */
   static shared(link: OpenLink): SharedScenario {
     return (JSON.parse(link.body.toString('utf8')) as { share: SharedScenario }).share
+  }
+
+  /** Whether change notices arrive, so links are cached (tests). */
+  isListening(): boolean {
+    return this.listening
   }
 
   /** Whether a link's state is cached (tests). */

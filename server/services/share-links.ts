@@ -13,6 +13,7 @@ import type { AppContext } from '../context'
 import { errors } from '../http/errors'
 import { Membership, Scenario, ScenarioVersion, ShareLink, User } from '../models'
 import { ShareOpens } from './share-links-open'
+import { reserveMail } from './mail-limits'
 import { shareLinkMail } from './share-link-mail'
 import { createScenario, findScenario, findVersion, versionDto } from './scenarios'
 
@@ -108,10 +109,12 @@ export async function emailShareLink(ctx: AppContext, user: User, workspaceId: s
   const link = await findLink(workspaceId, linkId)
   if (hashToken(body.token) !== link.tokenHash) throw errors.validation({ token: 'This is not the token of this share link' })
   if (status(link) !== 'active') throw errors.conflict(`This link is ${status(link)}; make a new one to send`)
+  const recipients = [...new Set(body.to)]
+  await reserveMail(ctx, user, 'share', recipients.length)
   const scenario = await Scenario.findByPk(link.scenarioId, { attributes: ['id', 'title'] })
   const url = shareUrl(ctx, body.token)
   const sent: string[] = []
-  for (const to of [...new Set(body.to)]) {
+  for (const to of recipients) {
     await ctx.mailer.send(shareLinkMail({ to, sender: user.name, title: scenario?.title ?? 'a scenario', version: (link.version as ScenarioVersion).number, note: body.note, url, accessMode: link.accessMode, expiresAt: link.expiresAt }))
     sent.push(to)
   }

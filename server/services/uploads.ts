@@ -16,13 +16,15 @@ import { DEFAULT_PRESET_ID, findPreset } from '../../shared/sim/presets'
 import { parseObjdump } from '../../shared/sim/isa/objdump'
 import type { SimDiagnostic } from '../../shared/sim/isa/types'
 import type { AppContext } from '../context'
+import type { ErrorCode } from '../../shared/schemas/errors'
 import { DetailedApiError } from '../http/detailed-error'
+import { ApiError } from '../http/errors'
 import { badTextFields } from '../http/text-guard'
 import { issuesToFields } from '../http/validate'
 import { Scenario, Upload, Workspace, type User } from '../models'
 import { ElfError, readElf } from './elf/reader'
 import { decodeFunction, listFunctions } from './elf/import'
-import { importBundle } from './scenario-bundles'
+import { importBundle, summarizeBundle } from './scenario-bundles'
 import { createScenario } from './scenarios'
 import { instructionsToAssembly } from './uploads-asm'
 
@@ -194,11 +196,39 @@ export function uploadDto(upload: Upload, uploader: User | null, scenarioIds: st
   }
 }
 
+/** What reading a file on the work pool gives back; an error travels as its parts, since threads clone no classes. */
+export type UploadWork<T> = { ok: true; value: T } | { ok: false; status: number; code: ErrorCode; message: string; fields?: Record<string, string>; details: Record<string, unknown> }
+
+/**
+ * The reading of an upload (assembling up to 50,000 instructions, parsing a
+ * 4 MiB bundle, decoding an ELF), as a work-pool task: `inspect` gives what
+ * the file holds, `read` the content or bundle to import.
+ */
+export function uploadWork(input: { file: ReceivedFile; fields: UploadFields; mode: 'inspect' | 'read' }): UploadWork<UploadInspection | { kind: UploadKind; read: ReturnType<typeof readUpload> }> {
+  // A Buffer arrives on the thread as a plain Uint8Array.
+  const file = { ...input.file, buffer: Buffer.from(input.file.buffer.buffer, input.file.buffer.byteOffset, input.file.buffer.byteLength) }
+  try {
+    if (input.mode === 'inspect') return { ok: true, value: inspectUpload(file, input.fields) }
+    const kind = detectKind(file, input.fields.kind)
+    return { ok: true, value: { kind, read: readUpload(file, kind, input.fields) } }
+  } catch (err) {
+    if (!(err instanceof ApiError)) throw err
+    return { ok: false, status: err.status, code: err.code, message: err.message, fields: err.fields, details: err instanceof DetailedApiError ? err.details : {} }
+  }
+}
+
+/** The value of an upload task, or its error thrown again on this side. */
+export function fromWork<T>(outcome: UploadWork<unknown>): T {
+  if (outcome.ok) return outcome.value as T
+  throw new DetailedApiError(outcome.status, outcome.code, outcome.message, outcome.details, outcome.fields)
+}
+
 export async function importUpload(ctx: AppContext, user: User, workspaceId: string, file: ReceivedFile, fields: UploadFields): Promise<{ upload: Upload; scenarios: Scenario[] }> {
-  const kind = detectKind(file, fields.kind)
-  const read = readUpload(file, kind, fields)
+  const { kind, read } = fromWork<{ kind: UploadKind; read: ReturnType<typeof readUpload> }>(await ctx.work.run('upload', { file, fields, mode: 'read' }, workspaceId, user.id))
   if ('content' in read) read.content.machine = await importMachine(workspaceId, fields.preset)
-  const run = 'content' in read ? await ctx.runs.summarize(read.content, workspaceId) : undefined
+  // Runs first, on the pool and outside the transaction: a bundle's recorded figures are not trusted.
+  const run = 'content' in read ? await ctx.runs.summarize(read.content, workspaceId, user.id) : undefined
+  const bundleRuns = 'bundle' in read ? await summarizeBundle(ctx, user, workspaceId, read.bundle, file.originalname) : []
   return ctx.sequelize.transaction(async (transaction) => {
     const upload = await Upload.create(
       {
@@ -216,7 +246,7 @@ export async function importUpload(ctx: AppContext, user: User, workspaceId: str
     const scenarios =
       'content' in read
         ? [await createScenario(ctx, user, workspaceId, { content: read.content, message: `Imported from ${upload.fileName}` }, { uploadId: upload.id, transaction, run })]
-        : await importBundle(user, workspaceId, read.bundle, { uploadId: upload.id, transaction })
+        : await importBundle(user, workspaceId, read.bundle, bundleRuns, { uploadId: upload.id, transaction })
     return { upload, scenarios }
   })
 }

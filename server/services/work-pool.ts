@@ -11,8 +11,8 @@ import type { WorkKind, WorkInput, WorkResult } from './work-tasks'
 import type { WorkTask } from './work-worker'
 
 export interface WorkPool {
-  /** Runs a task on behalf of an owner (a workspace id). */
-  run<K extends WorkKind>(kind: K, input: WorkInput<K>, owner: string): Promise<WorkResult<K>>
+  /** Runs a task on behalf of an owner (a workspace id), asked by an account (a user id). */
+  run<K extends WorkKind>(kind: K, input: WorkInput<K>, owner: string, account: string): Promise<WorkResult<K>>
   /** Tasks that reached a thread since start. */
   readonly started: number
   close(): Promise<void>
@@ -21,9 +21,9 @@ export interface WorkPool {
 export function createWorkPool(limits: FairPoolLimits): WorkPool {
   const pool = createFairPool<WorkTask, unknown>(new URL('./work-worker.ts', import.meta.url), limits, 'requests of heavy work')
   return {
-    async run(kind, input, owner) {
+    async run(kind, input, owner, account) {
       try {
-        return (await pool.run({ kind, input }, owner)) as WorkResult<typeof kind>
+        return (await pool.run({ kind, input }, owner, account)) as WorkResult<typeof kind>
       } catch (err) {
         if (err instanceof TaskTimeLimit) {
           throw new ApiError(503, 'server_busy', `This request needed more than ${limits.timeLimitMs / 1000} s of work, the server's limit; it was stopped`, undefined, 5)

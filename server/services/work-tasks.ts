@@ -5,10 +5,13 @@
  */
 import type { ScenarioVersion, VersionDiff } from '../../shared/schemas/scenario'
 import { diffVersions } from './scenario-diff'
+import { uploadWork } from './uploads'
 
 export const WORK_TASKS = {
   /** The diff of two versions: 0.7 s for two 200,000-character programs on one core. */
   diff: (input: { from: ScenarioVersion; to: ScenarioVersion }): VersionDiff => diffVersions(input.from, input.to),
+  /** Reading an uploaded file: 1.2 s for a 40,000-line .s on a loaded core. */
+  upload: uploadWork,
 }
 
 export type WorkKind = keyof typeof WORK_TASKS

@@ -14,6 +14,7 @@ import type { AppContext } from '../context'
 import { errors } from '../http/errors'
 import { Invitation, Membership, User, Workspace } from '../models'
 import { invitationMail } from './emails'
+import { reserveMail } from './mail-limits'
 
 export async function listWorkspaces(userId: string): Promise<WorkspaceSummary[]> {
   const memberships = await Membership.findAll({
@@ -95,6 +96,7 @@ export async function invite(ctx: AppContext, inviter: User, workspaceId: string
     include: [{ model: User, as: 'user', required: true, where: { email: body.email } }],
   })
   if (existing) throw errors.conflict('This person is a member already', { email: 'Already a member of this workspace' })
+  await reserveMail(ctx, inviter, 'invitation', 1)
   const token = randomToken()
   const invitation = await ctx.sequelize.transaction(async (transaction) => {
     await Invitation.destroy({ where: { workspaceId, email: body.email, acceptedAt: null }, transaction })

@@ -4,6 +4,7 @@
  * validation, OpenAPI) and the client (response validation, forms).
  */
 import { z } from 'zod'
+import { expectationListSchema } from './expectation'
 import { machineSchema } from './machine'
 import { textFieldError } from './text'
 import { STALL_REASONS } from '../sim/trace/types'
@@ -95,6 +96,8 @@ export const scenarioContentSchema = z
     machine: machineSchema.prefault({}),
     initialData: z.array(initialDataEntrySchema).max(INITIAL_DATA_MAX_ENTRIES, `At most ${INITIAL_DATA_MAX_ENTRIES} data labels`).default([]),
     view: scenarioViewSchema.prefault({}),
+    /** Claims each run is checked against (shared/schemas/expectation.ts); versions and bundles from before them have none. */
+    expectations: expectationListSchema.default([]),
   })
   .strict()
 /** Validated content: every default filled in, so two equal scenarios compare equal. */
@@ -137,6 +140,13 @@ export const scenarioVersionSchema = z.object({
   createdAt: z.iso.datetime(),
   content: scenarioContentSchema,
   run: runSummarySchema,
+  /**
+   * Set on imported versions: the author name and date the bundle file
+   * claimed. `author` and `createdAt` are the importer and the import time,
+   * and `run` was computed again on import, so a file cannot put words or
+   * figures in anyone's mouth.
+   */
+  originally: z.object({ author: z.string(), createdAt: z.iso.datetime() }).nullable().default(null),
 })
 export type ScenarioVersion = z.infer<typeof scenarioVersionSchema>
 
@@ -282,6 +292,8 @@ export const versionDiffSchema = z.object({
   machine: z.array(z.object({ field: z.string(), before: z.unknown(), after: z.unknown() })),
   /** Other content fields that differ (title, description, tags, initialData, view). */
   fields: z.array(z.object({ field: z.string(), before: z.unknown(), after: z.unknown() })),
+  /** Expectations only in the newer version (added) or only in the older (removed), in words (`cycles <= 120`). */
+  expectations: z.object({ added: z.array(z.string()), removed: z.array(z.string()) }).default({ added: [], removed: [] }),
   metrics: z.object({ before: runSummarySchema, after: runSummarySchema }),
 })
 export type VersionDiff = z.infer<typeof versionDiffSchema>

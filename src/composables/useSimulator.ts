@@ -72,6 +72,11 @@ export function useSimulator(options: UseSimulatorOptions = {}) {
     }
   }
 
+  /** The cycles of the program with its vl-`from` instructions timed at each of `toVls`, in the Worker. */
+  async function neighbours(source: string, machine: unknown, from: number, toVls: number[]): Promise<{ vl: number; cycles: number }[] | null> {
+    return service().neighbours(source, machine, from, toVls)
+  }
+
   function cancel(): void {
     if (running.value && api) void api.cancel()
   }
@@ -86,5 +91,5 @@ export function useSimulator(options: UseSimulatorOptions = {}) {
 
   if (getCurrentScope()) onScopeDispose(dispose)
 
-  return { trace, functional, registers, error, progress, running: readonly(running), run, cancel, dispose }
+  return { trace, functional, registers, error, progress, running: readonly(running), run, neighbours, cancel, dispose }
 }

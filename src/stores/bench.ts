@@ -17,6 +17,7 @@ import { indexTrace, inspectCycle } from '@/lib/bench/inspector'
 import { instructionRows } from '@/lib/bench/instructionRows'
 import { issuesByField, machineSummary, matchingPreset, setField } from '@/lib/bench/machineFields'
 import { dependenciesOf, firstWritten, writtenRegisters } from '@/lib/bench/registerUse'
+import { raggedTail, raggedTailSentence, type NeighbourCycles } from '@/lib/bench/raggedTail'
 import { staleness } from '@/lib/bench/staleness'
 import { explainStalls } from '@/lib/bench/stallExplanation'
 import { benchViewOf, EMPTY_VIEW, wholeCycle, wholeWindow, type BenchView, type CycleWindow } from '@/lib/bench/viewState'
@@ -100,6 +101,10 @@ export const useBenchStore = defineStore('bench', () => {
   const events = computed(() => (trace.value ? scrubberEvents(trace.value) : new Int32Array()))
   const explanation = computed(() => (trace.value ? explainStalls(trace.value) : null))
   const rows = computed(() => (trace.value ? instructionRows(trace.value) : []))
+  /** Uneven lanes, and the run timed at the even vl above and below (measured in the Worker after each run). */
+  const ragged = computed(() => (trace.value ? raggedTail(trace.value) : null))
+  const raggedMeasured = shallowRef<NeighbourCycles[] | null>(null)
+  const raggedText = computed(() => (ragged.value && trace.value ? raggedTailSentence(ragged.value, trace.value.cycles, raggedMeasured.value) : null))
   /** Per traced instruction, the registers it wrote and the groups it read (from the run's dynamic stream). */
   const registerGroups = sim.registers
   const registers = computed(() => writtenRegisters(registerGroups.value))
@@ -125,10 +130,21 @@ export const useBenchStore = defineStore('bench', () => {
     const t = trace.value
     if (!t) return
     runs.value++
+    void measureNeighbours(source.value, machine.value)
     // Keep the view when it still fits the new run (a changed machine), else start at cycle 0.
     if (cursor.value === null || cursor.value >= t.cycles) cursor.value = 0
     if (selected.value !== null && !t.instructions.some((i) => i.index === selected.value)) selected.value = null
     if (window.value && window.value.start >= t.cycles) window.value = null
+  }
+
+  async function measureNeighbours(text: string, m: Machine | null): Promise<void> {
+    raggedMeasured.value = null
+    const t = ragged.value
+    if (!t || !m) return
+    const wanted = t.downVl > 0 ? [t.upVl, t.downVl] : [t.upVl]
+    const measured = await sim.neighbours(text, m, t.vl, wanted)
+    // A newer run may have come back meanwhile: keep only what belongs to the trace on screen.
+    if (ragged.value === t) raggedMeasured.value = measured
   }
 
   let autoTimer: ReturnType<typeof setTimeout> | null = null
@@ -250,7 +266,7 @@ export const useBenchStore = defineStore('bench', () => {
 
   return {
     exampleId, title, source, presetId, machineDraft, autoRun, fpOrder, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
-    assembled, program, machine, fieldErrors, stale, reveal, revealInEditor, summary, preset, currentPreset, trace, traceIndex, events, explanation, rows, registerGroups, registers, dependencies, cycleState, cycles, view,
+    assembled, program, machine, fieldErrors, stale, reveal, revealInEditor, summary, preset, currentPreset, trace, traceIndex, events, explanation, rows, ragged, raggedText, registerGroups, registers, dependencies, cycleState, cycles, view,
     functional: sim.functional, error: sim.error, progress: sim.progress, running: sim.running,
     run, cancel: sim.cancel, scheduleRun, loadExample, setSource, applyPreset, resetMachine, setMachineField,
     select, setCursor, step, toNextEvent, toPreviousEvent, play, pause, togglePlay, setView, $reset,

@@ -10,6 +10,7 @@ import * as Comlink from 'comlink'
 import { runPipelineSteps, type FunctionalResult, type RunError, type RunInput, type RunOptions, type RunProgress } from '@shared/sim/run'
 import { registerGroupTransferables, type RegisterGroups } from '@shared/sim/registerGroups'
 import { encodeTrace, transferablesOf, type CompactTrace } from '@shared/sim/trace/compact'
+import { neighbourCycles } from '@/lib/bench/vlNeighbours'
 
 export type WorkerRunResult =
   | { ok: true; trace: CompactTrace; functional: FunctionalResult; registers: RegisterGroups; error?: undefined }
@@ -80,6 +81,13 @@ export function createSimulatorService(options: SimulatorServiceOptions = {}) {
       } finally {
         if (current === token) current = null
       }
+    },
+    /**
+     * Times the program's vl-`from` instructions at each of `toVls` (the even neighbours of a
+     * ragged tail, src/lib/bench/raggedTail.ts); null when the program does not run.
+     */
+    neighbours(source: string, machine: unknown, from: number, toVls: number[]): { vl: number; cycles: number }[] | null {
+      return neighbourCycles(source, machine as never, from, toVls)
     },
     /** Cancels the run in progress, if any; it resolves with a 'cancelled' error at its next step. */
     cancel(): void {

@@ -155,7 +155,10 @@ describe('imports whose generated program is over the program limit', () => {
   it(`a 40,000-line .s of nop (over ${SCENARIO_PROGRAM_MAX_LENGTH.toLocaleString('en')} characters) is a 400 naming the limit, nothing stored`, async () => {
     const text = '  nop\n'.repeat(40_000)
     const before = await Scenario.count({ where: { workspaceId: team.workspace.id } })
+    const tasks = runtime.ctx.work.started
     const res = await api().post(`/api/workspaces/${team.workspace.id}/uploads`).set(team.editor.auth).attach('file', Buffer.from(text), 'many-nops.s')
+    // Assembling 40,000 lines is read on the work pool, not on the request thread.
+    expect(runtime.ctx.work.started).toBe(tasks + 1)
     expect(res.status).toBe(400)
     expect(res.body.error.code).toBe('invalid_file')
     expect(res.body.error.message).toContain(`${SCENARIO_PROGRAM_MAX_LENGTH.toLocaleString('en')} characters`)

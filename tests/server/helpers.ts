@@ -35,6 +35,8 @@ export async function startTestServer(overrides: Partial<ServerConfig> = {}, sha
       PUBLIC_URL: 'http://127.0.0.1:3100',
       AUTH_RATE_LIMIT_MAX: '1000',
       SIGNIN_ACCOUNT_LIMIT_MAX: '1000',
+      // Factory users are all new accounts; tests/server/mail-limits.test.ts turns the limits on.
+      MAIL_LIMITS: 'off',
     }),
     ...overrides,
   }

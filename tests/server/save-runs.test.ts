@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { Scenario, ScenarioVersion } from '../../server/models'
 import type { Runtime } from '../../server/runtime'
 import { scenarioResponseSchema } from '../../shared/schemas/scenario'
-import { startTestServer } from './helpers'
+import { buildWorkspace, startTestServer } from './helpers'
 import { buildTeam, content, type Team } from './scenario-helpers'
 
 /**
@@ -60,7 +60,7 @@ async function inFlight(r: Runtime, n: number): Promise<void> {
 
 describe('run summaries off the request thread', () => {
   it('while a long save runs on a worker, GET /api/health keeps answering (order, not time: answers arrive while the run is in flight)', async () => {
-    const r = await server({ threads: 1, queue: 4, perWorkspace: 3, timeLimitMs: 600_000 })
+    const r = await server({ threads: 1, queue: 4, perWorkspace: 3, perAccount: 6, timeLimitMs: 600_000 })
     let done = false
     const save = create(r, { content: longContent('Long save'), message: 'long' }).then((res) => {
       done = true
@@ -83,7 +83,7 @@ describe('run summaries off the request thread', () => {
   }, 180_000)
 
   it('a run over the time limit is stopped and the version is kept with a failed summary that says so', async () => {
-    const r = await server({ threads: 1, queue: 4, perWorkspace: 3, timeLimitMs: 300 })
+    const r = await server({ threads: 1, queue: 4, perWorkspace: 3, perAccount: 6, timeLimitMs: 300 })
     const res = await create(r, { content: longContent('Too long for the limit'), message: 'slow' }).expect(201)
     const saved = scenarioResponseSchema.parse(res.body).scenario
     expect(saved.run).toMatchObject({ status: 'failed', stage: 'simulate', code: 'time_limit' })
@@ -97,7 +97,7 @@ describe('run summaries off the request thread', () => {
 
   it('a full queue answers 503 server_busy and saves nothing; once it drains, saves work again', async () => {
     // One thread and one place in the queue: two runs in flight at most.
-    const r = await server({ threads: 1, queue: 1, perWorkspace: 3, timeLimitMs: 1000 })
+    const r = await server({ threads: 1, queue: 1, perWorkspace: 3, perAccount: 6, timeLimitMs: 1000 })
     const titles = ['Busy 1', 'Busy 2', 'Busy 3']
     const results = await Promise.all(titles.map((t) => create(r, { content: longContent(t), message: '' })))
     expect(results.map((x) => x.status).sort()).toEqual([201, 201, 503])
@@ -121,12 +121,16 @@ describe('run summaries off the request thread', () => {
 
 describe('one run pool shared fairly (issue 9, item 3)', () => {
   it('threads take the workspaces in turn: a neighbour\'s save runs before the second of a burst that came first', async () => {
-    const r = await server({ threads: 1, queue: 16, perWorkspace: 3, timeLimitMs: 600_000 })
+    const r = await server({ threads: 1, queue: 16, perWorkspace: 3, perAccount: 6, timeLimitMs: 600_000 })
     const order: string[] = []
     const track = (label: string, p: Promise<request.Response>) => p.then((res) => (order.push(label), res))
     // A1 is the long kernel, so the neighbour asks while it still holds the only thread.
-    const burst = ['A1', 'A2', 'A3'].map((t) => track(t, create(r, { content: t === 'A1' ? longContent(t) : mediumContent(t), message: '' })))
-    await inFlight(r, 3)
+    // Each request is in the pool before the next is sent, so the pool sees them in this order.
+    const burst: Promise<request.Response>[] = []
+    for (const [i, t] of ['A1', 'A2', 'A3'].entries()) {
+      burst.push(track(t, create(r, { content: t === 'A1' ? longContent(t) : mediumContent(t), message: '' })))
+      await inFlight(r, i + 1)
+    }
     const neighbour = track('B1', create(r, { content: content({ title: 'B1' }), message: '' }, other))
     await inFlight(r, 4)
     expect(order).toEqual([])
@@ -137,7 +141,7 @@ describe('one run pool shared fairly (issue 9, item 3)', () => {
   }, 180_000)
 
   it('a workspace has at most a few runs in flight: more is 503 with Retry-After for it alone, its neighbour saves as usual', async () => {
-    const r = await server({ threads: 1, queue: 16, perWorkspace: 2, timeLimitMs: 600_000 })
+    const r = await server({ threads: 1, queue: 16, perWorkspace: 2, perAccount: 6, timeLimitMs: 600_000 })
     const titles = ['Flood 1', 'Flood 2', 'Flood 3', 'Flood 4']
     // supertest sends on then(): start all four now.
     const flood = titles.map((t) => create(r, { content: mediumContent(t), message: '' }).then((res) => res))
@@ -154,8 +158,21 @@ describe('one run pool shared fairly (issue 9, item 3)', () => {
     expect(await Scenario.count({ where: { workspaceId: team.workspace.id, title: titles } })).toBe(2)
   }, 180_000)
 
+  it('an account cannot fill the queue through many workspaces: its runs in flight are capped over all of them', async () => {
+    const r = await server({ threads: 1, queue: 16, perWorkspace: 2, perAccount: 3, timeLimitMs: 600_000 })
+    const second = await buildWorkspace([{ user: team.editor.user, role: 'editor' }], 'Second lab of the same editor')
+    const inWs = (ws: string, t: string) => request(r.app).post(`/api/workspaces/${ws}/scenarios`).set(team.editor.auth).send({ content: mediumContent(t), message: '' })
+    const burst = [inWs(team.workspace.id, 'Acct 1'), inWs(team.workspace.id, 'Acct 2'), inWs(second.id, 'Acct 3'), inWs(second.id, 'Acct 4')].map((p) => p.then((res) => res))
+    await inFlight(r, 3)
+    const neighbour = await create(r, { content: content({ title: 'Other account' }), message: '' }, other)
+    const results = await Promise.all(burst)
+    expect(neighbour.status).toBe(201)
+    expect(results.map((x) => x.status).sort()).toEqual([201, 201, 201, 503])
+    expect(results.find((x) => x.status === 503)?.body.error.message).toContain('Your account has 3 run summaries in progress')
+  }, 180_000)
+
   it('20 concurrent saves from a stale baseVersion all answer 409 and run no simulation', async () => {
-    const r = await server({ threads: 1, queue: 2, perWorkspace: 3, timeLimitMs: 600_000 })
+    const r = await server({ threads: 1, queue: 2, perWorkspace: 3, perAccount: 6, timeLimitMs: 600_000 })
     const made = scenarioResponseSchema.parse((await create(r, { content: content({ title: 'Contended' }), message: '' }).expect(201)).body).scenario
     const path = `/api/workspaces/${team.workspace.id}/scenarios/${made.id}/versions`
     await request(r.app).post(path).set(team.owner.auth).send({ baseVersion: 1, content: content({ title: 'Contended v2' }) }).expect(201)

@@ -1,7 +1,11 @@
+import crypto from 'node:crypto'
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ShareLink } from '../../server/models'
 import { ShareOpens } from '../../server/services/share-links-open'
+import { listenForShareLinkChanges } from '../../server/services/share-links-notify'
+import { securityHeaders } from '../../server/app'
+import { withShareFastOpen } from '../../server/routes/shares/fast-open'
 import type { Runtime } from '../../server/runtime'
 import { createShareLinkResponseSchema, shareLinkListResponseSchema, sharedScenarioResponseSchema } from '../../shared/schemas/share-link'
 import { scenarioResponseSchema } from '../../shared/schemas/scenario'
@@ -237,6 +241,36 @@ describe('the cache of opened links', () => {
     await api().get(`/api/shares/${token}`).expect(200)
   })
 
+  it('caches nothing while its notice connection is lost, so a revoke then still shows; caches again once it is back', async () => {
+    const opens = new ShareOpens(runtime.ctx.sequelize, runtime.ctx.shares.counts)
+    const name = `chimeline test notices ${crypto.randomUUID()}`
+    const listener = await listenForShareLinkChanges(runtime.ctx.config.databaseUrl, opens, runtime.ctx.logger, name)
+    const until = async (what: () => boolean) => {
+      for (let i = 0; i < 500 && !what(); i++) await new Promise((resolve) => setTimeout(resolve, 20))
+      expect(what()).toBe(true)
+    }
+    try {
+      const { token, link } = await makeLink()
+      await opens.open(token, null)
+      expect(opens.cached(token)).toBe(true)
+      // The database ends the connection (a restart, a network cut, an administrator).
+      await runtime.ctx.sequelize.query('SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE application_name = $1', { bind: [name] })
+      await until(() => !opens.isListening())
+      expect(opens.cached(token)).toBe(false)
+      await opens.open(token, null)
+      expect(opens.cached(token)).toBe(false)
+      await ShareLink.update({ revokedAt: new Date() }, { where: { id: link.id } })
+      await expect(opens.open(token, null)).rejects.toMatchObject({ status: 410, code: 'share_revoked' })
+      // It reconnects by itself and caches again.
+      await until(() => opens.isListening())
+      const other = await makeLink()
+      await opens.open(other.token, null)
+      expect(opens.cached(other.token)).toBe(true)
+    } finally {
+      await listener.close()
+    }
+  })
+
   it('counts only the opens it allows', async () => {
     const { token, link } = await makeLink({ accessMode: 'workspace' })
     await api().get(`/api/shares/${token}`).expect(401)
@@ -261,6 +295,50 @@ describe('the cache of opened links', () => {
     tiny.setListening(true)
     await tiny.open(links[0]!.token, null)
     expect(tiny.cached(links[0]!.token)).toBe(false)
+  })
+})
+
+describe('the fast path of warm opens', () => {
+  /** The same listener as runtime.handler, over a stand-in app that marks what reached it. */
+  const fastOnly = () => withShareFastOpen(runtime.ctx, (_req, res) => res.writeHead(599).end(), securityHeaders(runtime.ctx))
+  const comparable = (headers: Record<string, string>) => {
+    const { date: _date, connection: _connection, 'keep-alive': _keepAlive, ...rest } = headers
+    return rest
+  }
+
+  it('answers a warm anyone-link as the full route does: same body and headers, 304 alike', async () => {
+    const { token, link } = await makeLink()
+    const full = await api().get(`/api/shares/${token}`).expect(200)
+    const fast = await request(fastOnly()).get(`/api/shares/${token}`)
+    expect(fast.status).toBe(200)
+    expect(fast.text).toBe(full.text)
+    expect(comparable(fast.headers)).toEqual(comparable(full.headers))
+    const fullNotModified = await api().get(`/api/shares/${token}`).set('If-None-Match', full.headers.etag as string).expect(304)
+    const fastNotModified = await request(fastOnly()).get(`/api/shares/${token}`).set('If-None-Match', full.headers.etag as string)
+    expect(fastNotModified.status).toBe(304)
+    expect(comparable(fastNotModified.headers)).toEqual(comparable(fullNotModified.headers))
+    await runtime.ctx.shares.counts.flush()
+    expect((await ShareLink.findByPk(link.id))?.openCount).toBe(4)
+  })
+
+  it('leaves everything else to the app: cold, unknown, revoked, workspace links, a reader with a token, HEAD, another ETag', async () => {
+    const warm = await makeLink()
+    const cold = await makeLink()
+    const members = await makeLink({ accessMode: 'workspace' })
+    await api().get(`/api/shares/${warm.token}`).expect(200)
+    await api().get(`/api/shares/${members.token}`).set(team.viewer.auth).expect(200)
+    const reachesApp = async (r: request.Test) => expect((await r).status).toBe(599)
+    await reachesApp(request(fastOnly()).get(`/api/shares/${cold.token}`))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${'A'.repeat(43)}`))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${members.token}`).set(team.viewer.auth))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${warm.token}`).set(team.viewer.auth))
+    await reachesApp(request(fastOnly()).head(`/api/shares/${warm.token}`))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${warm.token}`).set('If-None-Match', '"other"'))
+    await reachesApp(request(fastOnly()).get(`/api/shares/${warm.token}/more`))
+    await api().post(`/api/workspaces/${team.workspace.id}/share-links/${warm.link.id}/revoke`).set(team.owner.auth).expect(200)
+    await reachesApp(request(fastOnly()).get(`/api/shares/${warm.token}`))
+    // Through the real listener, the app then answers as before.
+    expect((await request(runtime.handler).get(`/api/shares/${warm.token}`)).status).toBe(410)
   })
 })
 

@@ -17,10 +17,10 @@ const JWT_SECRET = 'integration-tests-only-secret-0123456789abcdef'
 
 let here: Runtime
 let team: Team
-let other: { child: ChildProcess; url: string; exited: Promise<number | null> }
+let other: { child: ChildProcess; url: string; exited: Promise<number | null> } | undefined
 
 /** Starts server/index.ts and resolves with its address from its "listening" log line. */
-function startOtherProcess(): Promise<typeof other> {
+function startOtherProcess(): Promise<NonNullable<typeof other>> {
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     env: {
       ...process.env,
@@ -56,11 +56,16 @@ beforeAll(async () => {
   here = await startTestServer({ shareCountFlushMs: 0 })
   team = await buildTeam(here, 'Two processes')
   other = await startOtherProcess()
-}, 60_000)
+}, 120_000)
 afterAll(async () => {
-  if (other.child.exitCode === null) other.child.kill('SIGTERM')
+  if (other?.child.exitCode === null) other.child.kill('SIGTERM')
   await here.close()
 })
+
+function second(): NonNullable<typeof other> {
+  if (!other) throw new Error('the second server did not start')
+  return other
+}
 
 async function makeLink() {
   const s = await buildScenario(here, team)
@@ -72,17 +77,17 @@ describe('share links across two app processes on one database', () => {
   it('revoked through one process, a link the other has cached answers 410 on its next open', async () => {
     const { token, linkId } = await makeLink()
     // Warm the other process's cache, twice so the second open is served from it.
-    await request(other.url).get(`/api/shares/${token}`).expect(200)
-    await request(other.url).get(`/api/shares/${token}`).expect(200)
+    await request(second().url).get(`/api/shares/${token}`).expect(200)
+    await request(second().url).get(`/api/shares/${token}`).expect(200)
     await request(here.app).post(`/api/workspaces/${team.workspace.id}/share-links/${linkId}/revoke`).set(team.owner.auth).expect(200)
-    const res = await request(other.url).get(`/api/shares/${token}`)
+    const res = await request(second().url).get(`/api/shares/${token}`)
     expect(res.status).toBe(410)
     expect(res.body.error.code).toBe('share_revoked')
   })
 
   it('each process counts its own opens; the owner sees their sum once both have written them (the other at its shutdown)', async () => {
     const { token, linkId, scenarioId } = await makeLink()
-    for (let i = 0; i < 3; i++) await request(other.url).get(`/api/shares/${token}`).expect(200)
+    for (let i = 0; i < 3; i++) await request(second().url).get(`/api/shares/${token}`).expect(200)
     for (let i = 0; i < 2; i++) await request(here.app).get(`/api/shares/${token}`).expect(200)
     await here.ctx.shares.counts.flush()
     const count = async () => {
@@ -90,8 +95,8 @@ describe('share links across two app processes on one database', () => {
       return links.find((l) => l.id === linkId)?.openCount
     }
     expect(await count()).toBe(2)
-    other.child.kill('SIGTERM')
-    expect(await other.exited).toBe(0)
+    second().child.kill('SIGTERM')
+    expect(await second().exited).toBe(0)
     expect(await count()).toBe(5)
   })
 })

@@ -87,7 +87,7 @@ export function scenarioRoutes(ctx: AppContext, r: SecureRouter): void {
   r.get(`${one}/versions/diff`, read, async (req, res) => {
     const q = parseQuery(versionDiffQuerySchema, req)
     const [from, to] = await Promise.all([scenarios.getVersion(ws(req), sid(req), q.from), scenarios.getVersion(ws(req), sid(req), q.to)])
-    res.json({ diff: await ctx.work.run('diff', { from, to }, ws(req)) })
+    res.json({ diff: await ctx.work.run('diff', { from, to }, ws(req), currentUser(req).id) })
   })
 
   r.get(`${one}/versions/:number`, read, async (req, res) => {

@@ -1,8 +1,8 @@
-import type { RequestHandler } from 'express'
+import type { RequestHandler, Router } from 'express'
 import { createAuthenticator } from '../../auth/passport'
 import { access } from '../../auth/access'
 import type { AppContext } from '../../context'
-import type { SecureRouter } from '../../http/secure-router'
+import { secureRouter } from '../../http/secure-router'
 import { optionalUser } from '../../services/share-links'
 
 /** Authenticates when an Authorization header is present; otherwise goes on as an anonymous reader. */
@@ -11,8 +11,14 @@ function optionalAuth(ctx: AppContext): RequestHandler {
   return (req, res, next) => (req.headers.authorization ? authenticate(req, res, next) : next())
 }
 
-/** The public reader's endpoint of share links: no sign-in for `anyone` links. */
-export function shareRoutes(ctx: AppContext, r: SecureRouter): void {
+/**
+ * The public reader's endpoint of share links: no sign-in for `anyone` links.
+ * Its own router, which app.ts mounts before the body parsers and the other
+ * routes: a crowd opening one link should cost little more per open than the
+ * cache look-up (README, "Share-link load").
+ */
+export function shareOpenRouter(ctx: AppContext): Router {
+  const r = secureRouter(createAuthenticator(ctx.config.jwtSecret))
   r.get('/shares/:token', { access: access.public, before: [optionalAuth(ctx)] }, async (req, res) => {
     const link = await ctx.shares.open(String(req.params.token), optionalUser(req))
     // A browser may keep the answer but must ask again before each use (a reload
@@ -24,4 +30,5 @@ export function shareRoutes(ctx: AppContext, r: SecureRouter): void {
     // res.send answers 304 when the request's If-None-Match holds the ETag.
     res.send(link.body)
   })
+  return r.router
 }

@@ -5,10 +5,10 @@ import { access, currentMembership, currentUser } from '../../auth/access'
 import type { AppContext } from '../../context'
 import { ApiError, errors } from '../../http/errors'
 import type { SecureRouter } from '../../http/secure-router'
-import { assertGoodText } from '../../http/text-guard'
+import { assertGoodText, badTextFields } from '../../http/text-guard'
 import { issuesToFields } from '../../http/validate'
 import { summaryDto } from '../../services/scenarios'
-import { importUpload, inspectUpload, uploadDto, type ReceivedFile } from '../../services/uploads'
+import { fromWork, importUpload, uploadDto, type ReceivedFile } from '../../services/uploads'
 
 export const uploadPermissions = { inspect: ['owner', 'editor'], import: ['owner', 'editor'] } as const
 
@@ -41,13 +41,14 @@ async function received(req: Request, res: Response): Promise<{ file: ReceivedFi
   if (!parsed.success) throw errors.validation(issuesToFields(parsed.error.issues))
   // multer gives the name as latin1; browsers send UTF-8.
   const originalname = Buffer.from(req.file.originalname, 'latin1').toString('utf8')
+  if (badTextFields(originalname).body) throw errors.validation({ file: `The file name: ${badTextFields(originalname).body}` })
   return { file: { originalname, mimetype: req.file.mimetype, size: req.file.size, buffer: req.file.buffer }, fields: parsed.data }
 }
 
 export function uploadRoutes(ctx: AppContext, r: SecureRouter): void {
   r.post('/workspaces/:id/uploads/inspect', { access: access.workspace(uploadPermissions.inspect) }, async (req, res) => {
     const { file, fields } = await received(req, res)
-    res.json(inspectUpload(file, fields))
+    res.json(fromWork(await ctx.work.run('upload', { file, fields, mode: 'inspect' }, currentMembership(req).workspaceId, currentUser(req).id)))
   })
 
   r.post('/workspaces/:id/uploads', { access: access.workspace(uploadPermissions.import) }, async (req, res) => {

@@ -36,11 +36,14 @@ export interface ExecuteOptions {
   recordStream?: boolean
   /** Summation order of vfredusum; default: element order, as QEMU sums. */
   fpReductionOrder?: UnorderedSum
+  /** Bytes of stack, below STACK_TOP (machine.ts); sp starts at its top (default 256 KiB). */
+  stackBytes?: number
 }
 
 export const EXECUTE_DEFAULTS = {
   stepLimit: 10_000_000,
   memoryLimit: 128 * 1024 * 1024,
+  stackBytes: 256 * 1024,
 } as const
 
 export interface ExecuteSuccess {
@@ -57,7 +60,7 @@ export interface ExecuteSuccess {
   vlHistory: number[]
   /** vtype after each executed vset* instruction, in order. */
   vtypeHistory: Vtype[]
-  /** The data segment after the run, starting at dataBase. */
+  /** The data segment after the run, starting at dataBase (the stack is not included). */
   memory: Uint8Array
   dataBase: number
   /** Bytes written to standard output (write, fd 1). */
@@ -98,7 +101,12 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
     return failure('memory-limit', `memory limit exceeded: the data segment needs ${program.data.length} bytes, the limit is ${memoryLimit}`, label?.loc)
   }
 
-  const m = new Machine(options.vlen, program.data, program.dataBase)
+  const stackBytes = options.stackBytes ?? EXECUTE_DEFAULTS.stackBytes
+  if (!(Number.isInteger(stackBytes) && stackBytes >= 0 && stackBytes % 16 === 0)) return failure('bad-option', `stackBytes must be a non-negative multiple of 16, got ${stackBytes}`)
+  if (program.data.length + stackBytes > memoryLimit) {
+    return failure('memory-limit', `memory limit exceeded: the data segment (${program.data.length} bytes) and the stack (${stackBytes} bytes) need more than the limit of ${memoryLimit}`)
+  }
+  const m = new Machine(options.vlen, program.data, program.dataBase, stackBytes)
   m.unorderedSum = options.fpReductionOrder
   const code = program.instructions
   const metas: OpInfo[] = []
@@ -106,7 +114,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   const vlHistory: number[] = []
   const vtypeHistory: Vtype[] = []
   const outputChunks: Uint8Array[] = []
-  let used = program.data.length
+  let used = program.data.length + stackBytes
 
   const charge = (bytes: number, what: string): void => {
     used += bytes
@@ -168,6 +176,9 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
       if (ev.memory) op.memory = ev.memory
       if (active) op.active = active
       if (ev.sourceIndex) op.sourceIndex = ev.sourceIndex
+      if (ev.widths) op.widths = ev.widths
+      if (ev.nf) op.nf = ev.nf
+      if (ev.wholeRegisters) op.wholeRegisters = ev.wholeRegisters
       ops.push(op)
       scalarSince = 0
     },
@@ -175,6 +186,9 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
 
   let steps = 0
   let ended: ExecuteSuccess['ended'] = 'end-of-text'
+  // _start when the program defines it, else its first instruction.
+  index = program.entry === undefined ? 0 : (program.entry - program.textBase) / 4
+  if (!(Number.isInteger(index) && index >= 0 && index <= code.length)) return failure('jump-range', `the entry point 0x${(program.entry ?? 0).toString(16)} is not an instruction of the program`)
   try {
     while (index < code.length) {
       if (steps === stepLimit) {
@@ -183,6 +197,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
       }
       const ins = code[index]!
       steps++
+      m.retired = steps - 1
       m.next = index + 1
       handlers[index]!(m, ins, recorder)
       if (!metas[index]!.vector) scalarSince++
@@ -224,7 +239,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
     vtype: m.vtype,
     vlHistory,
     vtypeHistory,
-    memory: m.memory,
+    memory: m.memory.subarray(0, m.dataSize),
     dataBase: program.dataBase,
     output,
     exitCode: m.exitCode ?? 0,

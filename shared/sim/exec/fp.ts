@@ -1,6 +1,8 @@
 /**
- * IEEE 754 binary32/binary64 arithmetic as RISC-V defines it, in round to
- * nearest, ties to even (frm = RNE, the user-mode default).
+ * IEEE 754 binary32/binary64 arithmetic as RISC-V defines it, in the five
+ * rounding modes of the F extension (RNE, the user-mode default, on the fast
+ * path of JavaScript's own arithmetic; RTZ, RDN, RUP and RMM on exact BigInt
+ * significands rounded once).
  *
  * - Every NaN result is the canonical NaN (RISC-V unprivileged spec, "NaN
  *   generation and propagation"): 0x7ff8000000000000 / 0x7fc00000.
@@ -71,13 +73,40 @@ function bitLength(n: bigint): number {
   return n === 0n ? 0 : n.toString(2).length
 }
 
+/** Rounding modes by their rm/frm value (F extension, "Rounding modes"). */
+export const RNE = 0
+export const RTZ = 1
+export const RDN = 2
+export const RUP = 3
+export const RMM = 4
+export type RoundingMode = 0 | 1 | 2 | 3 | 4
+
+/** Whether a value cut below its last kept bit moves away from zero, by mode. */
+function roundsUp(mode: RoundingMode, negative: boolean, rest: bigint, half: bigint, odd: boolean, sticky: boolean): boolean {
+  const inexact = rest !== 0n || sticky
+  switch (mode) {
+    case RNE: return rest > half || (rest === half && (sticky || odd))
+    case RMM: return rest >= half
+    case RTZ: return false
+    case RDN: return negative && inexact
+    case RUP: return !negative && inexact
+  }
+}
+
+/** The largest finite value of a format. */
+function maxFinite(fmt: FloatFormat): number {
+  return (2 - 2 ** (1 - fmt.precision)) * 2 ** fmt.emax
+}
+
 /**
- * Rounds the exact value (-1)^negative x magnitude x 2^exponent to the format,
- * ties to even, with gradual underflow and overflow to infinity. magnitude > 0.
+ * Rounds the exact value (-1)^negative x (magnitude + sticky) x 2^exponent to
+ * the format in `mode`, with gradual underflow and overflow (to infinity or the
+ * largest finite value, as the mode says). magnitude > 0; `sticky` says that
+ * nonzero bits lie below magnitude's last bit (from a division or square root).
  */
-export function roundExact(negative: boolean, magnitude: bigint, exponent: number, fmt: FloatFormat): number {
+export function roundExact(negative: boolean, magnitude: bigint, exponent: number, fmt: FloatFormat, mode: RoundingMode = RNE, sticky = false): number {
   const msb = exponent + bitLength(magnitude) - 1
-  if (msb > fmt.emax) return negative ? -Infinity : Infinity
+  if (msb > fmt.emax) return overflow(negative, fmt, mode)
   // Exponent of the last significand bit kept: normal numbers keep `precision`
   // bits, subnormals stop at emin - (precision - 1).
   const lsb = Math.max(msb - (fmt.precision - 1), fmt.emin - (fmt.precision - 1))
@@ -89,14 +118,25 @@ export function roundExact(negative: boolean, magnitude: bigint, exponent: numbe
     kept = magnitude >> big
     const rest = magnitude - (kept << big)
     const half = 1n << (big - 1n)
-    if (rest > half || (rest === half && (kept & 1n) === 1n)) kept += 1n
+    if (roundsUp(mode, negative, rest, half, (kept & 1n) === 1n, sticky)) kept += 1n
     keptExponent = lsb
+  } else if (sticky && roundsUp(mode, negative, 0n, 1n, (kept & 1n) === 1n, true)) {
+    // Everything kept is exact except the sticky tail, below half an ulp.
+    kept += 1n
   }
   // kept < 2^(precision + 1) and the result is representable (or overflows to
   // infinity exactly when rounding carried past emax), so this product is exact.
   let value = Number(kept) * 2 ** keptExponent
+  if (value > maxFinite(fmt)) return overflow(negative, fmt, mode)
   if (fmt === BINARY32) value = Math.fround(value)
   return negative ? -value : value
+}
+
+/** IEEE 754 section 7.4: overflow gives infinity or the largest finite value, by mode and sign. */
+function overflow(negative: boolean, fmt: FloatFormat, mode: RoundingMode): number {
+  const toInf = mode === RNE || mode === RMM || (mode === RUP && !negative) || (mode === RDN && negative)
+  const v = toInf ? Infinity : maxFinite(fmt)
+  return negative ? -v : v
 }
 
 /**
@@ -104,7 +144,7 @@ export function roundExact(negative: boolean, magnitude: bigint, exponent: numbe
  * (inputs are values of that format). NaN results are returned as NaN; the
  * caller stores the canonical NaN.
  */
-export function fusedMultiplyAdd(a: number, b: number, c: number, fmt: FloatFormat = BINARY64): number {
+export function fusedMultiplyAdd(a: number, b: number, c: number, fmt: FloatFormat = BINARY64, mode: RoundingMode = RNE): number {
   if (Number.isNaN(a) || Number.isNaN(b) || Number.isNaN(c)) return NaN
   const productNegative = (a < 0 || Object.is(a, -0)) !== (b < 0 || Object.is(b, -0))
   if (!Number.isFinite(a) || !Number.isFinite(b)) {
@@ -121,15 +161,100 @@ export function fusedMultiplyAdd(a: number, b: number, c: number, fmt: FloatForm
   if (product === 0n) {
     // Exact zero product: the sum is c, except for the sign of 0 + 0 (RNE: -0 only if both are -0).
     if (c !== 0) return c
-    return productNegative && dc.negative ? -0 : 0
+    if (productNegative === dc.negative) return productNegative ? -0 : 0
+    return mode === RDN ? -0 : 0
   }
-  if (dc.significand === 0n) return roundExact(productNegative, product, productExponent, fmt)
+  if (dc.significand === 0n) return roundExact(productNegative, product, productExponent, fmt, mode)
   const e0 = Math.min(productExponent, dc.exponent)
   const p = product << BigInt(productExponent - e0)
   const q = dc.significand << BigInt(dc.exponent - e0)
   const sum = (productNegative ? -p : p) + (dc.negative ? -q : q)
-  if (sum === 0n) return 0 // exact cancellation gives +0 in RNE
-  return roundExact(sum < 0n, sum < 0n ? -sum : sum, e0, fmt)
+  if (sum === 0n) return mode === RDN ? -0 : 0 // exact cancellation: +0, or -0 rounding down (IEEE 754 section 6.3)
+  return roundExact(sum < 0n, sum < 0n ? -sum : sum, e0, fmt, mode)
+}
+
+const isNeg = (x: number): boolean => x < 0 || Object.is(x, -0)
+
+/**
+ * a + b, a - b, a x b, a / b and sqrt(a) rounded once in `mode`. RNE uses the
+ * platform's binary64 arithmetic (and Math.fround for binary32, innocuous as
+ * noted above); the other modes compute on exact significands.
+ */
+export function arith(op: 'add' | 'sub' | 'mul' | 'div' | 'sqrt', a: number, b: number, fmt: FloatFormat, mode: RoundingMode): number {
+  const fast = op === 'add' ? a + b : op === 'sub' ? a - b : op === 'mul' ? a * b : op === 'div' ? a / b : Math.sqrt(a)
+  const r = fmt === BINARY32 ? Math.fround(fast) : fast
+  // NaN results and infinite operands give exact special results in every mode.
+  if (mode === RNE || Number.isNaN(r) || !Number.isFinite(a) || (op !== 'sqrt' && !Number.isFinite(b))) return r
+  if (op === 'sqrt') {
+    if (a === 0 || a < 0 || !Number.isFinite(a)) return r
+    const da = decompose(a)
+    // sqrt(s x 2^e): make e even and give the root 2 x precision + 2 bits.
+    let sig = da.significand
+    let e = da.exponent
+    if (e % 2 !== 0) {
+      sig <<= 1n
+      e -= 1
+    }
+    const shift = 2 * (fmt.precision + 2)
+    const n = sig << BigInt(shift)
+    const root = isqrt(n)
+    return roundExact(false, root, (e - shift) / 2, fmt, mode, root * root !== n)
+  }
+  if (op === 'add' || op === 'sub') {
+    const bb = op === 'sub' ? -b : b
+    // Zeros: a signed sum keeps the common sign; opposite signs give +0, or -0 rounding down (IEEE 754 section 6.3).
+    if (a === 0 && bb === 0) return isNeg(a) === isNeg(bb) ? a : mode === RDN ? -0 : 0
+    if (!Number.isFinite(fast)) return overflow(fast < 0, fmt, mode)
+    const da = decompose(a)
+    const db = decompose(bb)
+    const e0 = Math.min(da.exponent, db.exponent)
+    const p = da.significand << BigInt(da.exponent - e0)
+    const q = db.significand << BigInt(db.exponent - e0)
+    const sum = (da.negative ? -p : p) + (db.negative ? -q : q)
+    if (sum === 0n) return mode === RDN ? -0 : 0
+    return roundExact(sum < 0n, sum < 0n ? -sum : sum, e0, fmt, mode)
+  }
+  const negative = isNeg(a) !== isNeg(b)
+  if (op === 'mul') {
+    if (!Number.isFinite(fast)) return overflow(negative, fmt, mode)
+    if (a === 0 || b === 0) return negative ? -0 : 0
+    const da = decompose(a)
+    const db = decompose(b)
+    return roundExact(negative, da.significand * db.significand, da.exponent + db.exponent, fmt, mode)
+  }
+  if (b === 0 || a === 0) return r
+  if (!Number.isFinite(fast)) return overflow(negative, fmt, mode)
+  const da = decompose(a)
+  const db = decompose(b)
+  // Quotient with at least precision + 2 bits, the remainder as the sticky bit.
+  const shift = fmt.precision + 3 + Math.max(0, bitLength(db.significand) - bitLength(da.significand))
+  const num = da.significand << BigInt(shift)
+  const q = num / db.significand
+  return roundExact(negative, q, da.exponent - db.exponent - shift, fmt, mode, q * db.significand !== num)
+}
+
+/** floor(sqrt(n)): Newton's iteration from a power of two above the root, which decreases to it. */
+function isqrt(n: bigint): bigint {
+  if (n < 2n) return n
+  let x = 1n << BigInt(Math.ceil(bitLength(n) / 2))
+  for (;;) {
+    const y = (x + n / x) >> 1n
+    if (y >= x) return x
+    x = y
+  }
+}
+
+/** A binary64 value converted to binary32 in `mode` (fcvt.s.d, vfncvt.f.f.w). */
+export function toBinary32(x: number, mode: RoundingMode): number {
+  if (mode === RNE || !Number.isFinite(x) || x === 0) return Math.fround(x)
+  const d = decompose(x)
+  return roundExact(d.negative, d.significand, d.exponent, BINARY32, mode)
+}
+
+/** An integer (BigInt) converted to a float format in `mode` (fcvt.s.w, fcvt.d.l, ...). */
+export function intToFloat(v: bigint, fmt: FloatFormat, mode: RoundingMode): number {
+  if (v === 0n) return 0
+  return roundExact(v < 0n, v < 0n ? -v : v, 0, fmt, mode)
 }
 
 /** IEEE 754-2019 minimumNumber / maximumNumber, as RISC-V fmin/fmax (F extension 2.2): -0 < +0; one NaN yields the other operand. */
@@ -153,16 +278,28 @@ export function roundTiesEven(x: number): number {
   return r - x === 0.5 && r % 2 !== 0 ? r - 1 : r
 }
 
+/** Round to an integer in `mode`. */
+export function roundToInteger(x: number, mode: RoundingMode): number {
+  switch (mode) {
+    case RNE: return roundTiesEven(x)
+    case RTZ: return Math.trunc(x)
+    case RDN: return Math.floor(x)
+    case RUP: return Math.ceil(x)
+    case RMM: return x < 0 ? -Math.round(-x) : Math.round(x)
+  }
+}
+
 /**
  * Float to integer with the RISC-V saturation rules (unprivileged spec, table
  * "Domains of float-to-integer conversions"): NaN and +inf give the largest
  * value, -inf the smallest, out-of-range values saturate. Returns a BigInt.
+ * `truncate` is the rtz forms; otherwise `mode` rounds (default RNE).
  */
-export function floatToInt(x: number, bits: number, signed: boolean, truncate: boolean): bigint {
+export function floatToInt(x: number, bits: number, signed: boolean, truncate: boolean, mode: RoundingMode = RNE): bigint {
   const max = signed ? (1n << BigInt(bits - 1)) - 1n : (1n << BigInt(bits)) - 1n
   const min = signed ? -(1n << BigInt(bits - 1)) : 0n
   if (Number.isNaN(x)) return max
-  const r = truncate ? Math.trunc(x) : roundTiesEven(x)
+  const r = roundToInteger(x, truncate ? RTZ : mode)
   if (r === Infinity) return max
   if (r === -Infinity) return min
   const v = BigInt(r)

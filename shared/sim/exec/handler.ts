@@ -18,6 +18,12 @@ export interface VectorEvent {
   v0IsSelector?: boolean
   memory?: { pattern: MemoryPattern; isStore: boolean; addresses: Float64Array; indexEew?: Sew }
   sourceIndex?: Int32Array
+  /** Element widths of the destination and vs2 when one differs from SEW (widening, narrowing, extension). */
+  widths?: { dst: Sew; vs2: Sew }
+  /** Segment accesses: fields per element. */
+  nf?: number
+  /** Whole-register loads, stores and moves: registers moved, whatever vl is. */
+  wholeRegisters?: number
 }
 
 export interface Recorder {

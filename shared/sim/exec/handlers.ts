@@ -9,6 +9,10 @@ import { maskHandlers } from './vmask'
 import { memoryHandlers } from './vmem'
 import { permHandlers } from './vperm'
 import { reductionHandlers } from './vred'
+import { extHandlers } from './vext'
+import { fpExtHandlers } from './vfext'
+import { miscHandlers } from './vmisc'
+import { estimateHandlers } from './vestimate'
 
 export function handlerTable(textBase: number, sys: Syscalls, onConfig: ConfigListener): Record<string, Handler> {
   return {
@@ -20,5 +24,9 @@ export function handlerTable(textBase: number, sys: Syscalls, onConfig: ConfigLi
     ...maskHandlers,
     ...reductionHandlers,
     ...permHandlers,
+    ...extHandlers,
+    ...fpExtHandlers,
+    ...miscHandlers,
+    ...estimateHandlers,
   }
 }

@@ -75,10 +75,29 @@ export class Machine {
   /** Summation order of vfredusum; undefined means element order (as QEMU). */
   unorderedSum: UnorderedSum | undefined
 
+  /** Floating-point CSR fields: frm (dynamic rounding mode) and fflags (accrued exceptions, written by csr* only). */
+  frm = 0
+  fflags = 0
+  /** Fixed-point CSR fields (V 1.0 section 3.8, 3.9): rounding mode and saturation flag. */
+  vxrm = 0
+  vxsat = 0
+  vstart = 0
+  /** Dynamic instructions retired so far (instret, cycle and time read it). */
+  retired = 0
+
+  /** Bytes of the program's data segment. */
+  readonly dataSize: number
+  /** The stack [stackBase, stackTop), apart from the data so that running off the data still faults; sp starts at stackTop. */
+  readonly stackBase: number
+  readonly stackTop: number
+  /** Offset of the stack's first byte in `memory` (after the data, 16-byte aligned). */
+  private readonly stackOffset: number
+
   constructor(
     readonly vlen: number,
     data: Uint8Array,
     dataBase: number,
+    stackBytes = 0,
   ) {
     this.vlenb = vlen / 8
     this.vrf = new ArrayBuffer(32 * this.vlenb)
@@ -92,9 +111,25 @@ export class Machine {
     this.i64 = new BigInt64Array(this.vrf)
     this.f32 = new Float32Array(this.vrf)
     this.f64 = new Float64Array(this.vrf)
-    this.memory = data.slice()
+    // One buffer: the data, then (16-byte aligned, the psABI's stack alignment) the stack.
+    this.stackOffset = Math.ceil(data.length / 16) * 16
+    this.memory = new Uint8Array(this.stackOffset + stackBytes)
+    this.memory.set(data)
     this.mem = new DataView(this.memory.buffer)
     this.dataBase = dataBase
+    this.dataSize = data.length
+    this.stackTop = STACK_TOP
+    this.stackBase = STACK_TOP - stackBytes
+    if (stackBytes > 0) this.x[2] = BigInt(this.stackTop)
+  }
+
+  /** Offset in `memory` of `size` bytes at `address` in the data or the stack, or -1 when they are outside both. */
+  locate(address: number, size: number): number {
+    const d = address - this.dataBase
+    if (d >= 0 && d + size <= this.dataSize) return d
+    const st = address - this.stackBase
+    if (this.stackTop > this.stackBase && st >= 0 && address + size <= this.stackTop) return this.stackOffset + st
+    return -1
   }
 
   // ---- scalar registers ------------------------------------------------------
@@ -128,12 +163,13 @@ export class Machine {
 
   /** Offset into the data memory of an access of `size` bytes, checked for bounds and alignment. */
   offset(address: number, size: number): number {
-    const off = address - this.dataBase
-    if (!(off >= 0 && off + size <= this.memory.length)) {
+    const off = this.locate(address, size)
+    if (off < 0) {
+      const stack = this.stackTop > this.stackBase ? ` and the stack [0x${this.stackBase.toString(16)}, 0x${this.stackTop.toString(16)})` : ''
       throw new ExecFault(
         'memory-bounds',
         `access of ${size} byte${size > 1 ? 's' : ''} at 0x${address.toString(16)} is outside the data memory ` +
-          `[0x${this.dataBase.toString(16)}, 0x${(this.dataBase + this.memory.length).toString(16)})`,
+          `[0x${this.dataBase.toString(16)}, 0x${(this.dataBase + this.dataSize).toString(16)})${stack}`,
       )
     }
     if (address % size !== 0) {
@@ -195,6 +231,13 @@ export class Machine {
     else this.f32[index] = value
   }
 }
+
+/**
+ * The stack's top address: 1 GiB, far above any text and data the assembler
+ * lays out (data at most 16 MiB above 0x10000) and below 2^31, so that a
+ * stack overflow or a run off the data faults instead of landing in the other.
+ */
+export const STACK_TOP = 0x4000_0000
 
 /** Number of registers in a group of EMUL (fractional EMUL occupies one register). */
 export function groupSize(emul: number): number {

@@ -54,6 +54,16 @@ export interface VectorOp {
   sourceIndex?: Int32Array
   /** true when the instruction produces a scalar result the front end waits for. */
   scalarResult: boolean
+  /**
+   * Widening, narrowing and extending ops: the element width of the destination
+   * and of vs2 (a 2 x SEW destination writes twice the words per element).
+   * Absent when both are SEW.
+   */
+  widths?: { dst: Sew; vs2: Sew }
+  /** Segment loads and stores: fields moved per element (absent: 1). */
+  nf?: number
+  /** Whole-register loads, stores and moves: registers moved, independent of vl (then `vl` counts elements of `eew` in them). */
+  wholeRegisters?: number
 }
 
 export interface DynamicStream {

@@ -225,6 +225,7 @@ export const fpHandlers: Record<string, Handler> = {
   'vfcvt.xu.f.v': toInt(false, false),
   'vfcvt.x.f.v': toInt(true, false),
   'vfcvt.rtz.x.f.v': toInt(true, true),
+  'vfcvt.rtz.xu.f.v': toInt(false, true),
   'vfcvt.f.xu.v': fromInt(false),
   'vfcvt.f.x.v': fromInt(true),
   'vfmv.v.f': fMoveOp(false),

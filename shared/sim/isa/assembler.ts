@@ -9,16 +9,16 @@
  * boundary after the text. Programs only depend on pc-relative `la`, so the
  * exact bases do not change their results.
  */
-import { applyDirective, isDirective, type DataState } from './directives'
+import { applyDirective, isDirective, writeInt, type DataFixup, type DataState, type Section } from './directives'
+import { evalExpr, type Expr } from './expr'
 import { diag, nearest } from './diagnostics'
 import type { OperandKind } from './fields'
 import { formatInstruction } from './format'
 import { lexLine, type Token } from './lexer'
-import { parseOperand, parseVtypeOperand } from './operands'
+import { parseOperand, parseVtypeOperand, type OperandContext, type Parsed } from './operands'
 import { PSEUDOS, pseudoNamed, type Expansion } from './pseudo'
 import { OPS, opInfo, type OpInfo } from './table'
 import type { Instruction, Operands, Program, SimDiagnostic, SourceLoc } from './types'
-import { isUnsupportedVector } from './unsupported'
 import { checkVectorOperands, type CheckedInstruction } from './vcheck'
 
 export interface AssembleOptions {
@@ -45,24 +45,22 @@ export const ASSEMBLE_DEFAULTS = {
 } as const satisfies Required<AssembleOptions>
 
 interface Pending extends CheckedInstruction {
-  label?: { name: string; column: number }
-  pcrel?: { part: 'hi' | 'lo'; label: string; column: number }
-  /** Address of the auipc a `lo` part is relative to. */
-  pcrelBase?: number
+  label?: NonNullable<Parsed['label']>
+  reloc?: NonNullable<Parsed['reloc']> | { op: 'pcrel_lo_prev'; expr: Expr; column: number }
 }
 
 const MNEMONICS: readonly string[] = [...OPS.map((o) => o.op), ...Object.keys(PSEUDOS)]
 
 function usage(info: OpInfo): string {
-  const names: Partial<Record<OperandKind, string>> = { xd: 'rd', fd: 'fd', xs1: 'rs1', fs1: 'fs1', xs2: 'rs2', fs2: 'fs2', load: 'offset(rs1)', store: 'offset(rs1)', vaddr: '(rs1)', branch: 'label', jump: 'label', simm5: 'imm', uimm5: 'uimm', avl5: 'uimm', simm12: 'imm', shamt6: 'shamt', uimm20: 'imm', vtypei11: 'vtype', vtypei10: 'vtype' }
-  const parts = info.syntax.filter((k) => k !== 'vm').map((k) => names[k] ?? k)
-  return parts.join(', ') + (info.syntax.includes('vm') ? '[, v0.t]' : '')
+  const names: Partial<Record<OperandKind, string>> = { xd: 'rd', fd: 'fd', xs1: 'rs1', fs1: 'fs1', xs2: 'rs2', fs2: 'fs2', fs3: 'fs3', load: 'offset(rs1)', store: 'offset(rs1)', vaddr: '(rs1)', branch: 'label', jump: 'label', simm5: 'imm', uimm5: 'uimm', avl5: 'uimm', simm12: 'imm', shamt6: 'shamt', shamt5: 'shamt', uimm20: 'imm', vtypei11: 'vtype', vtypei10: 'vtype' }
+  const parts = info.syntax.filter((k) => k !== 'vm' && k !== 'rm').map((k) => names[k] ?? k)
+  return parts.join(', ') + (info.syntax.includes('vm') ? '[, v0.t]' : '') + (info.syntax.includes('rm') ? '[, rounding mode]' : '')
 }
 
 /** Parses a real instruction's operand tokens against its table syntax. */
-function parseReal(info: OpInfo, args: Token[], loc: SourceLoc): Pending | SimDiagnostic {
+function parseReal(info: OpInfo, args: Token[], loc: SourceLoc, ctx: OperandContext): Pending | SimDiagnostic {
   const syntax = info.syntax
-  const optionalMask = syntax[syntax.length - 1] === 'vm'
+  const optionalMask = syntax[syntax.length - 1] === 'vm' || syntax[syntax.length - 1] === 'rm'
   const required = optionalMask ? syntax.length - 1 : syntax.length
   const vtypeLast = syntax[syntax.length - 1] === 'vtypei11' || syntax[syntax.length - 1] === 'vtypei10'
   const countOk = vtypeLast ? args.length >= required : args.length === required || (optionalMask && args.length === required + 1)
@@ -77,23 +75,30 @@ function parseReal(info: OpInfo, args: Token[], loc: SourceLoc): Pending | SimDi
     const kind = syntax[i] as OperandKind
     const tok = args[i]
     if (tok === undefined) break // the optional v0.t was left out
-    const ctx = { line: loc.line, op: info.op }
+    const octx = { ...ctx, line: loc.line, op: info.op }
     const r = kind === 'vtypei11' || kind === 'vtypei10'
-      ? parseVtypeOperand(kind, args.slice(i), operands, ctx)
-      : parseOperand(kind, tok, operands, ctx)
+      ? parseVtypeOperand(kind, args.slice(i), operands, octx)
+      : parseOperand(kind, tok, operands, octx)
     if ('code' in r) return r
     if (r.label) p.label = r.label
+    if (r.reloc) p.reloc = r.reloc
     for (const key of ['rd', 'rs1', 'rs2', 'vd', 'vs1', 'vs2', 'imm'] as const) {
       if (operands[key] !== undefined && p.columns[key] === undefined) p.columns[key] = tok.column
     }
     if (kind === 'vtypei11' || kind === 'vtypei10') break
   }
   if (info.vector && operands.vm === undefined) operands.vm = true
+  if (info.rmDefault !== undefined && operands.rm === undefined) operands.rm = info.rmDefault
   return p
 }
 
+/** Where a numeric label's definitions are, for `1b` / `1f` (GNU as local labels). */
+const NUMERIC_REF = /^([0-9]+)([bf])$/
+const localKey = (n: string, k: number): string => `${n}\u0000${k}`
+
 /**
- * Assembles RISC-V V 1.0 assembly text.
+ * Assembles RISC-V assembly text: the V 1.0 extension, RV64GC's scalar
+ * instructions, and the directives and syntax of compiler output.
  * @example assemble('vsetvli t0, a0, e32, m4, ta, ma\nvle32.v v4, (a1)')
  */
 export function assemble(text: string, options: AssembleOptions = {}): AssembleResult {
@@ -102,15 +107,34 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
     return { ok: false, errors: [diag({ line: 1, column: 1 }, 'too-large', `the source is ${text.length} characters; the limit is ${opt.maxSourceLength}`)] }
   }
   const errors: SimDiagnostic[] = []
-  const report = (d: SimDiagnostic): void => {
-    if (errors.length < opt.maxErrors) errors.push(d)
+  const report = (d: SimDiagnostic | undefined): void => {
+    if (d && errors.length < opt.maxErrors) errors.push(d)
   }
   const code: Pending[] = []
   const data: DataState = { bytes: new Uint8Array(256), size: 0, maxBytes: opt.maxDataBytes }
-  let section: 'text' | 'data' = 'text'
+  let section: Section = 'text'
   const textLabels = new Map<string, { index: number; loc: SourceLoc }>()
   const dataLabels = new Map<string, { offset: number; loc: SourceLoc }>()
+  const constants = new Map<string, { value: bigint; loc: SourceLoc }>()
+  const numericCount = new Map<string, number>()
+  const fixups: DataFixup[] = []
   let tooMany = false
+
+  // `1b` is the latest definition of 1 so far, `1f` the next one.
+  const rename = (name: string): string => {
+    const m = NUMERIC_REF.exec(name)
+    if (!m || m[1] === undefined) return name
+    const n = numericCount.get(m[1]) ?? 0
+    return localKey(m[1], m[2] === 'b' ? n : n + 1)
+  }
+  const symbol = (name: string): bigint | undefined => constants.get(name)?.value
+  const operandCtx: OperandContext = { line: 0, op: '', symbol, rename }
+  const defineConstant = (name: string, value: bigint, loc: SourceLoc): SimDiagnostic | undefined => {
+    const prev = textLabels.get(name)?.loc ?? dataLabels.get(name)?.loc
+    if (prev) return diag(loc, 'duplicate-label', `'${name}' is already a label on line ${prev.line}`)
+    constants.set(name, { value, loc })
+    return undefined
+  }
 
   const lines = text.split(/\r\n|\n|\r/)
   for (let li = 0; li < lines.length && errors.length < opt.maxErrors && !tooMany; li++) {
@@ -122,24 +146,35 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
     }
     for (const l of lexed.labels) {
       const loc = { line: lineNo, column: l.column }
-      const prev = textLabels.get(l.text)?.loc ?? dataLabels.get(l.text)?.loc
-      if (prev) report(diag(loc, 'duplicate-label', `label '${l.text}' is already defined on line ${prev.line}`))
-      else if (section === 'text') textLabels.set(l.text, { index: code.length, loc })
-      else dataLabels.set(l.text, { offset: data.size, loc })
+      if (section === 'other') continue
+      let key = l.text
+      if (/^[0-9]+$/.test(l.text)) {
+        const n = (numericCount.get(l.text) ?? 0) + 1
+        numericCount.set(l.text, n)
+        key = localKey(l.text, n)
+      } else {
+        const prev = textLabels.get(key)?.loc ?? dataLabels.get(key)?.loc ?? constants.get(key)?.loc
+        if (prev) {
+          report(diag(loc, 'duplicate-label', `label '${l.text}' is already defined on line ${prev.line}`))
+          continue
+        }
+      }
+      if (section === 'text') textLabels.set(key, { index: code.length, loc })
+      else dataLabels.set(key, { offset: data.size, loc })
     }
     const m = lexed.mnemonic
     if (!m) continue
     const loc = { line: lineNo, column: m.column }
     const name = m.text.toLowerCase()
     if (isDirective(name)) {
-      const r = applyDirective(name, lexed.operands, loc, section, data, code.length * 4)
-      if (r.error) report(r.error)
+      const r = applyDirective(name, lexed.operands, loc, { section, data, textBytes: code.length * 4, symbol, rename, defineConstant, fixups })
+      report(r.error)
       if (r.section) section = r.section
       for (let k = 0; k < (r.textPadding ?? 0); k++) code.push({ info: opInfo('addi') as OpInfo, operands: { rd: 0, rs1: 0, imm: 0 }, address: 0, loc, columns: {} })
       continue
     }
     if (section !== 'text') {
-      report(diag(loc, 'instruction-in-data', `instruction '${m.text}' in the data section: put it after .text`))
+      report(diag(loc, 'instruction-in-data', `instruction '${m.text}' in ${section === 'data' ? 'the data section' : 'a section that is not .text'}: put it after .text`))
       continue
     }
     let expansions: Expansion[] | SimDiagnostic
@@ -147,13 +182,10 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
     const info = opInfo(name)
     if (pseudo && (!info || pseudo.applies(lexed.operands))) {
       expansions = pseudo.applies(lexed.operands)
-        ? pseudo.expand(lexed.operands, m, lineNo)
+        ? pseudo.expand(lexed.operands, m, lineNo, operandCtx)
         : diag(loc, 'operand-count', `${name} takes ${pseudo.usage || 'no operands'}; found ${lexed.operands.length} operand${lexed.operands.length === 1 ? '' : 's'}`)
     } else if (info) expansions = [{ op: name, args: lexed.operands }]
-    else if (isUnsupportedVector(name)) {
-      report(diag(loc, 'unsupported', `not supported yet: ${name} (see README, Supported instructions)`))
-      continue
-    } else {
+    else {
       const near = nearest(name, MNEMONICS)
       report(diag(loc, 'unknown-mnemonic', `unknown instruction '${m.text}'${near ? `; did you mean '${near}'?` : ''}`))
       continue
@@ -165,10 +197,12 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
     for (const e of expansions) {
       const einfo = opInfo(e.op) as OpInfo
       let p: Pending | SimDiagnostic
-      if ('args' in e) p = parseReal(einfo, e.args, loc)
+      if ('args' in e) p = parseReal(einfo, e.args, loc, operandCtx)
       else {
-        p = { info: einfo, operands: { ...e.operands }, address: 0, loc, columns: {}, pcrel: e.pcrel }
+        p = { info: einfo, operands: { ...e.operands }, address: 0, loc, columns: {} }
+        if (e.reloc) p.reloc = e.reloc
         if (einfo.vector) p.operands.vm = true
+        if (einfo.rmDefault !== undefined && p.operands.rm === undefined) p.operands.rm = einfo.rmDefault
       }
       if ('code' in p) {
         report(p)
@@ -181,50 +215,86 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
       tooMany = true
     }
   }
-  if (data.error) report(data.error)
+  report(data.error)
   if (errors.length) return { ok: false, errors }
 
-  // ---- layout and label resolution ----
+  // ---- layout and symbol resolution ----
   const textBase = opt.textBase
   const textEnd = textBase + code.length * 4
   const dataBase = Math.ceil(textEnd / 4096) * 4096
   // No prototype: a label may be called __proto__ or constructor.
   const symbols = Object.create(null) as Record<string, number>
+  for (const [n, c] of constants) symbols[n] = Number(c.value)
   for (const [n, l] of textLabels) symbols[n] = textBase + l.index * 4
   for (const [n, l] of dataLabels) symbols[n] = dataBase + l.offset
   code.forEach((p, i) => {
     p.address = textBase + i * 4
   })
-  const resolve = (name: string, column: number, line: number): number | undefined => {
-    const a = symbols[name]
-    if (a === undefined) {
-      const near = nearest(name, Object.keys(symbols))
-      report(diag({ line, column }, 'undefined-label', `undefined label '${name}'${near ? `; did you mean '${near}'?` : ''}`))
-    }
-    return a
+  const shown = (key: string): string => key.split('\u0000')[0] ?? key
+  const lookup = (name: string): bigint | undefined => (name in symbols ? BigInt(symbols[name] as number) : undefined)
+  const resolveExpr = (e: Expr, column: number, line: number, dot?: number): bigint | undefined => {
+    const r = evalExpr(e, lookup, dot === undefined ? undefined : BigInt(dot))
+    if (r.ok) return r.value
+    if (r.missing && r.missing !== '.') {
+      const near = nearest(r.missing, Object.keys(symbols).filter((k) => !k.includes('\u0000')))
+      // A local label's key is `N\0k`: k = 0 is a `Nb` with no definition before, else a `Nf` with none after.
+      const backward = r.missing.endsWith('\u00000')
+      report(diag({ line, column }, 'undefined-label', r.missing.includes('\u0000')
+        ? `no local label '${shown(r.missing)}${backward ? 'b' : 'f'}' ${backward ? 'before' : 'after'} this line`
+        : `undefined label '${r.missing}'${near ? `; did you mean '${near}'?` : ''}`))
+    } else report(diag({ line, column }, 'operand-kind', r.message))
+    return undefined
   }
-  let hiAddress = 0
+  // %pcrel_hi targets by the address of their auipc, for %pcrel_lo(label).
+  const pcrelHi = new Map<number, bigint>()
+  for (const p of code) {
+    if (p.reloc?.op !== 'pcrel_hi') continue
+    const v = resolveExpr(p.reloc.expr, p.reloc.column, p.loc.line)
+    if (v !== undefined) pcrelHi.set(p.address, v - BigInt(p.address))
+  }
+  const hi20 = (v: bigint): number => Number(BigInt.asUintN(20, (v + 0x800n) >> 12n))
+  const lo12 = (v: bigint): number => Number(BigInt.asIntN(12, v))
   for (const p of code) {
     if (p.label) {
-      const a = resolve(p.label.name, p.label.column, p.loc.line)
-      if (a === undefined) continue
-      const off = a - p.address
+      const a = lookup(p.label.key)
+      if (a === undefined) {
+        resolveExpr({ kind: 'sym', name: p.label.key }, p.label.column, p.loc.line)
+        continue
+      }
+      const off = Number(a) - p.address
       const isJump = p.info.op === 'jal'
       const [lo, hi] = isJump ? [-(1 << 20), (1 << 20) - 2] : [-4096, 4094]
       if (off < lo || off > hi) report(diag({ line: p.loc.line, column: p.label.column }, 'imm-range', `${p.info.op}: '${p.label.name}' is ${off} bytes away; the reach is ${lo}..${hi}`))
       p.operands.imm = off
       p.columns.imm = p.label.column
-    } else if (p.pcrel) {
-      const a = resolve(p.pcrel.label, p.pcrel.column, p.loc.line)
-      if (p.pcrel.part === 'hi') hiAddress = p.address
-      if (a === undefined) continue
-      const off = a - hiAddress
-      const low = (off << 20) >> 20
-      p.operands.imm = p.pcrel.part === 'hi' ? ((off - low) >> 12) & 0xfffff : low
+    } else if (p.reloc) {
+      const r = p.reloc
+      const at = { line: p.loc.line, column: r.column }
+      if (r.op === 'pcrel_hi') {
+        const off = pcrelHi.get(p.address)
+        if (off !== undefined) p.operands.imm = hi20(off)
+      } else if (r.op === 'pcrel_lo') {
+        // The operand names the label of the auipc whose %pcrel_hi this completes (psABI).
+        const a = resolveExpr(r.expr, r.column, p.loc.line)
+        if (a === undefined) continue
+        const off = pcrelHi.get(Number(a))
+        if (off === undefined) report(diag(at, 'operand-kind', `${p.info.op}: %pcrel_lo names 0x${a.toString(16)}, which is no auipc with %pcrel_hi`))
+        else p.operands.imm = lo12(off)
+      } else {
+        const v = resolveExpr(r.expr, r.column, p.loc.line)
+        if (v === undefined) continue
+        if (r.op === 'hi') p.operands.imm = hi20(v)
+        else if (r.op === 'lo') p.operands.imm = lo12(v)
+        else p.operands.imm = lo12(v - BigInt(p.address - 4)) // the low part of the auipc just before (la, call, tail)
+      }
     }
   }
+  for (const f of fixups) {
+    const v = resolveExpr(f.expr, f.loc.column, f.loc.line, dataBase + f.dot)
+    if (v !== undefined) writeInt(data.bytes, f.offset, f.size, v)
+  }
   if (errors.length) return { ok: false, errors }
-  for (const d of checkVectorOperands(code, textBase)) report(d)
+  for (const d of checkVectorOperands(code, textBase, textLabels.get('_start')?.index)) report(d)
   if (errors.length) return { ok: false, errors }
 
   const instructions: Instruction[] = code.map((p) => {
@@ -236,12 +306,16 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
     if (label) ins.label = label
     return ins
   })
-  const sorted = [...dataLabels.entries()].sort((x, y) => x[1].offset - y[1].offset)
+  const visible = [...dataLabels.entries()].filter(([n]) => !n.includes('\u0000'))
+  const sorted = visible.sort((x, y) => x[1].offset - y[1].offset)
+  for (const k of Object.keys(symbols)) if (k.includes('\u0000')) delete symbols[k]
+  const start = textLabels.get('_start')
   const program: Program = {
     instructions, textBase, data: data.bytes.slice(0, data.size), dataBase, symbols,
     dataLabels: sorted.map(([name, l], i) => ({
       name, address: dataBase + l.offset, size: (sorted[i + 1]?.[1].offset ?? data.size) - l.offset, loc: l.loc,
     })),
   }
+  if (start) program.entry = textBase + start.index * 4
   return { ok: true, program }
 }

@@ -1,7 +1,7 @@
 /**
  * The decoder: a 32-bit word back to an instruction of the table. It never
  * throws: a word that is no supported instruction gives a structured error
- * that says why (compressed, a vector form not supported yet, or unknown).
+ * that says why (compressed, a reserved vector encoding, or unknown).
  */
 import { extractField } from './fields'
 import { formatInstruction } from './format'
@@ -9,7 +9,7 @@ import { OPS, type OpInfo } from './table'
 import type { Instruction, Operands } from './types'
 
 export interface DecodeError {
-  code: 'compressed' | 'unsupported' | 'unknown'
+  code: 'compressed' | 'reserved' | 'unknown'
   message: string
   word: number
   address: number
@@ -42,7 +42,7 @@ export function decodeWord(word: number, address: number): DecodeResult {
     // LOAD-FP/STORE-FP with widths 1..4 are scalar FP loads and stores, not vector ones (spec 7.3).
     const vector = opcode === 0x57 || ((opcode === 0x07 || opcode === 0x27) && (width === 0 || width >= 5))
     if (vector) {
-      return fail('unsupported', `${hex8(w)} is a vector instruction Chimeline does not support yet (see README, Supported instructions)`)
+      return fail('reserved', `${hex8(w)} is in the vector opcode space but is no RISC-V V 1.0 instruction (a reserved encoding)`)
     }
     return fail('unknown', `${hex8(w)} is not an instruction Chimeline supports`)
   }

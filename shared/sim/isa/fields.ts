@@ -9,12 +9,16 @@ import type { RegFile } from './registers'
 
 export type OperandKind =
   | 'xd' | 'xs1' | 'xs2' // x registers in rd / rs1 / rs2
-  | 'fd' | 'fs1' | 'fs2' // f registers in rd / rs1 / rs2
+  | 'fd' | 'fs1' | 'fs2' | 'fs3' // f registers in rd / rs1 / rs2 / rs3 (bits 31:27, fused multiply-add)
   | 'vd' | 'vs1' | 'vs2' | 'vs3' // vector registers (vs3 = store data, in the vd field)
   | 'simm5' | 'uimm5' // OPIVI immediate in bits 19:15
   | 'avl5' // vsetivli AVL, unsigned, bits 19:15
   | 'simm12' // I-type immediate
   | 'shamt6' // RV64 shift amount, bits 25:20
+  | 'shamt5' // *w shift amount, bits 24:20
+  | 'rm' // optional trailing rounding mode (rne, rtz, rdn, rup, rmm, dyn), bits 14:12
+  | 'csr' // CSR number or name, bits 31:20
+  | 'pred' | 'succ' // fence sets (i, o, r, w), bits 27:24 and 23:20
   | 'uimm20' // U-type immediate field (lui/auipc)
   | 'load' // imm(rs1), I-type offset
   | 'store' // imm(rs1), S-type offset
@@ -44,6 +48,7 @@ export const FIELDS: Record<OperandKind, FieldSpec> = {
   fd: { key: 'rd', file: 'f', bits: rd },
   fs1: { key: 'rs1', file: 'f', bits: rs1 },
   fs2: { key: 'rs2', file: 'f', bits: rs2 },
+  fs3: { key: 'rs3', file: 'f', bits: 0x1f << 27 },
   vd: { key: 'vd', file: 'v', bits: rd },
   vs1: { key: 'vs1', file: 'v', bits: rs1 },
   vs2: { key: 'vs2', file: 'v', bits: rs2 },
@@ -53,6 +58,11 @@ export const FIELDS: Record<OperandKind, FieldSpec> = {
   avl5: { key: 'imm', bits: rs1 },
   simm12: { key: 'imm', bits: 0xfff << 20 },
   shamt6: { key: 'imm', bits: 0x3f << 20 },
+  shamt5: { key: 'imm', bits: 0x1f << 20 },
+  rm: { key: 'rm', bits: 7 << 12 },
+  csr: { key: 'csr', bits: 0xfff << 20 },
+  pred: { key: 'pred', bits: 0xf << 24 },
+  succ: { key: 'succ', bits: 0xf << 20 },
   uimm20: { key: 'imm', bits: 0xfffff << 12 },
   load: { key: 'imm', bits: (0xfff << 20) | rs1 },
   store: { key: 'imm', bits: (0x7f << 25) | rd | rs1 },
@@ -72,6 +82,7 @@ export const IMM_RANGE: Partial<Record<OperandKind, [number, number]>> = {
   avl5: [0, 31],
   simm12: [-2048, 2047],
   shamt6: [0, 63],
+  shamt5: [0, 31],
   uimm20: [0, 0xfffff],
   load: [-2048, 2047],
   store: [-2048, 2047],
@@ -93,6 +104,12 @@ export function insertField(kind: OperandKind, ops: Operands): number {
     case 'xs1': case 'fs1': case 'vs1': case 'vaddr': case 'simm5': case 'uimm5': case 'avl5':
       return ((v as number) & 0x1f) << 15
     case 'xs2': case 'fs2': case 'vs2': return ((v as number) & 0x1f) << 20
+    case 'fs3': return ((v as number) & 0x1f) << 27
+    case 'shamt5': return ((v as number) & 0x1f) << 20
+    case 'rm': return ((v as number) & 7) << 12
+    case 'csr': return ((v as number) & 0xfff) << 20
+    case 'pred': return ((v as number) & 0xf) << 24
+    case 'succ': return ((v as number) & 0xf) << 20
     case 'simm12': return ((v as number) & 0xfff) << 20
     case 'shamt6': return ((v as number) & 0x3f) << 20
     case 'uimm20': return ((v as number) & 0xfffff) << 12
@@ -124,6 +141,12 @@ export function extractField(kind: OperandKind, w: number, ops: Operands): void 
     case 'xs1': case 'fs1': case 'vaddr': ops.rs1 = bit(w, 19, 15); return
     case 'vs1': ops.vs1 = bit(w, 19, 15); return
     case 'xs2': case 'fs2': ops.rs2 = bit(w, 24, 20); return
+    case 'fs3': ops.rs3 = bit(w, 31, 27); return
+    case 'shamt5': ops.imm = bit(w, 24, 20); return
+    case 'rm': ops.rm = bit(w, 14, 12); return
+    case 'csr': ops.csr = bit(w, 31, 20); return
+    case 'pred': ops.pred = bit(w, 27, 24); return
+    case 'succ': ops.succ = bit(w, 23, 20); return
     case 'vs2': ops.vs2 = bit(w, 24, 20); return
     case 'simm5': ops.imm = sext(bit(w, 19, 15), 5); return
     case 'uimm5': case 'avl5': ops.imm = bit(w, 19, 15); return

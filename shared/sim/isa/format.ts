@@ -11,6 +11,8 @@ import { registerName } from './registers'
 import type { OpInfo } from './table'
 import type { Operands } from './types'
 import { decodeVtype, formatVtype } from './vtype'
+import { csrName } from './csr'
+import { ROUNDING_MODES } from './operands'
 
 const hex = (n: number): string => `0x${(n >>> 0).toString(16)}`
 /** Branch and jump targets: hex without 0x, then <label> when known, as objdump does. */
@@ -19,7 +21,9 @@ const target = (address: number, imm: number, label?: string): string => {
   return label ? `${t} <${label}>` : t
 }
 
-function operandText(kind: OperandKind, o: Operands, address: number, label?: string): string | undefined {
+const fenceSet = (n: number): string => (n === 0 ? '0' : `${n & 8 ? 'i' : ''}${n & 4 ? 'o' : ''}${n & 2 ? 'r' : ''}${n & 1 ? 'w' : ''}`)
+
+function operandText(kind: OperandKind, o: Operands, address: number, label: string | undefined, rmDefault: number | undefined): string | undefined {
   switch (kind) {
     case 'xd': return registerName('x', o.rd ?? 0)
     case 'fd': return registerName('f', o.rd ?? 0)
@@ -27,6 +31,11 @@ function operandText(kind: OperandKind, o: Operands, address: number, label?: st
     case 'fs1': return registerName('f', o.rs1 ?? 0)
     case 'xs2': return registerName('x', o.rs2 ?? 0)
     case 'fs2': return registerName('f', o.rs2 ?? 0)
+    case 'fs3': return registerName('f', o.rs3 ?? 0)
+    case 'shamt5': return hex(o.imm ?? 0)
+    case 'rm': return o.rm === rmDefault ? undefined : ROUNDING_MODES[o.rm ?? 7] || String(o.rm)
+    case 'csr': return csrName(o.csr ?? 0)
+    case 'pred': case 'succ': return fenceSet(o[kind] ?? 0)
     case 'vd': case 'vs3': return `v${o.vd ?? 0}`
     case 'vs1': return `v${o.vs1 ?? 0}`
     case 'vs2': return `v${o.vs2 ?? 0}`
@@ -45,6 +54,10 @@ function operandText(kind: OperandKind, o: Operands, address: number, label?: st
 }
 
 const x = (n: number | undefined): string => registerName('x', n ?? 0)
+const f = (n: number | undefined): string => registerName('f', n ?? 0)
+/** objdump's names for the CSR pseudo-instructions of the F extension's fields. */
+const FP_CSR: Record<number, [string, string]> = { 1: ['frflags', 'fsflags'], 2: ['frrm', 'fsrm'], 3: ['frcsr', 'fscsr'] }
+const COUNTERS: Record<number, string> = { 0xc00: 'rdcycle', 0xc01: 'rdtime', 0xc02: 'rdinstret' }
 const vmSuffix = (o: Operands): string => (o.vm === false ? ',v0.t' : '')
 
 /** The alias objdump prints for this instruction, if any. */
@@ -57,6 +70,47 @@ function alias(info: OpInfo, o: Operands, address: number, label?: string): stri
       if (o.imm === 0) return `mv ${x(o.rd)},${x(o.rs1)}`
       return undefined
     case 'sub': return o.rs1 === 0 ? `neg ${x(o.rd)},${x(o.rs2)}` : undefined
+    case 'subw': return o.rs1 === 0 ? `negw ${x(o.rd)},${x(o.rs2)}` : undefined
+    case 'addiw': return o.imm === 0 ? `sext.w ${x(o.rd)},${x(o.rs1)}` : undefined
+    case 'andi': return o.imm === 255 ? `zext.b ${x(o.rd)},${x(o.rs1)}` : undefined
+    case 'xori': return o.imm === -1 ? `not ${x(o.rd)},${x(o.rs1)}` : undefined
+    case 'sltiu': return o.imm === 1 ? `seqz ${x(o.rd)},${x(o.rs1)}` : undefined
+    case 'sltu': return o.rs1 === 0 ? `snez ${x(o.rd)},${x(o.rs2)}` : undefined
+    case 'slt':
+      if (o.rs2 === 0) return `sltz ${x(o.rd)},${x(o.rs1)}`
+      if (o.rs1 === 0) return `sgtz ${x(o.rd)},${x(o.rs2)}`
+      return undefined
+    case 'fsgnj.s': case 'fsgnj.d': case 'fsgnjn.s': case 'fsgnjn.d': case 'fsgnjx.s': case 'fsgnjx.d': {
+      if (o.rs1 !== o.rs2) return undefined
+      const name = info.op.startsWith('fsgnjn') ? 'fneg' : info.op.startsWith('fsgnjx') ? 'fabs' : 'fmv'
+      return `${name}.${info.op.slice(-1)} ${f(o.rd)},${f(o.rs1)}`
+    }
+    case 'fence': return o.pred === 15 && o.succ === 15 ? 'fence' : undefined
+    case 'csrrs': {
+      if (o.rs1 !== 0) return o.rd === 0 ? `csrs ${csrName(o.csr ?? 0)},${x(o.rs1)}` : undefined
+      const fp = FP_CSR[o.csr ?? 0]
+      const counter = COUNTERS[o.csr ?? 0]
+      return fp ? `${fp[0]} ${x(o.rd)}` : counter ? `${counter} ${x(o.rd)}` : `csrr ${x(o.rd)},${csrName(o.csr ?? 0)}`
+    }
+    case 'csrrw': {
+      const fp = FP_CSR[o.csr ?? 0]
+      if (fp) return o.rd === 0 ? `${fp[1]} ${x(o.rs1)}` : `${fp[1]} ${x(o.rd)},${x(o.rs1)}`
+      return o.rd === 0 ? `csrw ${csrName(o.csr ?? 0)},${x(o.rs1)}` : undefined
+    }
+    case 'csrrc': return o.rd === 0 ? `csrc ${csrName(o.csr ?? 0)},${x(o.rs1)}` : undefined
+    // binutils 2.40 prints the immediate forms under the register forms' names.
+    case 'csrrwi': {
+      const fp = FP_CSR[o.csr ?? 0]
+      if (fp && fp[1] !== 'fscsr') return `${fp[1]}i ${x(o.rd)},${o.imm}`
+      return o.rd === 0 ? `csrw ${csrName(o.csr ?? 0)},${o.imm}` : `csrrw ${x(o.rd)},${csrName(o.csr ?? 0)},${o.imm}`
+    }
+    case 'csrrsi': return o.rd === 0 ? `csrs ${csrName(o.csr ?? 0)},${o.imm}` : `csrrs ${x(o.rd)},${csrName(o.csr ?? 0)},${o.imm}`
+    case 'csrrci': return o.rd === 0 ? `csrc ${csrName(o.csr ?? 0)},${o.imm}` : `csrrc ${x(o.rd)},${csrName(o.csr ?? 0)},${o.imm}`
+    case 'vl1re8.v': case 'vl2re8.v': case 'vl4re8.v': case 'vl8re8.v':
+      return `${info.op.slice(0, 3)}r.v v${o.vd},(${x(o.rs1)})`
+    case 'vwadd.vx': return o.rs1 === 0 ? `vwcvt.x.x.v v${o.vd},v${o.vs2}${vmSuffix(o)}` : undefined
+    case 'vwaddu.vx': return o.rs1 === 0 ? `vwcvtu.x.x.v v${o.vd},v${o.vs2}${vmSuffix(o)}` : undefined
+    case 'vnsrl.wx': return o.rs1 === 0 ? `vncvt.x.x.w v${o.vd},v${o.vs2}${vmSuffix(o)}` : undefined
     case 'jal':
       if (o.rd === 0) return `j ${t()}`
       if (o.rd === 1) return `jal ${t()}`
@@ -96,7 +150,7 @@ export function formatInstruction(info: OpInfo, o: Operands, address: number, la
   if (a !== undefined) return a
   const parts: string[] = []
   for (const k of info.syntax) {
-    const s = operandText(k, o, address, label)
+    const s = operandText(k, o, address, label, info.rmDefault)
     if (s !== undefined) parts.push(s)
   }
   return parts.length ? `${info.op} ${parts.join(',')}` : info.op

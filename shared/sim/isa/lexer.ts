@@ -1,7 +1,8 @@
 /**
  * Splits one source line into labels, a mnemonic or directive, and
  * comma-separated operands, keeping each token's column. `#` starts a comment
- * (GNU as for RISC-V).
+ * (GNU as for RISC-V) outside a string. Labels are symbols (`loop:`, `.LBB0_3:`) or local numeric labels
+ * (`1:`, referred to as `1b` / `1f`).
  */
 import type { SimDiagnostic } from './types'
 import { diag } from './diagnostics'
@@ -19,12 +20,11 @@ export interface Line {
   operands: Token[]
 }
 
-const LABEL = /^([A-Za-z_.$][A-Za-z0-9_.$]*)\s*:/
+const LABEL = /^([A-Za-z_.$][A-Za-z0-9_.$]*|[0-9]+)\s*:/
 const WORD = /^\S+/
 
 export function lexLine(source: string, line: number): Line | SimDiagnostic {
-  const hash = source.indexOf('#')
-  const text = hash >= 0 ? source.slice(0, hash) : source
+  const text = source.slice(0, commentStart(source))
   const out: Line = { line, labels: [], operands: [] }
   let pos = 0
   const skip = (): void => {
@@ -46,10 +46,12 @@ export function lexLine(source: string, line: number): Line | SimDiagnostic {
   pos += w[0].length
   skip()
   if (pos >= text.length) return out
-  // Split the rest at top-level commas; keep each operand's column.
+  // Split the rest at commas outside strings; keep each operand's column.
   let start = pos
+  let quoted = false
   for (let i = pos; i <= text.length; i++) {
-    if (i === text.length || text[i] === ',') {
+    if (i < text.length && text[i] === '"' && text[i - 1] !== '\\') quoted = !quoted
+    if (i === text.length || (text[i] === ',' && !quoted)) {
       const raw = text.slice(start, i)
       const lead = raw.length - raw.trimStart().length
       const t = raw.trim()
@@ -59,4 +61,16 @@ export function lexLine(source: string, line: number): Line | SimDiagnostic {
     }
   }
   return out
+}
+
+/** Where a `#` comment starts (outside double-quoted strings), or the line length. */
+function commentStart(source: string): number {
+  let quoted = false
+  for (let i = 0; i < source.length; i++) {
+    const c = source[i]
+    if (c === '\\' && quoted) i++
+    else if (c === '"') quoted = !quoted
+    else if (c === '#' && !quoted) return i
+  }
+  return source.length
 }

@@ -6,18 +6,22 @@
  * words, checked in tests/reference/binutils/.
  */
 import type { Token } from './lexer'
-import { immediate, parseInteger } from './operands'
+import { parseExpr, type Expr } from './expr'
+import { constant, immediate, parseInteger, type OperandContext } from './operands'
 import { parseRegister } from './registers'
 import type { Operands, SimDiagnostic } from './types'
 import { diag } from './diagnostics'
 
 /** Real instruction written as operand tokens, parsed as if the user wrote it. */
 export interface TokenExpansion { op: string; args: Token[] }
-/** Real instruction already built; `pcrel` asks for the auipc/addi pair of `la`. */
+/**
+ * Real instruction already built; `reloc` asks for the pc-relative halves of an
+ * address (`pcrel_hi` on the auipc, `pcrel_lo_prev` on the instruction after it).
+ */
 export interface BuiltExpansion {
   op: string
   operands: Operands
-  pcrel?: { part: 'hi' | 'lo'; label: string; column: number }
+  reloc?: { op: 'pcrel_hi' | 'pcrel_lo_prev'; expr: Expr; column: number }
 }
 export type Expansion = TokenExpansion | BuiltExpansion
 
@@ -26,7 +30,7 @@ interface Pseudo {
   usage: string
   /** Whether this pseudo handles the given operands (real ops share some names). */
   applies: (args: Token[]) => boolean
-  expand: (args: Token[], at: Token, line: number) => Expansion[] | SimDiagnostic
+  expand: (args: Token[], at: Token, line: number, ctx: OperandContext) => Expansion[] | SimDiagnostic
 }
 
 const isMem = (t: Token | undefined): boolean => t !== undefined && t.text.includes('(')
@@ -117,13 +121,13 @@ export function liSequence(value: bigint): { op: 'lui' | 'addi' | 'slli'; imm: n
 const li: Pseudo = {
   usage: 'rd, imm',
   applies: count(2),
-  expand: (g, _at, line) => {
+  expand: (g, _at, line, ctx) => {
     const rdTok = a(g, 0)
     const rd = parseRegister('x', rdTok.text)
     if (rd === undefined) return diag({ line, column: rdTok.column }, 'operand-kind', `li: expected an x register, found '${rdTok.text}'`)
     const t = a(g, 1)
-    const v = parseInteger(t.text)
-    if (v === undefined) return diag({ line, column: t.column }, 'operand-kind', `li: expected an integer, found '${t.text}'`)
+    const v = constant(t.text, { ...ctx, line, op: 'li' })
+    if (typeof v !== 'bigint') return diag({ line, column: t.column }, 'operand-kind', `li: ${v}`)
     if (v < -(1n << 63n) || v >= 1n << 64n) return diag({ line, column: t.column }, 'imm-range', `li: ${t.text} does not fit in 64 bits`)
     return liSequence(v).map((s) => ({
       op: s.op,
@@ -132,21 +136,71 @@ const li: Pseudo = {
   },
 }
 
+/** An address operand (`sym`, `sym+8`) for la, call and tail. */
+function addressExpr(t: Token, line: number, op: string, ctx: OperandContext): Expr | SimDiagnostic {
+  const e = parseExpr(t.text, ctx.rename)
+  if ('message' in e || e.kind === 'num') return diag({ line, column: t.column }, 'operand-kind', `${op}: expected a label, found '${t.text}'`)
+  return e
+}
+
+/** auipc rd, %pcrel_hi(target) followed by `then` with %pcrel_lo of the same target (la, lla, call, tail). */
+function pcrelPair(rd: number, target: Expr, column: number, then: { op: string; operands: Operands }): BuiltExpansion[] {
+  return [
+    { op: 'auipc', operands: { rd, imm: 0 }, reloc: { op: 'pcrel_hi', expr: target, column } },
+    { ...then, reloc: { op: 'pcrel_lo_prev', expr: target, column } },
+  ]
+}
+
 const la: Pseudo = {
   usage: 'rd, label',
   applies: count(2),
-  expand: (g, _at, line) => {
+  expand: (g, _at, line, ctx) => {
     const rdTok = a(g, 0)
     const rd = parseRegister('x', rdTok.text)
     if (rd === undefined) return diag({ line, column: rdTok.column }, 'operand-kind', `la: expected an x register, found '${rdTok.text}'`)
     const l = a(g, 1)
-    if (!/^[A-Za-z_.$][A-Za-z0-9_.$]*$/.test(l.text)) return diag({ line, column: l.column }, 'operand-kind', `la: expected a label, found '${l.text}'`)
-    return [
-      { op: 'auipc', operands: { rd, imm: 0 }, pcrel: { part: 'hi', label: l.text, column: l.column } },
-      { op: 'addi', operands: { rd, rs1: rd, imm: 0 }, pcrel: { part: 'lo', label: l.text, column: l.column } },
-    ]
+    const e = addressExpr(l, line, 'la', ctx)
+    if ('code' in e) return e
+    return pcrelPair(rd, e, l.column, { op: 'addi', operands: { rd, rs1: rd, imm: 0 } })
   },
 }
+
+/** call: auipc ra + jalr ra; tail: auipc t1 + jalr zero (GNU as, no relaxation). */
+const callLike = (link: number, scratch: number): Pseudo => ({
+  usage: 'label',
+  applies: count(1),
+  expand: (g, _at, line, ctx) => {
+    const l = a(g, 0)
+    const e = addressExpr(l, line, link ? 'call' : 'tail', ctx)
+    if ('code' in e) return e
+    return pcrelPair(scratch, e, l.column, { op: 'jalr', operands: { rd: link, rs1: scratch, imm: 0 } })
+  },
+})
+
+/** `csrrw rd, csr, 5` with an immediate is csrrwi (binutils prints the i forms so, and GNU as reads them back). */
+const isImm = (t: Token | undefined): boolean => t !== undefined && parseInteger(t.text) !== undefined
+const csrImmediate = (real: string): Pseudo => ({
+  usage: 'rd, csr, uimm',
+  applies: (g) => g.length === 3 && isImm(g[2]),
+  expand: (g) => [{ op: real, args: g }],
+})
+
+/** csrr rd, csr and friends: Zicsr instructions with x0 in one place (unprivileged spec, table of CSR pseudo-instructions). */
+const csrRead = (csr?: string): Pseudo => simple(csr ? 'rd' : 'rd, csr', csr ? [1] : [2], (g, at) => [{ op: 'csrrs', args: [a(g, 0), csr ? tok(csr, at) : a(g, 1), tok('zero', at)] }])
+const csrWrite = (real: string, csr?: string): Pseudo => simple(csr ? 'rs' : 'csr, rs', csr ? [1] : [2], (g, at) => {
+  const value = csr ? a(g, 0) : a(g, 1)
+  // csrw vxrm, 2 is csrwi (binutils prints csrrwi zero so).
+  const op = !csr && isImm(value) && !real.endsWith('i') ? `${real}i` : real
+  return [{ op, args: [tok('zero', at), csr ? tok(csr, at) : a(g, 0), value] }]
+})
+/** fsrm rs / fsrm rd, rs (and fscsr, fsflags): swap the field, optionally keeping the old value. */
+const csrSwap = (csr: string, real = 'csrrw'): Pseudo => ({
+  usage: 'rs | rd, rs',
+  applies: count(1, 2),
+  expand: (g, at) => [{ op: real, args: g.length === 1 ? [tok('zero', at), tok(csr, at), a(g, 0)] : [a(g, 0), tok(csr, at), a(g, 1)] }],
+})
+/** Unary F/D pseudos: fmv.s/d, fneg, fabs are sign injections of a register with itself. */
+const fsame = (real: string): Pseudo => simple('fd, fs', [2], (g) => [{ op: real, args: [a(g, 0), a(g, 1), a(g, 1)] }])
 
 const branchZero = (real: string, zeroFirst: boolean): Pseudo =>
   simple('rs, label', [2], (g, at) => [{ op: real, args: zeroFirst ? [tok('zero', at), a(g, 0), a(g, 1)] : [a(g, 0), tok('zero', at), a(g, 1)] }])
@@ -159,6 +213,56 @@ export const PSEUDOS: Record<string, Pseudo> = {
   neg: simple('rd, rs', [2], (g, at) => [{ op: 'sub', args: [a(g, 0), tok('zero', at), a(g, 1)] }]),
   li,
   la,
+  lla: la,
+  call: callLike(1, 1),
+  tail: callLike(0, 6),
+  fence: simple('', [0], (_g, at) => [{ op: 'fence', args: [tok('iorw', at), tok('iorw', at)] }]),
+  'sext.w': simple('rd, rs', [2], (g, at) => [{ op: 'addiw', args: [a(g, 0), a(g, 1), tok('0', at)] }]),
+  'zext.b': simple('rd, rs', [2], (g, at) => [{ op: 'andi', args: [a(g, 0), a(g, 1), tok('255', at)] }]),
+  'zext.h': simple('rd, rs', [2], (g, at) => [{ op: 'slli', args: [a(g, 0), a(g, 1), tok('48', at)] }, { op: 'srli', args: [a(g, 0), a(g, 0), tok('48', at)] }]),
+  'zext.w': simple('rd, rs', [2], (g, at) => [{ op: 'slli', args: [a(g, 0), a(g, 1), tok('32', at)] }, { op: 'srli', args: [a(g, 0), a(g, 0), tok('32', at)] }]),
+  negw: simple('rd, rs', [2], (g, at) => [{ op: 'subw', args: [a(g, 0), tok('zero', at), a(g, 1)] }]),
+  not: simple('rd, rs', [2], (g, at) => [{ op: 'xori', args: [a(g, 0), a(g, 1), tok('-1', at)] }]),
+  seqz: simple('rd, rs', [2], (g, at) => [{ op: 'sltiu', args: [a(g, 0), a(g, 1), tok('1', at)] }]),
+  snez: simple('rd, rs', [2], (g, at) => [{ op: 'sltu', args: [a(g, 0), tok('zero', at), a(g, 1)] }]),
+  sltz: simple('rd, rs', [2], (g, at) => [{ op: 'slt', args: [a(g, 0), a(g, 1), tok('zero', at)] }]),
+  sgtz: simple('rd, rs', [2], (g, at) => [{ op: 'slt', args: [a(g, 0), tok('zero', at), a(g, 1)] }]),
+  'fmv.s': fsame('fsgnj.s'),
+  'fmv.d': fsame('fsgnj.d'),
+  'fneg.s': fsame('fsgnjn.s'),
+  'fneg.d': fsame('fsgnjn.d'),
+  'fabs.s': fsame('fsgnjx.s'),
+  'fabs.d': fsame('fsgnjx.d'),
+  csrr: csrRead(),
+  csrrw: csrImmediate('csrrwi'),
+  csrrs: csrImmediate('csrrsi'),
+  csrrc: csrImmediate('csrrci'),
+  csrw: csrWrite('csrrw'),
+  csrs: csrWrite('csrrs'),
+  csrc: csrWrite('csrrc'),
+  csrwi: csrWrite('csrrwi'),
+  csrsi: csrWrite('csrrsi'),
+  csrci: csrWrite('csrrci'),
+  frcsr: csrRead('fcsr'),
+  frrm: csrRead('frm'),
+  frflags: csrRead('fflags'),
+  rdcycle: csrRead('cycle'),
+  rdtime: csrRead('time'),
+  rdinstret: csrRead('instret'),
+  fscsr: csrSwap('fcsr'),
+  fsrm: csrSwap('frm'),
+  fsflags: csrSwap('fflags'),
+  fsrmi: csrSwap('frm', 'csrrwi'),
+  fsflagsi: csrSwap('fflags', 'csrrwi'),
+  'vwcvt.x.x.v': simple('vd, vs[, v0.t]', [2, 3], (g, at) => [{ op: 'vwadd.vx', args: [a(g, 0), a(g, 1), tok('zero', at), ...rest(g, 2)] }]),
+  'vwcvtu.x.x.v': simple('vd, vs[, v0.t]', [2, 3], (g, at) => [{ op: 'vwaddu.vx', args: [a(g, 0), a(g, 1), tok('zero', at), ...rest(g, 2)] }]),
+  'vncvt.x.x.w': simple('vd, vs[, v0.t]', [2, 3], (g, at) => [{ op: 'vnsrl.wx', args: [a(g, 0), a(g, 1), tok('zero', at), ...rest(g, 2)] }]),
+  'vl1r.v': simple('vd, (rs1)', [2], (g) => [{ op: 'vl1re8.v', args: g }]),
+  'vl2r.v': simple('vd, (rs1)', [2], (g) => [{ op: 'vl2re8.v', args: g }]),
+  'vl4r.v': simple('vd, (rs1)', [2], (g) => [{ op: 'vl4re8.v', args: g }]),
+  'vl8r.v': simple('vd, (rs1)', [2], (g) => [{ op: 'vl8re8.v', args: g }]),
+  'vfrsqrte7.v': simple('vd, vs[, v0.t]', [2, 3], (g) => [{ op: 'vfrsqrt7.v', args: g }]),
+  'vfrece7.v': simple('vd, vs[, v0.t]', [2, 3], (g) => [{ op: 'vfrec7.v', args: g }]),
   j: simple('label', [1], (g, at) => [{ op: 'jal', args: [tok('zero', at), a(g, 0)] }]),
   jal: simple('label', [1], (g, at) => [{ op: 'jal', args: [tok('ra', at), a(g, 0)] }]),
   jr: simple('rs', [1], (g, at) => [{ op: 'jalr', args: [tok('zero', at), zeroOffset(a(g, 0))] }]),

@@ -18,6 +18,9 @@ export type VGroup =
   | 'lmul' // LMUL registers (EMUL = LMUL)
   | 'single' // one register: a mask, or element 0 of a reduction/scalar move
   | 'eew' // EMUL = EEW / SEW x LMUL (unit-stride and strided data, index vectors)
+  | 'wide' // EMUL = 2 x LMUL: the 2 x SEW operand of widening and narrowing ops
+  | 'vf2' | 'vf4' | 'vf8' // EMUL = LMUL / 2, / 4, / 8: the source of vzext/vsext
+  | 'whole' // `nr` whole registers, whatever vtype says (vl<nr>re, vs<nr>r, vmv<nr>r)
 
 export type OpCategory =
   | 'configuration' | 'scalar' | 'vector memory' | 'vector integer' | 'vector compare'
@@ -55,6 +58,19 @@ export interface OpInfo {
   noOverlap: readonly ('vs1' | 'vs2')[]
   /** Register file of each scalar operand, as the syntax names it. */
   files: { rd?: RegFile; rs1?: RegFile; rs2?: RegFile }
+  /** The rounding mode GNU as encodes when none is written (7, dyn), for instructions with an `rm` operand. */
+  rmDefault?: number
+  /** Segment accesses: fields per element (2..8); whole-register forms: registers moved. */
+  nf?: number
+  /** Whole-register loads, stores and moves (`vl<nr>re<eew>.v`, `vs<nr>r.v`, `vmv<nr>r.v`). */
+  nr?: number
+  /** Widening (2) or narrowing (0.5) destination EEW over SEW; extensions: source EEW = SEW / `extend`. */
+  widen?: number
+  extend?: number
+  /** vle<eew>ff.v and vlseg<nf>e<eew>ff.v: a fault past element 0 trims vl instead (spec 7.7). */
+  faultOnlyFirst?: boolean
+  /** vadc, vsbc and the carry-in forms of vmadc/vmsbc read v0 as carry or borrow bits. */
+  carryIn?: boolean
 }
 
 type Meta = Partial<Omit<OpInfo, 'op' | 'syntax' | 'match' | 'mask' | 'files'>> & { category: OpCategory }
@@ -83,16 +99,23 @@ function add(op: string, syntax: readonly OperandKind[], match: number, meta: Me
   })
 }
 
-// ---- scalar subset (RV64I, M, D) ----
-const R = (f7: number, f3: number): number => (f7 << 25) | (f3 << 12) | 0x33
+// ---- scalar: RV64I, M, A, F, D and Zicsr (unprivileged ISA, opcode map) ----
+const R = (f7: number, f3: number, opcode = 0x33): number => (f7 << 25) | (f3 << 12) | opcode
 const scalar: Meta = { category: 'scalar' }
-for (const [op, f7, f3] of [['add', 0, 0], ['sub', 0x20, 0], ['mul', 1, 0], ['and', 0, 7], ['or', 0, 6], ['xor', 0, 4]] as const) {
-  add(op, ['xd', 'xs1', 'xs2'], R(f7, f3), scalar)
-}
-for (const [op, f3] of [['addi', 0], ['andi', 7], ['ori', 6]] as const) add(op, ['xd', 'xs1', 'simm12'], (f3 << 12) | 0x13, scalar)
+for (const [op, f7, f3] of [
+  ['add', 0, 0], ['sub', 0x20, 0], ['sll', 0, 1], ['slt', 0, 2], ['sltu', 0, 3], ['xor', 0, 4], ['srl', 0, 5], ['sra', 0x20, 5], ['or', 0, 6], ['and', 0, 7],
+  ['mul', 1, 0], ['mulh', 1, 1], ['mulhsu', 1, 2], ['mulhu', 1, 3], ['div', 1, 4], ['divu', 1, 5], ['rem', 1, 6], ['remu', 1, 7],
+] as const) add(op, ['xd', 'xs1', 'xs2'], R(f7, f3), scalar)
+for (const [op, f7, f3] of [
+  ['addw', 0, 0], ['subw', 0x20, 0], ['sllw', 0, 1], ['srlw', 0, 5], ['sraw', 0x20, 5],
+  ['mulw', 1, 0], ['divw', 1, 4], ['divuw', 1, 5], ['remw', 1, 6], ['remuw', 1, 7],
+] as const) add(op, ['xd', 'xs1', 'xs2'], R(f7, f3, 0x3b), scalar)
+for (const [op, f3] of [['addi', 0], ['slti', 2], ['sltiu', 3], ['xori', 4], ['ori', 6], ['andi', 7]] as const) add(op, ['xd', 'xs1', 'simm12'], (f3 << 12) | 0x13, scalar)
 for (const [op, f6, f3] of [['slli', 0, 1], ['srli', 0, 5], ['srai', 0x10, 5]] as const) {
   add(op, ['xd', 'xs1', 'shamt6'], (f6 << 26) | (f3 << 12) | 0x13, scalar)
 }
+add('addiw', ['xd', 'xs1', 'simm12'], 0x1b, scalar)
+for (const [op, f7, f3] of [['slliw', 0, 1], ['srliw', 0, 5], ['sraiw', 0x20, 5]] as const) add(op, ['xd', 'xs1', 'shamt5'], R(f7, f3, 0x1b), scalar)
 add('lui', ['xd', 'uimm20'], 0x37, scalar)
 add('auipc', ['xd', 'uimm20'], 0x17, scalar)
 for (const [op, f3] of [['beq', 0], ['bne', 1], ['blt', 4], ['bge', 5], ['bltu', 6], ['bgeu', 7]] as const) {
@@ -100,17 +123,55 @@ for (const [op, f3] of [['beq', 0], ['bne', 1], ['blt', 4], ['bge', 5], ['bltu',
 }
 add('jal', ['xd', 'jump'], 0x6f, scalar)
 add('jalr', ['xd', 'load'], 0x67, scalar)
-add('ld', ['xd', 'load'], (3 << 12) | 0x03, scalar)
-add('lw', ['xd', 'load'], (2 << 12) | 0x03, scalar)
-add('sd', ['xs2', 'store'], (3 << 12) | 0x23, scalar)
-add('sw', ['xs2', 'store'], (2 << 12) | 0x23, scalar)
-add('fld', ['fd', 'load'], (3 << 12) | 0x07, scalar)
-add('flw', ['fd', 'load'], (2 << 12) | 0x07, scalar)
-add('fsd', ['fs2', 'store'], (3 << 12) | 0x27, scalar)
-add('fsw', ['fs2', 'store'], (2 << 12) | 0x27, scalar)
-add('fmv.d.x', ['fd', 'xs1'], (0x79 << 25) | 0x53, scalar)
-add('fmv.x.d', ['xd', 'fs1'], (0x71 << 25) | 0x53, scalar)
+for (const [op, f3] of [['lb', 0], ['lh', 1], ['lw', 2], ['ld', 3], ['lbu', 4], ['lhu', 5], ['lwu', 6]] as const) add(op, ['xd', 'load'], (f3 << 12) | 0x03, scalar)
+for (const [op, f3] of [['sb', 0], ['sh', 1], ['sw', 2], ['sd', 3]] as const) add(op, ['xs2', 'store'], (f3 << 12) | 0x23, scalar)
+add('fence', ['pred', 'succ'], 0x0f, scalar)
+add('fence.i', [], 0x100f, scalar)
 add('ecall', [], 0x73, scalar)
+add('ebreak', [], 0x00100073, scalar)
+for (const [op, f3] of [['csrrw', 1], ['csrrs', 2], ['csrrc', 3]] as const) add(op, ['xd', 'csr', 'xs1'], (f3 << 12) | 0x73, scalar)
+for (const [op, f3] of [['csrrwi', 5], ['csrrsi', 6], ['csrrci', 7]] as const) add(op, ['xd', 'csr', 'uimm5'], (f3 << 12) | 0x73, scalar)
+// A: lr/sc and the AMOs, each with the .aq, .rl and .aqrl orderings (bits 26, 25).
+for (const [w, f3] of [['w', 2], ['d', 3]] as const) {
+  for (const [order, bits] of [['', 0], ['.aq', 2], ['.rl', 1], ['.aqrl', 3]] as const) {
+    const base = (f3 << 12) | 0x2f | (bits << 25)
+    add(`lr.${w}${order}`, ['xd', 'vaddr'], base | (0x02 << 27), scalar)
+    add(`sc.${w}${order}`, ['xd', 'xs2', 'vaddr'], base | (0x03 << 27), scalar)
+    for (const [amo, f5] of [['amoswap', 0x01], ['amoadd', 0x00], ['amoxor', 0x04], ['amoand', 0x0c], ['amoor', 0x08], ['amomin', 0x10], ['amomax', 0x14], ['amominu', 0x18], ['amomaxu', 0x1c]] as const) {
+      add(`${amo}.${w}${order}`, ['xd', 'xs2', 'vaddr'], base | (f5 << 27), scalar)
+    }
+  }
+}
+// F and D (fmt bits 26:25: 0 single, 1 double).
+add('flw', ['fd', 'load'], (2 << 12) | 0x07, scalar)
+add('fld', ['fd', 'load'], (3 << 12) | 0x07, scalar)
+add('fsw', ['fs2', 'store'], (2 << 12) | 0x27, scalar)
+add('fsd', ['fs2', 'store'], (3 << 12) | 0x27, scalar)
+const FP = (f5: number, fmt: number, rs2 = 0): number => (f5 << 27) | (fmt << 25) | (rs2 << 20) | 0x53
+const rounded: Meta = { ...scalar, rmDefault: 7 }
+for (const [t, fmt] of [['s', 0], ['d', 1]] as const) {
+  for (const [op, opcode] of [['fmadd', 0x43], ['fmsub', 0x47], ['fnmsub', 0x4b], ['fnmadd', 0x4f]] as const) {
+    add(`${op}.${t}`, ['fd', 'fs1', 'fs2', 'fs3', 'rm'], (fmt << 25) | opcode, rounded)
+  }
+  for (const [op, f5] of [['fadd', 0], ['fsub', 1], ['fmul', 2], ['fdiv', 3]] as const) add(`${op}.${t}`, ['fd', 'fs1', 'fs2', 'rm'], FP(f5, fmt), rounded)
+  add(`fsqrt.${t}`, ['fd', 'fs1', 'rm'], FP(0x0b, fmt), rounded)
+  for (const [op, f3] of [['fsgnj', 0], ['fsgnjn', 1], ['fsgnjx', 2]] as const) add(`${op}.${t}`, ['fd', 'fs1', 'fs2'], FP(4, fmt) | (f3 << 12), scalar)
+  for (const [op, f3] of [['fmin', 0], ['fmax', 1]] as const) add(`${op}.${t}`, ['fd', 'fs1', 'fs2'], FP(5, fmt) | (f3 << 12), scalar)
+  for (const [op, f3] of [['fle', 0], ['flt', 1], ['feq', 2]] as const) add(`${op}.${t}`, ['xd', 'fs1', 'fs2'], FP(0x14, fmt) | (f3 << 12), scalar)
+  add(`fclass.${t}`, ['xd', 'fs1'], FP(0x1c, fmt) | (1 << 12), scalar)
+  for (const [it, code] of [['w', 0], ['wu', 1], ['l', 2], ['lu', 3]] as const) {
+    add(`fcvt.${it}.${t}`, ['xd', 'fs1', 'rm'], FP(0x18, fmt, code), rounded)
+    // A 32-bit integer to double is exact: binutils 2.40 takes no rounding mode there and encodes rne (0).
+    if (t === 'd' && (it === 'w' || it === 'wu')) add(`fcvt.${t}.${it}`, ['fd', 'xs1'], FP(0x1a, fmt, code), scalar)
+    else add(`fcvt.${t}.${it}`, ['fd', 'xs1', 'rm'], FP(0x1a, fmt, code), rounded)
+  }
+}
+add('fcvt.s.d', ['fd', 'fs1', 'rm'], FP(0x08, 0, 1), rounded)
+add('fcvt.d.s', ['fd', 'fs1'], FP(0x08, 1, 0), scalar)
+add('fmv.x.w', ['xd', 'fs1'], FP(0x1c, 0), scalar)
+add('fmv.w.x', ['fd', 'xs1'], FP(0x1e, 0), scalar)
+add('fmv.x.d', ['xd', 'fs1'], FP(0x1c, 1), scalar)
+add('fmv.d.x', ['fd', 'xs1'], FP(0x1e, 1), scalar)
 
 // ---- configuration (spec section 6) ----
 const CFG = (7 << 12) | 0x57
@@ -123,6 +184,7 @@ add('vsetvl', ['xd', 'xs1', 'xs2'], CFG | (1 << 31), config)
 const WIDTH: Record<Sew, number> = { 8: 0, 16: 5, 32: 6, 64: 7 }
 const LOAD = 0x07
 const STORE = 0x27
+const VM1_MEM = 1 << 25
 const mem = (isStore: boolean, pattern: MemoryPattern, eew: Sew, extra: Meta['groups'] = {}): Meta => ({
   category: 'vector memory', unit: isStore ? 'store' : 'load', shape: 'memory', eew,
   memory: { pattern, isStore }, groups: { vd: pattern === 'indexed' ? 'lmul' : 'eew', ...extra },
@@ -137,6 +199,32 @@ for (const eew of [8, 16, 32, 64] as const) {
     add(`vl${kind}xei${eew}.v`, ['vd', 'vaddr', 'vs2', 'vm'], LOAD | w | (mop << 26), mem(false, 'indexed', eew, { vs2: 'eew' }))
     add(`vs${kind}xei${eew}.v`, ['vs3', 'vaddr', 'vs2', 'vm'], STORE | w | (mop << 26), mem(true, 'indexed', eew, { vs2: 'eew' }))
   }
+}
+for (const eew of [8, 16, 32, 64] as const) {
+  const w = WIDTH[eew] << 12
+  // Fault-only-first (spec 7.7): lumop 10000.
+  add(`vle${eew}ff.v`, ['vd', 'vaddr', 'vm'], LOAD | w | (0b10000 << 20), { ...mem(false, 'unit', eew), faultOnlyFirst: true })
+  // Segments (spec 7.8): nf - 1 in bits 31:29.
+  for (let nf = 2; nf <= 8; nf++) {
+    const f = ((nf - 1) << 29) >>> 0
+    const seg = (isStore: boolean, pattern: MemoryPattern, extra: Meta['groups'] = {}): Meta => ({ ...mem(isStore, pattern, eew, extra), nf })
+    add(`vlseg${nf}e${eew}.v`, ['vd', 'vaddr', 'vm'], LOAD | w | f, seg(false, 'unit'))
+    add(`vlseg${nf}e${eew}ff.v`, ['vd', 'vaddr', 'vm'], LOAD | w | f | (0b10000 << 20), { ...seg(false, 'unit'), faultOnlyFirst: true })
+    add(`vsseg${nf}e${eew}.v`, ['vs3', 'vaddr', 'vm'], STORE | w | f, seg(true, 'unit'))
+    add(`vlsseg${nf}e${eew}.v`, ['vd', 'vaddr', 'xs2', 'vm'], LOAD | w | f | (2 << 26), seg(false, 'strided'))
+    add(`vssseg${nf}e${eew}.v`, ['vs3', 'vaddr', 'xs2', 'vm'], STORE | w | f | (2 << 26), seg(true, 'strided'))
+    for (const [kind, mop] of [['u', 1], ['o', 3]] as const) {
+      add(`vl${kind}xseg${nf}ei${eew}.v`, ['vd', 'vaddr', 'vs2', 'vm'], LOAD | w | f | (mop << 26), seg(false, 'indexed', { vs2: 'eew' }))
+      add(`vs${kind}xseg${nf}ei${eew}.v`, ['vs3', 'vaddr', 'vs2', 'vm'], STORE | w | f | (mop << 26), seg(true, 'indexed', { vs2: 'eew' }))
+    }
+  }
+  // Whole-register loads (spec 7.9): lumop 01000, vm = 1, nf = registers - 1.
+  for (const nr of [1, 2, 4, 8]) {
+    add(`vl${nr}re${eew}.v`, ['vd', 'vaddr'], LOAD | w | VM1_MEM | (0b01000 << 20) | (((nr - 1) << 29) >>> 0), { ...mem(false, 'unit', eew), nr, groups: { vd: 'whole' } })
+  }
+}
+for (const nr of [1, 2, 4, 8]) {
+  add(`vs${nr}r.v`, ['vs3', 'vaddr'], STORE | VM1_MEM | (0b01000 << 20) | (((nr - 1) << 29) >>> 0), { ...mem(true, 'unit', 8), nr, groups: { vd: 'whole' } })
 }
 add('vlm.v', ['vd', 'vaddr'], LOAD | (1 << 25) | (0b01011 << 20), { ...mem(false, 'mask', 8), groups: { vd: 'single' } })
 add('vsm.v', ['vs3', 'vaddr'], STORE | (1 << 25) | (0b01011 << 20), { ...mem(true, 'mask', 8), groups: { vd: 'single' } })
@@ -310,6 +398,114 @@ add('vrgather.vv', FORM_SYNTAX.vv, opv(0b001100, IVV), { ...perm, noOverlap: ['v
 add('vrgather.vx', FORM_SYNTAX.vx, opv(0b001100, IVX), permUp)
 add('vrgather.vi', FORM_SYNTAX.vu, opv(0b001100, IVI), permUp)
 add('vcompress.vm', ['vd', 'vs2', 'vs1'], opv(0b010111, MVV, VM1), { ...perm, groups: { vs1: 'single' }, noOverlap: ['vs1', 'vs2'] })
+
+// ---- add-with-carry and subtract-with-borrow (spec 11.4) ----
+const carry: Meta = { category: 'vector integer', unit: 'alu' }
+add('vadc.vvm', ['vd', 'vs2', 'vs1', 'v0'], opv(0b010000, IVV), { ...carry, carryIn: true })
+add('vadc.vxm', ['vd', 'vs2', 'xs1', 'v0'], opv(0b010000, IVX), { ...carry, carryIn: true })
+add('vadc.vim', ['vd', 'vs2', 'simm5', 'v0'], opv(0b010000, IVI), { ...carry, carryIn: true })
+add('vsbc.vvm', ['vd', 'vs2', 'vs1', 'v0'], opv(0b010010, IVV), { ...carry, carryIn: true })
+add('vsbc.vxm', ['vd', 'vs2', 'xs1', 'v0'], opv(0b010010, IVX), { ...carry, carryIn: true })
+const carryOut: Meta = { ...carry, maskDest: true, groups: { vd: 'single' } }
+add('vmadc.vvm', ['vd', 'vs2', 'vs1', 'v0'], opv(0b010001, IVV), { ...carryOut, carryIn: true })
+add('vmadc.vxm', ['vd', 'vs2', 'xs1', 'v0'], opv(0b010001, IVX), { ...carryOut, carryIn: true })
+add('vmadc.vim', ['vd', 'vs2', 'simm5', 'v0'], opv(0b010001, IVI), { ...carryOut, carryIn: true })
+add('vmadc.vv', ['vd', 'vs2', 'vs1'], opv(0b010001, IVV, VM1), carryOut)
+add('vmadc.vx', ['vd', 'vs2', 'xs1'], opv(0b010001, IVX, VM1), carryOut)
+add('vmadc.vi', ['vd', 'vs2', 'simm5'], opv(0b010001, IVI, VM1), carryOut)
+add('vmsbc.vvm', ['vd', 'vs2', 'vs1', 'v0'], opv(0b010011, IVV), { ...carryOut, carryIn: true })
+add('vmsbc.vxm', ['vd', 'vs2', 'xs1', 'v0'], opv(0b010011, IVX), { ...carryOut, carryIn: true })
+add('vmsbc.vv', ['vd', 'vs2', 'vs1'], opv(0b010011, IVV, VM1), carryOut)
+add('vmsbc.vx', ['vd', 'vs2', 'xs1'], opv(0b010011, IVX, VM1), carryOut)
+
+// ---- more integer ops (spec 11.10, 11.3) ----
+binary('vmulhsu', 0b100110, ['vv', 'vx'], 'm', imul)
+const ext: Meta = { category: 'vector integer', unit: 'alu' }
+for (const [name, code, f] of [['vzext.vf8', 0b00010, 8], ['vsext.vf8', 0b00011, 8], ['vzext.vf4', 0b00100, 4], ['vsext.vf4', 0b00101, 4], ['vzext.vf2', 0b00110, 2], ['vsext.vf2', 0b00111, 2]] as const) {
+  add(name, ['vd', 'vs2', 'vm'], opv(0b010010, MVV, vs1Fixed(code)), { ...ext, extend: f, groups: { vs2: `vf${f}` } })
+}
+
+// ---- widening integer (spec 11.2, 11.12, 11.14): the destination is 2 x SEW ----
+const wide: Meta = { category: 'vector integer', unit: 'alu', widen: 2, groups: { vd: 'wide' } }
+binary('vwaddu', 0b110000, ['vv', 'vx'], 'm', wide)
+binary('vwadd', 0b110001, ['vv', 'vx'], 'm', wide)
+binary('vwsubu', 0b110010, ['vv', 'vx'], 'm', wide)
+binary('vwsub', 0b110011, ['vv', 'vx'], 'm', wide)
+const wideW: Meta = { ...wide, groups: { vd: 'wide', vs2: 'wide' } }
+for (const [name, f6] of [['vwaddu', 0b110100], ['vwadd', 0b110101], ['vwsubu', 0b110110], ['vwsub', 0b110111]] as const) {
+  add(`${name}.wv`, FORM_SYNTAX.vv, opv(f6, MVV), wideW)
+  add(`${name}.wx`, FORM_SYNTAX.vx, opv(f6, MVX), wideW)
+}
+const wmul: Meta = { ...wide, unit: 'mul' }
+binary('vwmulu', 0b111000, ['vv', 'vx'], 'm', wmul)
+binary('vwmulsu', 0b111010, ['vv', 'vx'], 'm', wmul)
+binary('vwmul', 0b111011, ['vv', 'vx'], 'm', wmul)
+const wmacc: Meta = { ...wmul, readsVd: true }
+binary('vwmaccu', 0b111100, ['vv', 'vx'], 'm', wmacc, true)
+binary('vwmacc', 0b111101, ['vv', 'vx'], 'm', wmacc, true)
+binary('vwmaccus', 0b111110, ['vx'], 'm', wmacc, true)
+binary('vwmaccsu', 0b111111, ['vv', 'vx'], 'm', wmacc, true)
+
+// ---- narrowing shifts and clips (spec 11.7, 12.5): vs2 is 2 x SEW ----
+const narrow: Meta = { category: 'vector integer', unit: 'alu', widen: 0.5, groups: { vs2: 'wide' } }
+for (const [name, f6] of [['vnsrl', 0b101100], ['vnsra', 0b101101], ['vnclipu', 0b101110], ['vnclip', 0b101111]] as const) {
+  add(`${name}.wv`, FORM_SYNTAX.vv, opv(f6, IVV), narrow)
+  add(`${name}.wx`, FORM_SYNTAX.vx, opv(f6, IVX), narrow)
+  add(`${name}.wi`, FORM_SYNTAX.vu, opv(f6, IVI), narrow)
+}
+
+// ---- fixed point (spec 12) ----
+const fixed: Meta = { category: 'vector integer', unit: 'alu' }
+binary('vsaddu', 0b100000, ['vv', 'vx', 'vi'], 'i', fixed)
+binary('vsadd', 0b100001, ['vv', 'vx', 'vi'], 'i', fixed)
+binary('vssubu', 0b100010, ['vv', 'vx'], 'i', fixed)
+binary('vssub', 0b100011, ['vv', 'vx'], 'i', fixed)
+binary('vaaddu', 0b001000, ['vv', 'vx'], 'm', fixed)
+binary('vaadd', 0b001001, ['vv', 'vx'], 'm', fixed)
+binary('vasubu', 0b001010, ['vv', 'vx'], 'm', fixed)
+binary('vasub', 0b001011, ['vv', 'vx'], 'm', fixed)
+binary('vsmul', 0b100111, ['vv', 'vx'], 'i', { ...fixed, unit: 'mul' })
+binary('vssrl', 0b101010, ['vv', 'vx', 'vu'], 'i', fixed)
+binary('vssra', 0b101011, ['vv', 'vx', 'vu'], 'i', fixed)
+
+// ---- widening reductions (spec 14.2, 14.3): vd and vs1 hold a 2 x SEW element 0 ----
+add('vwredsumu.vs', ['vd', 'vs2', 'vs1', 'vm'], opv(0b110000, IVV), { ...red, widen: 2 })
+add('vwredsum.vs', ['vd', 'vs2', 'vs1', 'vm'], opv(0b110001, IVV), { ...red, widen: 2 })
+add('vfwredusum.vs', ['vd', 'vs2', 'vs1', 'vm'], opv(0b110001, FVV), { ...fred, flopsPerElement: 1, widen: 2 })
+add('vfwredosum.vs', ['vd', 'vs2', 'vs1', 'vm'], opv(0b110011, FVV), { ...fred, flopsPerElement: 1, shape: 'ordered-reduction', widen: 2 })
+
+// ---- widening FP (spec 13.3, 13.5, 13.7) ----
+const fwide: Meta = { ...fpu, widen: 2, groups: { vd: 'wide' } }
+binary('vfwadd', 0b110000, ['vv', 'vf'], 'f', fwide)
+binary('vfwsub', 0b110010, ['vv', 'vf'], 'f', fwide)
+binary('vfwmul', 0b111000, ['vv', 'vf'], 'f', fwide)
+for (const [name, f6] of [['vfwadd', 0b110100], ['vfwsub', 0b110110]] as const) {
+  add(`${name}.wv`, FORM_SYNTAX.vv, opv(f6, FVV), { ...fwide, groups: { vd: 'wide', vs2: 'wide' } })
+  add(`${name}.wf`, FORM_SYNTAX.vf, opv(f6, FVF), { ...fwide, groups: { vd: 'wide', vs2: 'wide' } })
+}
+const fwmacc: Meta = { ...fwide, flopsPerElement: 2, readsVd: true }
+binary('vfwmacc', 0b111100, ['vv', 'vf'], 'f', fwmacc, true)
+binary('vfwnmacc', 0b111101, ['vv', 'vf'], 'f', fwmacc, true)
+binary('vfwmsac', 0b111110, ['vv', 'vf'], 'f', fwmacc, true)
+binary('vfwnmsac', 0b111111, ['vv', 'vf'], 'f', fwmacc, true)
+
+// ---- FP unary ops and the remaining conversions (spec 13.8 to 13.10, 13.14, 13.17 to 13.19) ----
+add('vfrsqrt7.v', ['vd', 'vs2', 'vm'], opv(0b010011, FVV, vs1Fixed(0b00100)), fpu0)
+add('vfrec7.v', ['vd', 'vs2', 'vm'], opv(0b010011, FVV, vs1Fixed(0b00101)), fpu0)
+add('vfclass.v', ['vd', 'vs2', 'vm'], opv(0b010011, FVV, vs1Fixed(0b10000)), fpu0)
+add('vfcvt.rtz.xu.f.v', ['vd', 'vs2', 'vm'], opv(0b010010, FVV, vs1Fixed(0b00110)), fpu0)
+for (const [suffix, code] of [['xu.f', 0b01000], ['x.f', 0b01001], ['f.xu', 0b01010], ['f.x', 0b01011], ['f.f', 0b01100], ['rtz.xu.f', 0b01110], ['rtz.x.f', 0b01111]] as const) {
+  add(`vfwcvt.${suffix}.v`, ['vd', 'vs2', 'vm'], opv(0b010010, FVV, vs1Fixed(code)), { ...fpu0, widen: 2, groups: { vd: 'wide' } })
+}
+for (const [suffix, code] of [['xu.f', 0b10000], ['x.f', 0b10001], ['f.xu', 0b10010], ['f.x', 0b10011], ['f.f', 0b10100], ['rod.f.f', 0b10101], ['rtz.xu.f', 0b10110], ['rtz.x.f', 0b10111]] as const) {
+  add(`vfncvt.${suffix}.w`, ['vd', 'vs2', 'vm'], opv(0b010010, FVV, vs1Fixed(code)), { ...fpu0, widen: 0.5, groups: { vs2: 'wide' } })
+}
+
+// ---- gathers with 16-bit indices and whole-register moves (spec 16.4, 16.6) ----
+add('vrgatherei16.vv', FORM_SYNTAX.vv, opv(0b001110, IVV), { ...perm, groups: { vs1: 'eew' }, eew: 16, noOverlap: ['vs1', 'vs2'] })
+for (const nr of [1, 2, 4, 8]) {
+  add(`vmv${nr}r.v`, ['vd', 'vs2'], opv(0b100111, IVI, VM1 | vs1Fixed(nr - 1)), { ...move, nr, groups: { vd: 'whole', vs2: 'whole' } })
+}
 
 /** Every supported instruction, in table order (the README lists them in this order). */
 export const OPS: readonly OpInfo[] = table

@@ -43,7 +43,14 @@ export interface Operands {
   rd?: number // x or f destination (which file is given by the table entry)
   rs1?: number // x or f source 1 (base address for memory ops)
   rs2?: number // x or f source 2 (stride for strided memory ops)
-  rs3?: number
+  rs3?: number // f source 3 of fused multiply-add
+  /** Rounding mode field (0 rne, 1 rtz, 2 rdn, 3 rup, 4 rmm, 7 dyn). */
+  rm?: number
+  /** CSR number of the Zicsr instructions. */
+  csr?: number
+  /** fence predecessor and successor sets (bit 3 i, 2 o, 1 r, 0 w). */
+  pred?: number
+  succ?: number
   vd?: number // vector destination, or store data (vs3) for vector stores
   vs1?: number
   vs2?: number // also the index vector of indexed memory ops
@@ -78,7 +85,9 @@ export interface Program {
   data: Uint8Array
   /** Base address of the data segment. */
   dataBase: number
-  /** Label name -> byte address (text and data labels). */
+  /** Where execution starts: `_start` when the program defines it, else absent (the first instruction). */
+  entry?: number
+  /** Label name -> byte address (text and data labels) and constant symbols (.equ/.set) -> value. */
   symbols: Record<string, number>
   /** Data labels in source order with their size in bytes, for the data table. */
   dataLabels: { name: string; address: number; size: number; loc: SourceLoc }[]

@@ -36,7 +36,7 @@ function join(a: State | undefined, b: State): State {
 }
 
 /** The vtype known to be in force before each instruction (undefined: unreachable). */
-export function knownVtypes(code: readonly CheckedInstruction[], textBase: number): (State | undefined)[] {
+export function knownVtypes(code: readonly CheckedInstruction[], textBase: number, entry = 0): (State | undefined)[] {
   const before: (State | undefined)[] = new Array(code.length)
   const indexOf = (address: number): number => (address - textBase) / 4
   const work: number[] = []
@@ -49,6 +49,7 @@ export function knownVtypes(code: readonly CheckedInstruction[], textBase: numbe
     }
   }
   flow(0, 'unknown')
+  flow(entry, 'unknown')
   while (work.length) {
     const i = work.pop() as number
     const c = code[i] as CheckedInstruction
@@ -73,10 +74,17 @@ export function knownVtypes(code: readonly CheckedInstruction[], textBase: numbe
   return before
 }
 
-function emul(group: VGroup, vt: Vtype, eew: number | undefined): number {
-  if (group === 'single') return 1
-  if (group === 'lmul') return vt.lmul
-  return ((eew ?? vt.sew) / vt.sew) * vt.lmul
+function emul(group: VGroup, vt: Vtype, info: OpInfo): number {
+  switch (group) {
+    case 'single': return 1
+    case 'lmul': return vt.lmul
+    case 'wide': return 2 * vt.lmul
+    case 'vf2': return vt.lmul / 2
+    case 'vf4': return vt.lmul / 4
+    case 'vf8': return vt.lmul / 8
+    case 'whole': return info.nr ?? 1
+    case 'eew': return ((info.eew ?? vt.sew) / vt.sew) * vt.lmul
+  }
 }
 
 const KEYS = ['vd', 'vs2', 'vs1'] as const
@@ -86,9 +94,9 @@ const OVERLAP_SECTION: Record<string, string> = {
 }
 
 /** Diagnostics for register groups and overlaps, in program order. */
-export function checkVectorOperands(code: readonly CheckedInstruction[], textBase: number): SimDiagnostic[] {
+export function checkVectorOperands(code: readonly CheckedInstruction[], textBase: number, entry = 0): SimDiagnostic[] {
   const out: SimDiagnostic[] = []
-  const states = knownVtypes(code, textBase)
+  const states = knownVtypes(code, textBase, entry)
   code.forEach((c, i) => {
     const { info, operands: o } = c
     if (!info.vector || info.config) return
@@ -102,17 +110,21 @@ export function checkVectorOperands(code: readonly CheckedInstruction[], textBas
       if (g === undefined || reg === undefined) continue
       let size = 1
       if (known) {
-        const e = emul(g, known.vtype, info.eew)
+        const e = emul(g, known.vtype, info)
+        const fields = key === 'vd' && info.nf ? info.nf : 1
         const why = `vtype ${formatVtype(known.vtype)} set on line ${known.line}`
-        if (e > 8 || e < 0.125) {
-          out.push(diag(at(key), 'emul-range', `${info.op}: ${key} needs EMUL = ${e} with ${why}, outside 1/8..8 (spec 7.3)`))
+        if (e > 8 || e < 0.125 || Math.max(1, e) * fields > 8) {
+          const what = fields > 1 ? `${fields} fields of EMUL ${e}` : `EMUL = ${e}`
+          out.push(diag(at(key), 'emul-range', `${info.op}: ${key} needs ${what} with ${why}, outside ${fields > 1 ? 'the 8 registers a segment may use (spec 7.8)' : '1/8..8 (spec 7.3)'}`))
           continue
         }
-        size = Math.max(1, e)
-        if (reg % size !== 0) {
-          const what = g === 'eew' ? `EMUL ${lmulName(size as Vtype['lmul'])}` : `LMUL ${lmulName(known.vtype.lmul)}`
-          out.push(diag(at(key), 'lmul-align', `${info.op}: v${reg} is not a valid ${key} register group for ${what} (${why}): use a multiple of ${size} (spec 3.4.2)`))
+        const align = Math.max(1, e)
+        size = align * fields
+        if (reg % align !== 0) {
+          const what = g === 'lmul' ? `LMUL ${lmulName(known.vtype.lmul)}` : `EMUL ${lmulName(align as Vtype['lmul'])}`
+          out.push(diag(at(key), 'lmul-align', `${info.op}: v${reg} is not a valid ${key} register group for ${what} (${why}): use a multiple of ${align} (spec 3.4.2)`))
         }
+        if (reg + size > 32) out.push(diag(at(key), 'lmul-align', `${info.op}: the ${key} group v${reg}..v${reg + size - 1} runs past v31`))
       }
       span[key] = [reg, reg + size - 1]
     }

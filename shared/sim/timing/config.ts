@@ -8,6 +8,8 @@ import type { Sew } from '../isa/types'
 export const UNITS = ['alu', 'mul', 'fpu', 'div'] as const
 export type ExecUnit = (typeof UNITS)[number]
 export const UNIT_INDEX: Record<ExecUnit, number> = { alu: 0, mul: 1, fpu: 2, div: 3 }
+/** Units a lane has: the stride of the per-lane unit arrays ([lane][unit]). */
+export const UNIT_COUNT = UNITS.length
 
 export interface Derived {
   machine: Machine

@@ -4,19 +4,14 @@
  * per-cycle notes from which stalls are classified.
  */
 import type { Machine } from '../../schemas/machine'
-import type { StallReason } from '../trace/types'
-import { STALL_REASONS } from '../trace/types'
+import { STALL_RANK } from '../trace/types'
 import type { Derived } from './config'
 import type { Inst } from './inst'
-import { UNITS } from './config'
-import type { Recorder } from './recorder'
+import { UNIT_COUNT, UNITS } from './config'
+import type { SpanRecorder } from './recorder'
 import type { RegFile } from './regfile'
 import type { Renamer } from './rename'
 
-export const REASON: Record<StallReason, number> = Object.fromEntries(STALL_REASONS.map((r, i) => [r, i])) as Record<
-  StallReason,
-  number
->
 
 /** Called by an instruction when it is finished everywhere. */
 export interface CompletionSink {
@@ -36,8 +31,12 @@ export class Ctx {
   /** Ring links: up[l] carries lane l -> l+1, down[l] carries lane l+1 -> l (mod L). */
   readonly linkUpRes: Int32Array
   readonly linkDownRes: Int32Array
-  readonly loadBusRes: Int32Array
-  readonly storeBusRes: Int32Array
+  readonly loadBusRes: number
+  readonly storeBusRes: number
+  /** Bits the load and store buses still carry in `busCycle` (accesses take them oldest first). */
+  private loadBusLeft = 0
+  private storeBusLeft = 0
+  private busCycle = -1
   /** Per lane, this cycle: did the lane read, execute, write or hold results in flight. */
   readonly progress: Uint8Array
   /** The cycle being stepped (notes are only valid within it). */
@@ -62,17 +61,17 @@ export class Ctx {
     readonly d: Derived,
     readonly rf: RegFile,
     readonly ren: Renamer,
-    readonly rec: Recorder,
+    readonly rec: SpanRecorder,
     readonly laneTimes: Int32Array,
   ) {
     this.m = d.machine
     const L = (this.L = d.lanes)
-    this.unitFree = new Int32Array(L * 4)
-    this.unitRes = new Int32Array(L * 4)
+    this.unitFree = new Int32Array(L * UNIT_COUNT)
+    this.unitRes = new Int32Array(L * UNIT_COUNT)
     this.bankRes = new Int32Array(L * d.banks)
     for (let l = 0; l < L; l++) {
       UNITS.forEach((u, k) => {
-        this.unitRes[l * 4 + k] = rec.addResource({ kind: 'unit', name: `lane ${l} ${u}`, lane: l, capacity: 1 })
+        this.unitRes[l * UNIT_COUNT + k] = rec.addResource({ kind: 'unit', name: `lane ${l} ${u}`, lane: l, capacity: 1 })
       })
       for (let b = 0; b < d.banks; b++) {
         this.bankRes[l * d.banks + b] = rec.addResource({ kind: 'bank', name: `lane ${l} bank ${b}`, lane: l, capacity: d.ports })
@@ -85,13 +84,10 @@ export class Ctx {
       this.linkUpRes[l] = rec.addResource({ kind: 'ring', name: `ring ${l}->${(l + 1) % L}`, lane: l, capacity: 1 })
       this.linkDownRes[l] = rec.addResource({ kind: 'ring', name: `ring ${(l + 1) % L}->${l}`, lane: (l + 1) % L, capacity: 1 })
     }
-    const P = this.m.memoryPorts
-    this.loadBusRes = new Int32Array(P)
-    this.storeBusRes = new Int32Array(P)
-    for (let p = 0; p < P; p++) {
-      this.loadBusRes[p] = rec.addResource({ kind: 'bus', name: `load bus ${p}`, lane: null, capacity: this.m.loadBusBits })
-      this.storeBusRes[p] = rec.addResource({ kind: 'bus', name: `store bus ${p}`, lane: null, capacity: this.m.storeBusBits })
-    }
+    // One load bus and one store bus, shared by every memory port (timing model section 7). The names keep
+    // their index 0 from when each port had its own bus.
+    this.loadBusRes = rec.addResource({ kind: 'bus', name: 'load bus 0', lane: null, capacity: this.m.loadBusBits })
+    this.storeBusRes = rec.addResource({ kind: 'bus', name: 'store bus 0', lane: null, capacity: this.m.storeBusBits })
     rec.seal()
     this.progress = new Uint8Array(L)
     this.denied = Array.from({ length: L }, () => [])
@@ -109,7 +105,7 @@ export class Ctx {
    * `inst` asked for something in `lane` this cycle and was refused (a port, a
    * queue entry, a word not yet written, a start, a link). An instruction
    * refused several things in one lane-cycle keeps the strongest reason
-   * (`RANK`).
+   * (`STALL_RANK`).
    */
   deny(lane: number, inst: Inst, reason: number): void {
     const c = this.cycle
@@ -128,6 +124,23 @@ export class Ctx {
       this.waitSeq[lane] = seq
       this.waitReason[lane] = reason
     }
+  }
+
+  /** Bits the load (or store) bus can still carry in cycle c. */
+  busLeft(store: boolean, c: number): number {
+    if (this.busCycle !== c) {
+      this.busCycle = c
+      this.loadBusLeft = this.m.loadBusBits
+      this.storeBusLeft = this.m.storeBusBits
+    }
+    return store ? this.storeBusLeft : this.loadBusLeft
+  }
+
+  /** An access moves `bits` on the load (or store) bus in cycle c (after busLeft in the same cycle). */
+  takeBus(store: boolean, c: number, bits: number, seq: number): void {
+    if (store) this.storeBusLeft -= bits
+    else this.loadBusLeft -= bits
+    this.rec.use(store ? this.storeBusRes : this.loadBusRes, c, bits, seq)
   }
 
   busyLane(lane: number): void {
@@ -149,14 +162,8 @@ export class Ctx {
   }
 }
 
-/**
- * Which reason an instruction refused several things in one lane-cycle is
- * given (lower wins): a denied port first (the cycle went to another access),
- * then a missing word, a busy link, the memory unit, the lane's issue, and a
- * full operand queue last (it only says the unit is behind).
- */
-const RANK = new Int8Array(9)
-;(['bank', 'raw', 'ring', 'memory', 'slot', 'barrier', 'queue', 'rename', 'frontend'] as const).forEach((r, k) => (RANK[REASON[r]] = k))
+// A module binding may cost a getter call per use in the per-cycle paths: copied once.
+const RANK: Int8Array = STALL_RANK
 
 /** Bookings reach at most lanes x ringHopLatency (64 x 16) cycles ahead. */
 export const RING_HORIZON = 2048

@@ -4,18 +4,16 @@
  * Subclasses add what their shape needs (units, reductions, ring, memory).
  */
 import type { VectorOp } from '../exec/stream'
-import { LANE_FIELD_COUNT as FIELD_COUNT, NO_CYCLE as NULL_CYCLE } from '../trace/types'
-import { laneElements, wordsFor } from './config'
+import { LANE_FIELD_COUNT as FIELD_COUNT, NO_CYCLE as NULL_CYCLE, REASON } from '../trace/types'
+import { laneElements } from './config'
 import type { Ctx } from './context'
-import { REASON } from './context'
-import { PENDING } from './regfile'
 
-export const F_ELEMENTS = 0
+const F_ELEMENTS = 0
 export const F_BEATS = 1
 export const F_READ_START = 2
 export const F_READ_END = 3
 export const F_EXEC_START = 4
-export const F_EXEC_END = 5
+const F_EXEC_END = 5
 export const F_WRITE_START = 6
 export const F_WRITE_END = 7
 
@@ -42,7 +40,7 @@ export class Operand {
   }
 }
 
-export type Queue = 'arith' | 'mem'
+type Queue = 'arith' | 'mem'
 
 export abstract class Inst {
   readonly seq: number
@@ -356,5 +354,3 @@ export function fillLaneElements(n: Int32Array, vl: number): void {
   for (let l = 0; l < L; l++) n[l] = laneElements(vl, l, L)
 }
 
-export { PENDING, wordsFor }
-export const NO_CYCLE_F = -1

@@ -4,12 +4,14 @@
  * consecutive elements a cycle, strided and indexed ones
  * `gatherElementsPerCycle` (never more than the bus carries); loaded elements
  * arrive `memLatency` cycles after their request and are written like results.
+ * There is one load bus and one store bus for all ports: each cycle the
+ * accesses in flight take what is left of it in program order.
  */
 import type { VectorOp } from '../exec/stream'
+import { NO_CYCLE, REASON } from '../trace/types'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
-import { REASON } from './context'
-import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, F_WRITE_END, F_WRITE_START, Inst, NO_CYCLE_F } from './inst'
+import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst } from './inst'
 
 export abstract class MemInst extends Inst {
   /** Element count moved (vl, or ceil(vl / 8) bytes for vlm/vsm: the stream already says so). */
@@ -38,7 +40,7 @@ export abstract class MemInst extends Inst {
     const bus = mem?.isStore ? ctx.m.storeBusBits : ctx.m.loadBusBits
     const unit = !mem || mem.pattern === 'unit' || mem.pattern === 'mask'
     this.perCycle = unit ? Math.max(1, bus / this.eew) : Math.max(1, Math.min(ctx.m.gatherElementsPerCycle, bus / this.eew))
-    for (let l = 0; l < L; l++) this.n[l] = Math.max(0, Math.ceil((this.count - l) / L))
+    fillLaneElements(this.n, this.count)
     let lo = Infinity
     let hi = -Infinity
     const addr = mem?.addresses
@@ -139,7 +141,9 @@ export class LoadInst extends MemInst {
     const per = 64 / this.eew
     let moved = 0
     const unit = this.unitStride()
-    while (this.next < this.count && moved < this.perCycle) {
+    // The load bus is shared: older accesses took their share of this cycle first.
+    const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(false, c) / this.eew))
+    while (this.next < this.count && moved < most) {
       const i = this.next
       const active = this.isActive(i)
       if (active && !this.indexReady(i)) break
@@ -152,7 +156,7 @@ export class LoadInst extends MemInst {
       if (got % per === 0 || got === (this.n[lane] ?? 0)) this.resultReady(lane, Math.ceil(got / per) - 1, c + ctx.m.memLatency)
       this.next++
     }
-    if (moved > 0) ctx.rec.use(ctx.loadBusRes[this.port] ?? 0, c, moved * this.eew, this.seq)
+    if (moved > 0) ctx.takeBus(false, c, moved * this.eew, this.seq)
     if (this.next >= this.count) {
       this.busDone = true
       // One memory pipeline: the port stays with the load until its last element has arrived.
@@ -196,7 +200,9 @@ export class StoreInst extends MemInst {
     const L = this.L
     let moved = 0
     const unit = this.unitStride()
-    while (this.next < this.count && moved < this.perCycle) {
+    // The store bus is shared: older accesses took their share of this cycle first.
+    const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(true, c) / this.eew))
+    while (this.next < this.count && moved < most) {
       const i = this.next
       const lane = i % L
       const local = Math.floor(i / L)
@@ -216,14 +222,14 @@ export class StoreInst extends MemInst {
         // The store's write phase in a lane is the cycle its last element leaves for memory.
         this.setTime(lane, F_WRITE_START, c)
         this.setTime(lane, F_WRITE_END, c)
-        if (this.time(lane, F_READ_START) === NO_CYCLE_F) {
+        if (this.time(lane, F_READ_START) === NO_CYCLE) {
           this.setTime(lane, F_READ_START, c)
           this.setTime(lane, F_READ_END, c)
         }
       }
       this.next++
     }
-    if (moved > 0) ctx.rec.use(ctx.storeBusRes[this.port] ?? 0, c, moved * this.eew, this.seq)
+    if (moved > 0) ctx.takeBus(true, c, moved * this.eew, this.seq)
     if (this.next >= this.count) {
       this.busDone = true
       this.portUntil = c

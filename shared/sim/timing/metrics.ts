@@ -1,9 +1,34 @@
 /** The run's figures (handbook section 10), computed from the recorder's totals. */
-import type { Metrics } from '../trace/types'
-import { STALL_REASONS, emptyStallCounts } from '../trace/types'
+import type { FpWidth, Metrics } from '../trace/types'
+import { FP_WIDTHS, STALL_REASONS, emptyStallCounts } from '../trace/types'
+import { UNIT_COUNT } from './config'
 import type { Ctx } from './context'
 
-export function computeMetrics(ctx: Ctx, cycles: number, flops: number, laneBusy: Float64Array): Metrics {
+/** Flops of an FMA on one element: the peak counts every FPU element slot as an FMA (timing model section 6). */
+const FMA_FLOPS = 2
+
+/**
+ * The peak of a run (timing model section 10): per width, lanes x 2 x
+ * fpuElementsPerCycle[SEW]; for the run, the flops-weighted harmonic mean of
+ * the widths it used, flops / sum(flops_w / peak_w), so that the fraction of
+ * peak is the cycles the flops need at peak over the cycles taken.
+ */
+export function peakFlops(ctx: Ctx, flopsBySew: Record<FpWidth, number>): { peak: number; bySew: Record<FpWidth, number> } {
+  const m = ctx.m
+  const bySew = { '16': 0, '32': 0, '64': 0 }
+  for (const w of FP_WIDTHS) bySew[w] = ctx.L * FMA_FLOPS * m.fpuElementsPerCycle[w]
+  let flops = 0
+  let idealCycles = 0
+  for (const w of FP_WIDTHS) {
+    flops += flopsBySew[w]
+    idealCycles += flopsBySew[w] / bySew[w]
+  }
+  return { peak: idealCycles > 0 ? flops / idealCycles : bySew['64'], bySew }
+}
+
+export function computeMetrics(ctx: Ctx, cycles: number, flopsBySew: Record<FpWidth, number>, laneBusy: Float64Array): Metrics {
+  const flops = flopsBySew['16'] + flopsBySew['32'] + flopsBySew['64']
+  const { peak, bySew } = peakFlops(ctx, flopsBySew)
   const m = ctx.m
   const L = ctx.L
   const tot = ctx.rec.totals
@@ -15,7 +40,7 @@ export function computeMetrics(ctx: Ctx, cycles: number, flops: number, laneBusy
   }
   const unitSum = (u: number) => {
     let s = 0
-    for (let l = 0; l < L; l++) s += tot[ctx.unitRes[l * 4 + u] ?? 0] ?? 0
+    for (let l = 0; l < L; l++) s += tot[ctx.unitRes[l * UNIT_COUNT + u] ?? 0] ?? 0
     return s / (cyc * L)
   }
   const bankUtilization: number[] = []
@@ -31,13 +56,15 @@ export function computeMetrics(ctx: Ctx, cycles: number, flops: number, laneBusy
     cycles,
     flops,
     flopsPerCycle: cycles > 0 ? flops / cycles : 0,
-    peakFlopsPerCycle: L * 2 * m.fpuElementsPerCycle['64'],
+    peakFlopsPerCycle: peak,
+    flopsBySew: { ...flopsBySew },
+    peakFlopsPerCycleBySew: bySew,
     laneBusy: Array.from(laneBusy, (b) => (cycles > 0 ? b / cycles : 0)),
     unitUtilization: { alu: unitSum(0), mul: unitSum(1), fpu: unitSum(2), div: unitSum(3) },
     bankUtilization,
     busUtilization: {
-      load: sum(ctx.loadBusRes) / (cyc * m.loadBusBits * m.memoryPorts),
-      store: sum(ctx.storeBusRes) / (cyc * m.storeBusBits * m.memoryPorts),
+      load: (ctx.rec.totals[ctx.loadBusRes] ?? 0) / (cyc * m.loadBusBits),
+      store: (ctx.rec.totals[ctx.storeBusRes] ?? 0) / (cyc * m.storeBusBits),
     },
     ringUtilization: links > 0 ? (sum(ctx.linkUpRes) + sum(ctx.linkDownRes)) / (cyc * links * 2) : 0,
     stallCycles,

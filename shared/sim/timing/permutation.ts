@@ -6,9 +6,9 @@
  * per hop. A destination word is written once every packet feeding it arrived.
  */
 import type { VectorOp } from '../exec/stream'
+import { REASON } from '../trace/types'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
-import { REASON } from './context'
 import { F_BEATS, F_EXEC_START, F_READ_START, fillLaneElements, Inst } from './inst'
 
 export class PermutationInst extends Inst {

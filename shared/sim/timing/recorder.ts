@@ -10,6 +10,7 @@
  * sorts, stably, by start cycle.
  */
 import type { ResourceInfo, StallSpans, UsageSpans } from '../trace/types'
+import { STALL_REASONS } from '../trace/types'
 
 type Column = Int32Array | Uint8Array | Uint16Array | Uint32Array
 
@@ -99,7 +100,7 @@ const U_AMOUNT = 3
 const U_RESOURCE = 4
 const U_WRITES = 5
 
-export class Recorder {
+export class SpanRecorder {
   readonly resources: ResourceInfo[] = []
   /** Uses summed over the run, per resource. */
   readonly totals: Float64Array
@@ -124,7 +125,7 @@ export class Recorder {
   private stallWeight = 1
   private useWeight = new Int32Array(0)
   /** Stall cycles by reason index. */
-  readonly stallTotals = new Float64Array(9)
+  readonly stallTotals = new Float64Array(STALL_REASONS.length)
 
   constructor(lanes: number, recordUsage: boolean) {
     this.recordUsage = recordUsage

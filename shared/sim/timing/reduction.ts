@@ -7,9 +7,9 @@
  * running value visits the elements in order, lane to lane over the ring.
  */
 import type { VectorOp } from '../exec/stream'
-import { elementsPerBeat, UNIT_INDEX, unitLatency, wordsFor } from './config'
+import { REASON } from '../trace/types'
+import { elementsPerBeat, UNIT_COUNT, UNIT_INDEX, unitLatency, wordsFor } from './config'
 import type { Ctx } from './context'
-import { REASON } from './context'
 import { F_EXEC_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst } from './inst'
 import { execUnitOf, maskBits } from './units'
 
@@ -86,7 +86,7 @@ export class ReductionInst extends Inst {
   exec(lane: number, c: number): void {
     if (this.started[lane] !== 1) return
     const ctx = this.ctx
-    const uk = lane * 4 + this.u
+    const uk = lane * UNIT_COUNT + this.u
     if ((ctx.unitFree[uk] ?? 0) > c) return
     const j = this.beatDone[lane] ?? 0
     const b = this.beats[lane] ?? 0
@@ -356,7 +356,7 @@ export class OrderedReductionInst extends Inst {
     if (vs2 && (vs2.readCnt[lane] ?? 0) < word + 1) return
     const mask = this.op.masked ? this.srcs[this.srcs.length - 1] : undefined
     if (mask && (mask.readCnt[lane] ?? 0) < Math.floor(local / 64) + 1) return
-    const uk = lane * 4 + this.u
+    const uk = lane * UNIT_COUNT + this.u
     const ctx = this.ctx
     if ((ctx.unitFree[uk] ?? 0) > c) return
     ctx.unitFree[uk] = c + 1
@@ -403,5 +403,18 @@ export class OrderedReductionInst extends Inst {
 
   protected override lanePhasesDone(lane: number): boolean {
     return lane !== 0 || (this.next >= this.op.vl && this.at === 0)
+  }
+
+  /** A lane done with its elements still waits on the ring while the running value has yet to pass through it. */
+  override pending(lane: number): boolean {
+    if (this.laneDone[lane] !== 1) return true
+    if (this.complete >= 0 || this.op.vl === 0) return false
+    // The value moves up the ring one lane a hop: to each remaining element's lane in turn, then home to lane 0.
+    const L = this.L
+    const vl = this.op.vl
+    const toLast = this.next < vl ? ((this.next - this.at) % L + L) % L + (vl - 1 - this.next) : 0
+    const lastLane = (this.at + toLast) % L
+    const hops = toLast + ((L - lastLane) % L)
+    return (lane - this.at + L) % L <= hops
   }
 }

@@ -11,12 +11,12 @@ import type { DynamicStream } from '../exec/stream'
 import type { InstructionTrace, SimulateOptions, TimingError, TimingResult } from '../trace/types'
 import { STALL_REASONS, emptyStallCounts } from '../trace/types'
 import type { TimingState } from './engine'
-import { createTimingState, step } from './engine'
+import { STALL_COUNT, createTimingState, step } from './engine'
 import { opFlops } from './inst'
 import { derive } from './config'
 import { Ctx } from './context'
 import { computeMetrics } from './metrics'
-import { Recorder } from './recorder'
+import { SpanRecorder } from './recorder'
 import { RegFile } from './regfile'
 import { Renamer } from './rename'
 import { replicate } from './symmetry'
@@ -49,13 +49,15 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
   const cycles = s.lastBusy + 1
   const ops = s.source.ops
   const k = s.laneFactor
-  let flops = 0
+  const flopsBySew = { '16': 0, '32': 0, '64': 0 }
   const instructions: InstructionTrace[] = ops.map((op, i) => {
     const done = (s.completeAt[i] ?? -1) >= 0
     const f = done && !op.isConfig ? opFlops(op) : 0
-    flops += f
+    // Only FP work has flops; its SEW is 16, 32 or 64.
+    const width = String(op.sew)
+    if (f > 0 && (width === '16' || width === '32' || width === '64')) flopsBySew[width] += f
     const stalls = emptyStallCounts()
-    STALL_REASONS.forEach((r, j) => (stalls[r] = (s.opStalls[i * 9 + j] ?? 0) * k))
+    STALL_REASONS.forEach((r, j) => (stalls[r] = (s.opStalls[i * STALL_COUNT + j] ?? 0) * k))
     const dispatch = (s.dispatchAt[i] ?? -1) >= 0 ? (s.dispatchAt[i] ?? 0) : null
     const complete = done ? (s.completeAt[i] ?? 0) : null
     return {
@@ -85,7 +87,7 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
   if (k > 1) {
     // One lane was timed for all: spread its results over the machine's lanes (symmetry.ts).
     const d = derive(s.sourceMachine)
-    full = new Ctx(d, new RegFile(d, s.sourceMachine.physRegs), new Renamer(s.sourceMachine.physRegs), new Recorder(d.lanes, false), new Int32Array(0))
+    full = new Ctx(d, new RegFile(d, s.sourceMachine.physRegs), new Renamer(s.sourceMachine.physRegs), new SpanRecorder(d.lanes, false), new Int32Array(0))
     const r = replicate(ctx, full, spans)
     spans = r
     laneTimes = r.laneTimes
@@ -102,7 +104,7 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
       stalls: spans.stalls,
       resources: full.rec.resources,
       usage: spans.usage,
-      metrics: computeMetrics(full, cycles, flops, laneBusy),
+      metrics: computeMetrics(full, cycles, flopsBySew, laneBusy),
     },
     ...(error ? { error } : {}),
   }

@@ -2,7 +2,8 @@
  * Identical lanes, timed once. When every instruction of a run gives every
  * lane the same work (vl a multiple of the lane count, no masks, only
  * element-wise, mask and unit-stride memory instructions whose bus moves a
- * multiple of the lane count each cycle), every lane holds the same elements
+ * multiple of the lane count each cycle, all of one EEW when several memory
+ * ports share the buses), every lane holds the same elements
  * in the same banks and goes through the same history, cycle for cycle: the
  * bank of word w of physical register p, (p + w) mod rfBanks, does not depend
  * on the lane. Such a run is timed on one lane (a machine with lanes = 1, the
@@ -15,6 +16,7 @@ import type { Machine } from '../../schemas/machine'
 import type { DynamicStream, VectorOp } from '../exec/stream'
 import type { StallSpans, UsageSpans } from '../trace/types'
 import { LANE_FIELD_COUNT } from '../trace/types'
+import { UNIT_COUNT } from './config'
 import type { Ctx } from './context'
 
 export interface LanePlan {
@@ -42,6 +44,8 @@ export function lanePlan(stream: DynamicStream, m: Machine): LanePlan | null {
   const L = m.lanes
   if (L <= 1) return null
   for (const op of stream.ops) if (!symmetricOp(op, m, L)) return null
+  // Accesses overlapping on a shared bus split each cycle's bits: whole elements for every lane only if they share an EEW.
+  if (m.memoryPorts > 1 && new Set(stream.ops.filter((op) => !!op.memory || op.unit === 'load' || op.unit === 'store').map((op) => op.eew)).size > 1) return null
   const ops = stream.ops.map((op) => (op.isConfig ? op : { ...op, vl: op.vl / L }))
   const machine: Machine = {
     ...m,
@@ -63,8 +67,8 @@ function resourceMap(one: Ctx, full: Ctx): { base: Int32Array; stride: Int32Arra
   const n = one.rec.resources.length
   const base = new Int32Array(n)
   const stride = new Int32Array(n)
-  const perLane = (full.unitRes[4] ?? 0) - (full.unitRes[0] ?? 0)
-  for (let u = 0; u < 4; u++) {
+  const perLane = (full.unitRes[UNIT_COUNT] ?? 0) - (full.unitRes[0] ?? 0)
+  for (let u = 0; u < UNIT_COUNT; u++) {
     base[one.unitRes[u] ?? 0] = full.unitRes[u] ?? 0
     stride[one.unitRes[u] ?? 0] = perLane
   }
@@ -72,10 +76,8 @@ function resourceMap(one: Ctx, full: Ctx): { base: Int32Array; stride: Int32Arra
     base[one.bankRes[b] ?? 0] = full.bankRes[b] ?? 0
     stride[one.bankRes[b] ?? 0] = perLane
   }
-  for (let p = 0; p < one.loadBusRes.length; p++) {
-    base[one.loadBusRes[p] ?? 0] = full.loadBusRes[p] ?? 0
-    base[one.storeBusRes[p] ?? 0] = full.storeBusRes[p] ?? 0
-  }
+  base[one.loadBusRes] = full.loadBusRes
+  base[one.storeBusRes] = full.storeBusRes
   return { base, stride }
 }
 

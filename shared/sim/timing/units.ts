@@ -5,10 +5,10 @@
  */
 import type { VectorOp } from '../exec/stream'
 import type { ExecUnit } from './config'
-import { elementsPerBeat, UNIT_INDEX, unitLatency, wordsFor } from './config'
+import { elementsPerBeat, UNIT_COUNT, UNIT_INDEX, unitLatency, wordsFor } from './config'
 import type { Ctx } from './context'
 import type { Operand } from './inst'
-import { F_EXEC_START, Inst } from './inst'
+import { F_EXEC_START, F_READ_START, fillLaneElements, Inst } from './inst'
 
 /** Mask-producing instructions write one bit per element. */
 const MASK_DST = /^vm(seq|sne|sltu?|sleu?|sgtu?|feq|fne|flt|fle|fgt|fge|and|nand|andn|or|nor|orn|xor|xnor|sbf|sif|sof)\./
@@ -68,7 +68,7 @@ export class UnitInst extends Inst {
       this.n[0] = op.vl > 0 ? 1 : 0
       return
     }
-    for (let l = 0; l < this.L; l++) this.n[l] = Math.max(0, Math.ceil((op.vl - l) / this.L))
+    fillLaneElements(this.n, op.vl)
   }
 
   exec(lane: number, c: number): void {
@@ -77,7 +77,7 @@ export class UnitInst extends Inst {
     const b = this.beats[lane] ?? 0
     if (j >= b) return
     const ctx = this.ctx
-    const uk = lane * 4 + this.u
+    const uk = lane * UNIT_COUNT + this.u
     const n = this.n[lane] ?? 0
     const upto = Math.min(n, (j + 1) * this.epc)
     let reads = 0
@@ -88,7 +88,7 @@ export class UnitInst extends Inst {
       reads++
       if ((s.readCnt[lane] ?? 0) < Math.ceil((upto * s.bits) / 64)) return
     }
-    if (reads === 0 && this.time(lane, 2) >= c) return // nothing to read: beats start the cycle after the start
+    if (reads === 0 && this.time(lane, F_READ_START) >= c) return // nothing to read: beats start the cycle after the start
     if ((ctx.unitFree[uk] ?? 0) > c) return
     const occupy = this.unit === 'div' ? this.latency : 1
     ctx.unitFree[uk] = c + occupy

@@ -75,6 +75,8 @@ export const traceJsonSchema = z.object({
     flops: z.number().nonnegative(),
     flopsPerCycle: z.number().nonnegative(),
     peakFlopsPerCycle: z.number().positive(),
+    flopsBySew: z.object({ '16': z.number().nonnegative(), '32': z.number().nonnegative(), '64': z.number().nonnegative() }).optional(),
+    peakFlopsPerCycleBySew: z.object({ '16': z.number().positive(), '32': z.number().positive(), '64': z.number().positive() }).optional(),
     laneBusy: z.array(z.number().min(0).max(1)),
     unitUtilization: z.object({ alu: z.number(), mul: z.number(), fpu: z.number(), div: z.number() }),
     bankUtilization: z.array(z.number()),

@@ -10,6 +10,18 @@ import type { Lmul, Sew, UnitClass, VectorShape } from '../isa/types'
 
 export const STALL_REASONS = ['raw', 'bank', 'queue', 'slot', 'barrier', 'rename', 'memory', 'ring', 'frontend'] as const
 export type StallReason = (typeof STALL_REASONS)[number]
+/** A stall reason's index in STALL_REASONS (the engine keeps reasons as these small integers). */
+export const REASON: Record<StallReason, number> = Object.fromEntries(STALL_REASONS.map((r, i) => [r, i])) as Record<StallReason, number>
+
+/**
+ * Which reason an instruction refused several things in one lane-cycle is
+ * given, by reason index (lower wins): a denied port first (the cycle went to
+ * another access), then a missing word, a busy link, the memory unit, the
+ * lane's issue, and a full operand queue last (it only says the unit is
+ * behind).
+ */
+export const STALL_RANK = new Int8Array(STALL_REASONS.length)
+;(['bank', 'raw', 'ring', 'memory', 'slot', 'barrier', 'queue', 'rename', 'frontend'] as const).forEach((r, k) => (STALL_RANK[REASON[r]] = k))
 /** Stall cycles by reason. */
 export type StallCounts = Record<StallReason, number>
 
@@ -105,18 +117,32 @@ export interface UsageSpans {
   writes?: Uint32Array
 }
 
+/** FP element widths, as keys of per-width figures. */
+export const FP_WIDTHS = ['16', '32', '64'] as const
+export type FpWidth = (typeof FP_WIDTHS)[number]
+
 export interface Metrics {
   cycles: number
   flops: number
   flopsPerCycle: number
+  /**
+   * The run's peak: the flops a cycle the machine could do on this run's mix of
+   * element widths, flops / sum over widths of (flops at that width / that
+   * width's peak), so that flopsPerCycle / peakFlopsPerCycle is the ideal cycles
+   * over the real ones. FP64's peak when the run has no FP work.
+   */
   peakFlopsPerCycle: number
+  /** Flops at each FP element width (SEW of the instruction). Absent from traces of model version 1. */
+  flopsBySew?: Record<FpWidth, number>
+  /** Peak flops a cycle at each width: lanes x 2 (an FMA) x fpuElementsPerCycle[SEW]. Absent from traces of model version 1. */
+  peakFlopsPerCycleBySew?: Record<FpWidth, number>
   /** Per lane: fraction of cycles in which the lane read, executed (a unit busy) or wrote. */
   laneBusy: number[]
   /** Per unit: beats issued / (cycles x lanes); the divider counts each cycle it is occupied. */
   unitUtilization: Record<'alu' | 'mul' | 'fpu' | 'div', number>
   /** Per bank index: port uses / (cycles x lanes x ports per bank). */
   bankUtilization: number[]
-  /** Elements moved / (cycles x bus capacity x memory ports). */
+  /** Bits moved / (cycles x bus width): one load bus and one store bus for all memory ports. */
   busUtilization: { load: number; store: number }
   /** Words moved / (cycles x links x 2 directions). */
   ringUtilization: number

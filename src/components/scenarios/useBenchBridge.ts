@@ -5,10 +5,11 @@
  */
 import { parseMachine } from '@shared/schemas/machine'
 import type { ScenarioContent } from '@shared/schemas/scenario'
-import { contentFrom, type BenchSnapshot } from '@/lib/scenarios/content'
+import { contentFrom, type BenchFields, type BenchSnapshot } from '@/lib/scenarios/content'
 import { useBenchStore } from '@/stores/bench'
+import { useExpectationsStore } from '@/stores/expectations'
 
-export const NEW_SCENARIO_FIELDS: Omit<ScenarioContent, 'program' | 'machine' | 'view'> = {
+export const NEW_SCENARIO_FIELDS: Omit<ScenarioContent, BenchFields> = {
   title: '',
   description: '',
   tags: [],
@@ -17,14 +18,15 @@ export const NEW_SCENARIO_FIELDS: Omit<ScenarioContent, 'program' | 'machine' | 
 
 export function useBenchBridge() {
   const bench = useBenchStore()
+  const expectations = useExpectationsStore()
 
   /** The Bench as it is now, or null while its machine form has an invalid value (nothing valid to save). */
   function snapshot(): BenchSnapshot | null {
     if (!bench.machine) return null
-    return { program: bench.source, machine: bench.machine, view: { ...bench.view } }
+    return { program: bench.source, machine: bench.machine, view: { ...bench.view }, expectations: expectations.list }
   }
 
-  function content(base: Omit<ScenarioContent, 'program' | 'machine' | 'view'>): ScenarioContent | null {
+  function content(base: Omit<ScenarioContent, BenchFields>): ScenarioContent | null {
     const s = snapshot()
     return s ? contentFrom(base, s) : null
   }
@@ -38,6 +40,7 @@ export function useBenchBridge() {
     bench.setSource(c.program)
     bench.machineDraft = parseMachine(c.machine)
     bench.setView(c.view)
+    expectations.setList(c.expectations)
     await bench.run()
     // A run keeps a view that fits the trace; set it again in case the run moved a cursor the trace now holds.
     bench.setView(c.view)

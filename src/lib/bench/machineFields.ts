@@ -132,6 +132,11 @@ export function machineFields(): MachineField[] {
   return out
 }
 
+/** The form's label of a dotted machine field ("rfBanks" -> "Banks per lane"); the path itself for an unknown one. */
+export function machineFieldLabel(path: string): string {
+  return machineFields().find((f) => f.path === path)?.label ?? path
+}
+
 /** Reads a dotted field of a machine (or machine input). */
 export function getField(machine: MachineInput | Machine, path: string): unknown {
   let v: unknown = machine

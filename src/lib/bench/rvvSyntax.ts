@@ -4,7 +4,9 @@
  * and names its style), so the editor needs no grammar package. Styles are
  * CodeMirror's standard tag names: comment, labelName, keyword (mnemonics),
  * variableName.special (vector registers), variableName (x/f registers),
- * number, meta (directives), operator (v0.t, vtype words), string.
+ * number, meta (directives), operator (v0.t, vtype words, rounding modes,
+ * %hi/%lo/%pcrel_hi/%pcrel_lo), string. Compiler output adds numeric labels
+ * (`1:`, referred to as `1b`/`1f`), `.L` labels, CSR names and `@plt`.
  *
  * @example
  *   tokenizeLine('loop: vadd.vv v1, v2, v3 # add') // [['loop:', 'labelName'], ['vadd.vv', 'keyword'], ...]
@@ -29,6 +31,8 @@ const X_REGS = /^(x([12]?\d|3[01])|zero|ra|sp|gp|tp|fp|t[0-6]|s([0-9]|1[01])|a[0
 const F_REGS = /^(f([12]?\d|3[01])|ft([0-9]|1[01])|fs([0-9]|1[01])|fa[0-7])\b/
 const V_REGS = /^v([12]?\d|3[01])\b/
 const VTYPE_WORDS = /^(e(8|16|32|64)|mf?[1248]|t[au]|m[au])\b/
+const ROUNDING_MODES = /^(rne|rtz|rdn|rup|rmm|dyn)\b/
+const CSR_NAMES = /^(vl|vtype|vlenb|vstart|vxrm|vxsat|vcsr|fflags|frm|fcsr|cycle|time|instret)\b/
 const NUMBER = /^[+-]?(0[xX][0-9a-fA-F]+|0[bB][01]+|\d+(\.\d*)?([eE][+-]?\d+)?|\.\d+([eE][+-]?\d+)?)\b/
 
 export function startState(): LineState {
@@ -39,7 +43,7 @@ export function token(stream: TokenStream, state: LineState): string | null {
   if (stream.sol()) state.seenOp = false
   if (stream.eatSpace()) return null
   if (stream.match(/^#.*/)) return 'comment'
-  if (!state.seenOp && stream.match(/^[A-Za-z_.$][A-Za-z0-9_.$]*\s*:/)) return 'labelName'
+  if (!state.seenOp && stream.match(/^([A-Za-z_.$][A-Za-z0-9_.$]*|\d+)\s*:/)) return 'labelName'
   if (!state.seenOp && stream.match(/^\.[A-Za-z0-9_]+/)) {
     state.seenOp = true
     return 'meta'
@@ -51,9 +55,12 @@ export function token(stream: TokenStream, state: LineState): string | null {
   if (stream.match(/^v0\.t\b/)) return 'operator'
   if (stream.match(V_REGS)) return 'variableName.special'
   if (stream.match(X_REGS) || stream.match(F_REGS)) return 'variableName'
-  if (stream.match(VTYPE_WORDS)) return 'operator'
+  if (stream.match(VTYPE_WORDS) || stream.match(ROUNDING_MODES)) return 'operator'
+  if (stream.match(CSR_NAMES)) return 'variableName'
+  if (stream.match(/^\d+[bf]\b/)) return 'labelName'
   if (stream.match(NUMBER)) return 'number'
   if (stream.match(/^%(pcrel_)?(hi|lo)\b/)) return 'operator'
+  if (stream.match(/^@plt\b/)) return 'operator'
   if (stream.match(/^"([^"\\]|\\.)*"?/)) return 'string'
   if (stream.match(/^[A-Za-z_.$][A-Za-z0-9_.$]*/)) return 'labelName'
   stream.next()

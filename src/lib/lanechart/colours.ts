@@ -38,6 +38,14 @@ export interface ChartPalette {
   keyColour(key: number): string
 }
 
+/**
+ * The stall grey of each theme: neutral, a step apart from the theme's text
+ * greys so a stall never reads as text. On dark the grey sits low, close to
+ * the card, so that the read phase (dark but saturated, see phaseShade) never
+ * looks like it: every read shade is at least 25 ΔE*ab from it (tested).
+ */
+export const STALL_GREY = { light: '#a3a9b0', dark: '#484c52' } as const
+
 /** Hues per round: the scheme without its grey. */
 export const HUES = 7
 const ROUNDS = 3
@@ -58,8 +66,19 @@ export function instructionColour(slot: number, dark: boolean): string {
   return shifted(hue, Math.floor(slot / HUES) % ROUNDS, dark)
 }
 
-/** The shade of `base` for a phase (0 read, 1 execute, 2 write) or a stall (3: the stall grey). */
+/**
+ * The shade of `base` for a phase (0 read, 1 execute, 2 write) or a stall (3:
+ * the stall grey). On a dark card, fading toward the background also washes
+ * out the colour, and the pale Set2 hues turned into a slate like the stall
+ * grey; there the read phase takes the lightness 60 % of the way toward the
+ * background and 1.4 times the chroma instead: dark, but plainly a colour.
+ */
 export function phaseShade(base: string, kind: number, theme: ChartTheme): string {
+  if (kind === 0 && theme.dark) {
+    const c = lab(base)
+    const bgL = lab(theme.background).l
+    return lab(c.l - 0.6 * (c.l - bgL), c.a * 1.4, c.b * 1.4).formatHex()
+  }
   if (kind === 0) return interpolateLab(base, theme.background)(0.5)
   if (kind === 2) return interpolateLab(base, theme.text)(0.35)
   if (kind === 3) return theme.stall

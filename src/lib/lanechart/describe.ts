@@ -9,6 +9,7 @@
 import { laneTiming, type TimingTrace } from '@shared/sim/trace/types'
 import { PHASES, STALL_KIND, stallReasonName, type ChartLayout, type Phase } from './layout'
 import type { Hit } from './hit'
+import { formatInteger } from '@/utils/format'
 
 export interface PhaseSpan {
   start: number
@@ -62,7 +63,7 @@ function stallSpan(trace: TimingTrace, layout: ChartLayout, bar: number): { reas
   return { reason: stallReasonName(trace.stalls.reason[k]!), start, end: start + length - 1 }
 }
 
-const plural = (n: number, word: string) => `${n.toLocaleString('en-US')} ${word}${n === 1 ? '' : 's'}`
+const plural = (n: number, word: string) => `${formatInteger(n)} ${word}${n === 1 ? '' : 's'}`
 
 export function chartLabel(trace: Pick<TimingTrace, 'laneCount' | 'cycles' | 'instructions'>): string {
   return `Lane chart: ${plural(trace.laneCount, 'lane')}, ${plural(trace.cycles, 'cycle')}, ${plural(trace.instructions.length, 'instruction')}`

@@ -1,10 +1,11 @@
 /**
  * What to draw for one view: the bars inside the cycle window, in pixels,
- * with level of detail. Within a band, consecutive bars narrower than
- * `minWidth` pixels that lie within `minWidth` of each other are merged into
- * one rectangle, so that a zoomed-out run of thousands of bars draws at most
- * about one rectangle per pixel column and band. A merged rectangle keeps the
- * colour of its bars when they all share one, else it takes the MIXED slot.
+ * with level of detail. Within a band, bars narrower than `minWidth` pixels
+ * are summed per pixel column, which takes the colour of the instruction and
+ * phase covering most of it; stalls become a density (a column's height is
+ * its stalled share). So a zoomed-out run of thousands of bars draws at most
+ * one rectangle per pixel column and band, in colour at every zoom.
+ * MIXED_SLOT (the muted colour) is kept for callers that draw a mixture.
  *
  * Colour keys: `key = slot * 4 + kind`, where slot 0 is MIXED and slot s > 0
  * is colour slot s - 1 of the layout, kind 0..2 a phase and 3 a stall.
@@ -88,26 +89,66 @@ class Builder {
   }
 }
 
-/** `strips`: the bands hold stall strips, drawn along the bottom of the track. */
-function addBands(layout: ChartLayout, bands: IndexLists, scale: CycleScale, minWidth: number, out: Builder, strips = false) {
+/**
+ * One band's bars in pixels. A bar at least `minWidth` wide is drawn as it
+ * is. Narrower bars are summed per pixel column (columns `minWidth` wide):
+ * the column takes the colour key that covers most of it (the dominant
+ * instruction and phase), so a zoomed-out long run keeps its instruction
+ * colours instead of turning into one grey smear. Stall columns (`density`)
+ * are drawn as a density: their height is the stalled share of the column,
+ * from the bottom of the track, not a full-height grey. Neighbouring columns
+ * of one key and height are joined into one rectangle.
+ */
+function addBands(layout: ChartLayout, bands: IndexLists, scale: CycleScale, minWidth: number, out: Builder, mode: 'phase' | 'stall' | 'strip') {
   const { bars, groups } = layout
   const { start: w0, end: w1 } = scale.window
-  const h = strips ? stripHeight(layout.trackHeight) : layout.trackHeight
+  const fullH = mode === 'strip' ? stripHeight(layout.trackHeight) : layout.trackHeight
+  const density = mode !== 'phase'
+  const cover = new Map<number, number>()
   for (let band = 0; band < bandCount(layout); band++) {
     const from = bands.offsets[band]!
     const to = bands.offsets[band + 1]!
     if (from === to) continue
-    const y = bandY(layout, band) + layout.trackHeight - h
-    // Run being merged: pixel extent, its key (or -1 once mixed), its bar when it has only one.
-    let runX0 = 0
-    let runX1 = -Infinity
-    let runKey = -2
-    let runBars = 0
-    let runBar = -1
-    const flush = () => {
-      if (runBars === 0) return
-      out.push(runX0, y, Math.max(minWidth, runX1 - runX0), h, runKey, runBars === 1 ? runBar : -1)
-      runBars = 0
+    const bottom = bandY(layout, band) + layout.trackHeight
+    // The rectangle waiting to be joined with the next column, if it has the same key and height.
+    let px = 0
+    let pw = 0
+    let ph = 0
+    let pkey = -1
+    let pbar = -1
+    const flushPending = () => {
+      if (pkey >= 0) out.push(px, bottom - ph, pw, ph, pkey, pbar)
+      pkey = -1
+    }
+    const emit = (x: number, w: number, h: number, key: number, bar: number) => {
+      if (pkey === key && pbar < 0 && bar < 0 && ph === h && Math.abs(px + pw - x) < 1e-6) {
+        pw += w
+        return
+      }
+      flushPending()
+      px = x
+      pw = w
+      ph = h
+      pkey = key
+      pbar = bar
+    }
+    // The pixel column being summed.
+    let col = Number.NaN
+    let covered = 0
+    const closeColumn = () => {
+      if (covered <= 0) return
+      let best = -1
+      let bestCover = -1
+      for (const [k, c] of cover) {
+        if (c > bestCover) {
+          best = k
+          bestCover = c
+        }
+      }
+      const h = density ? Math.max(1, Math.round(fullH * Math.min(1, covered / minWidth))) : fullH
+      emit(col * minWidth, minWidth, h, best, -1)
+      cover.clear()
+      covered = 0
     }
     for (let j = firstEndingAfter(layout, bands.items, from, to, w0); j < to; j++) {
       const b = bands.items[j]!
@@ -115,28 +156,29 @@ function addBands(layout: ChartLayout, bands: IndexLists, scale: CycleScale, min
       if (s >= w1) break
       const x0 = scale.toPx(s)
       const x1 = scale.toPx(bars.end[b]!)
-      const kind = bars.kind[b]!
       const slot = layout.colourOf[groups.instruction[bars.group[b]!]!]! + 1
-      const key = colourKey(slot, kind)
+      const key = colourKey(slot, bars.kind[b]!)
       if (x1 - x0 >= minWidth) {
-        flush()
-        out.push(x0, y, x1 - x0, h, key, b)
+        closeColumn()
+        emit(x0, x1 - x0, fullH, key, b)
         continue
       }
-      if (runBars > 0 && x0 - runX1 < minWidth) {
-        runX1 = Math.max(runX1, x1)
-        if (runKey !== key) runKey = colourKey(MIXED_SLOT, keyKind(runKey) === kind ? kind : 1)
-        runBars++
-      } else {
-        flush()
-        runX0 = x0
-        runX1 = x1
-        runKey = key
-        runBar = b
-        runBars = 1
+      // A sub-pixel bar touches one column, or two when it crosses an edge.
+      let a = x0
+      while (a < x1) {
+        const c = Math.floor(a / minWidth)
+        if (c !== col) {
+          closeColumn()
+          col = c
+        }
+        const next = Math.min(x1, (c + 1) * minWidth)
+        cover.set(key, (cover.get(key) ?? 0) + (next - a))
+        covered += next - a
+        a = next
       }
     }
-    flush()
+    closeColumn()
+    flushPending()
   }
 }
 
@@ -145,10 +187,10 @@ export function drawList(layout: ChartLayout, scale: CycleScale, options: DrawLi
   const minWidth = options.minWidth ?? 1
   if (!(minWidth > 0)) throw new RangeError(`minWidth must be positive, got ${minWidth}`)
   const out = new Builder()
-  if (options.only !== 'stalls') addBands(layout, layout.phaseBands, scale, minWidth, out)
+  if (options.only !== 'stalls') addBands(layout, layout.phaseBands, scale, minWidth, out, 'phase')
   if (options.only !== 'phases') {
-    addBands(layout, layout.stallBands, scale, minWidth, out)
-    addBands(layout, layout.stripBands, scale, minWidth, out, true)
+    addBands(layout, layout.stallBands, scale, minWidth, out, 'stall')
+    addBands(layout, layout.stripBands, scale, minWidth, out, 'strip')
   }
   return out.done()
 }

@@ -9,6 +9,7 @@
  */
 import { ticks } from 'd3'
 import type { CycleScale } from './window'
+import { formatInteger } from '@/utils/format'
 
 export interface Tick {
   cycle: number
@@ -23,7 +24,7 @@ export interface Tick {
 const halfLabel = (label: string) => label.length * 3.5
 
 export function formatCycle(cycle: number): string {
-  return Math.round(cycle).toLocaleString('en-US')
+  return formatInteger(cycle)
 }
 
 export function cycleTicks(scale: CycleScale, spacing = 80): Tick[] {

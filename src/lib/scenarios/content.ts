@@ -6,6 +6,7 @@
  * @example
  *   sameContent(a, { ...a, view: { cursor: 3, window: null, selected: null } }) // false
  */
+import type { Expectation } from '@shared/schemas/expectation'
 import type { Machine } from '@shared/schemas/machine'
 import type { ScenarioContent, ScenarioView } from '@shared/schemas/scenario'
 
@@ -13,11 +14,15 @@ export interface BenchSnapshot {
   program: string
   machine: Machine
   view: ScenarioView
+  expectations: Expectation[]
 }
 
-/** Content to save: the Bench's program, machine and view over the scenario's other fields. */
-export function contentFrom(base: Omit<ScenarioContent, 'program' | 'machine' | 'view'>, bench: BenchSnapshot): ScenarioContent {
-  return { ...base, program: bench.program, machine: structuredClone(bench.machine), view: { ...bench.view } }
+/** The content fields the Bench edits itself; the rest come from the scenario. */
+export type BenchFields = 'program' | 'machine' | 'view' | 'expectations'
+
+/** Content to save: the Bench's program, machine, view and expectations over the scenario's other fields. */
+export function contentFrom(base: Omit<ScenarioContent, BenchFields>, bench: BenchSnapshot): ScenarioContent {
+  return { ...base, program: bench.program, machine: structuredClone(bench.machine), view: { ...bench.view }, expectations: structuredClone(bench.expectations) }
 }
 
 /** Stable JSON: object keys sorted, so that two equal contents give equal text whatever the key order. */

@@ -10,6 +10,7 @@
  */
 import { STALL_REASONS } from '@shared/sim/trace/types'
 import type { LineChange, RunSummary } from '@shared/schemas/scenario'
+import { machineFieldLabel } from '@/lib/bench/machineFields'
 
 export type DiffRow =
   | { kind: 'equal' | 'insert' | 'delete'; oldNo: number | null; newNo: number | null; text: string }
@@ -44,6 +45,20 @@ export function programRows(changes: LineChange[], options: ProgramRowsOptions =
     rows.push(...lineRows.slice(0, head), { kind: 'fold', count: lineRows.length - head - tail }, ...lineRows.slice(lineRows.length - tail))
   })
   return rows
+}
+
+/** The labels the Save as form and the Bench give a scenario's own fields. */
+const CONTENT_LABELS: Record<string, string> = {
+  title: 'Title',
+  description: 'Description',
+  tags: 'Tags',
+  initialData: 'Named data',
+  view: 'View (cursor, window, selection)',
+}
+
+/** A changed field as the forms name it: machine fields by the machine form's label, the rest by the scenario form's. */
+export function diffFieldLabel(section: 'machine' | 'fields', field: string): string {
+  return section === 'machine' ? machineFieldLabel(field) : (CONTENT_LABELS[field] ?? field)
 }
 
 /** A field value as short text: numbers and strings as they are, the rest as compact JSON. */

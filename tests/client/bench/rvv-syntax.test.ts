@@ -14,6 +14,12 @@ describe('the RISC-V V tokenizer', () => {
     ['x:  .float 1.0, -2.5e3', [['x:', 'labelName'], ['.float', 'meta'], ['1.0', 'number'], [',', null], ['-2.5e3', 'number']]],
     ['    la a1, x', [['la', 'keyword'], ['a1', 'variableName'], [',', null], ['x', 'labelName']]],
     ['    flw fa0, 0(t2)', [['flw', 'keyword'], ['fa0', 'variableName'], [',', null], ['0', 'number'], ['(', null], ['t2', 'variableName'], [')', null]]],
+    // Compiler output (clang-16 -S): numeric labels and references, %hi/%lo, rounding modes, CSR names.
+    ['1:  bnez a0, 1b', [['1:', 'labelName'], ['bnez', 'keyword'], ['a0', 'variableName'], [',', null], ['1b', 'labelName']]],
+    ['.LBB0_3:', [['.LBB0_3:', 'labelName']]],
+    ['\tfld\tft0, %lo(.LCPI0_0)(a0)', [['fld', 'keyword'], ['ft0', 'variableName'], [',', null], ['%lo', 'operator'], ['(', null], ['.LCPI0_0', 'labelName'], [')', null], ['(', null], ['a0', 'variableName'], [')', null]]],
+    ['\tfadd.d\tfa0, fa1, fa2, rtz', [['fadd.d', 'keyword'], ['fa0', 'variableName'], [',', null], ['fa1', 'variableName'], [',', null], ['fa2', 'variableName'], [',', null], ['rtz', 'operator']]],
+    ['\tcsrr\tt1, vlenb', [['csrr', 'keyword'], ['t1', 'variableName'], [',', null], ['vlenb', 'variableName']]],
   ])('styles %j', (line, expected) => {
     expect(tokenizeLine(line)).toEqual(expected)
   })

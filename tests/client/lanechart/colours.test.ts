@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { lab } from 'd3'
-import { chartPalette, HUES, instructionColour, phaseShade, type ChartTheme } from '@/lib/lanechart/colours'
+import { chartPalette, HUES, instructionColour, phaseShade, STALL_GREY, type ChartTheme } from '@/lib/lanechart/colours'
 import { colourKey, MIXED_SLOT } from '@/lib/lanechart/lod'
 
 const light: ChartTheme = { dark: false, background: '#ffffff', text: '#1f2225', muted: '#767c82', grid: '#e0e0e6', accent: '#2c63a8', stall: '#9aa0a6' }
@@ -46,6 +46,26 @@ describe('chart colours', () => {
 
   it('paints bars merged from several instructions in the muted theme colour', () => {
     expect(chartPalette(light).keyColour(colourKey(MIXED_SLOT, 1))).toBe(lab(light.muted).formatHex())
+  })
+
+  // CIE 1976 ΔE*ab, the Euclidean distance in CIELAB; about 2.3 is a just noticeable difference
+  // (Sharma, Digital Color Imaging Handbook, from memory). 25 is our bar for "plainly different".
+  const deltaE = (a: string, b: string) => {
+    const x = lab(a)
+    const y = lab(b)
+    return Math.hypot(x.l - y.l, x.a - y.a, x.b - y.b)
+  }
+
+  it('dark theme: every read phase stays plainly apart from the stall grey and from its execute colour (issue 10)', () => {
+    // The app's dark card (Naive UI's dark neutralCard) and stall grey.
+    const appDark: ChartTheme = { ...dark, background: 'rgb(24, 24, 28)', stall: STALL_GREY.dark }
+    for (let slot = 0; slot < 21; slot++) {
+      const base = instructionColour(slot, true)
+      const read = phaseShade(base, 0, appDark)
+      expect(deltaE(read, STALL_GREY.dark), `slot ${slot} read vs stall`).toBeGreaterThanOrEqual(25)
+      expect(deltaE(read, phaseShade(base, 1, appDark)), `slot ${slot} read vs execute`).toBeGreaterThanOrEqual(25)
+      expect(deltaE(phaseShade(base, 2, appDark), STALL_GREY.dark), `slot ${slot} write vs stall`).toBeGreaterThanOrEqual(25)
+    }
   })
 
   it('refuses a negative colour slot', () => {

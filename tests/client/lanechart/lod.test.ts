@@ -32,16 +32,44 @@ describe('level of detail', () => {
     expect(drawList(layout, cycleScale(w, 100), { only: 'phases' }).count).toBe(count)
   })
 
-  it('merges sub-pixel bars so that a band draws about one rectangle per pixel at most', () => {
+  it('sums sub-pixel bars per pixel column: at most one rectangle per column and band, never the mixed grey', () => {
     const layout = buildLayout(stream(10_000, 7))
     const list = drawList(layout, cycleScale({ start: 0, end: 10_000 }, 500))
     expect(list.count).toBeLessThanOrEqual(bandCount(layout) * 500)
-    // Back-to-back bars with no gap merge into one run covering the band.
+    expect(Array.from(list.key, keySlot).every((slot) => slot !== MIXED_SLOT)).toBe(true)
+    expect(Array.from(list.bar).every((b) => b === -1)).toBe(true)
+    // The columns tile the plot with no gap: 500 pixels in all.
+    expect(Array.from(list.w).reduce((a, w) => a + w, 0)).toBeCloseTo(500, 6)
+  })
+
+  it('colours each zoomed-out pixel column by the instruction covering most of it (issue 10: a long run was a grey smear)', () => {
+    // Blocks of 10 cycles: static instruction A for 7 one-cycle bars, then B for 3. At 10 cycles a pixel
+    // every column is 70 % A, so the whole band is one rectangle in A's read colour.
+    const n = 1000
+    const trace = buildTrace({
+      lanes: 1, cycles: n,
+      instructions: Array.from({ length: n }, (_, i) => ({ staticIndex: i % 10 < 7 ? 0 : 1, lanes: [[1, 1, i, i, null, null, null, null]] })),
+    })
+    const layout = buildLayout(trace)
+    const list = drawList(layout, cycleScale({ start: 0, end: n }, 100), { only: 'phases' })
     expect(list.count).toBe(1)
-    expect(list.x[0]).toBe(0)
-    expect(list.w[0]).toBeCloseTo(500, 6)
-    expect(keySlot(list.key[0]!)).toBe(MIXED_SLOT)
-    expect(list.bar[0]).toBe(-1)
+    expect(list.key[0]).toBe(colourKey(layout.colourOf[0]! + 1, 0))
+    expect(list.w[0]).toBeCloseTo(100, 6)
+  })
+
+  it('draws zoomed-out stalls as a density: a column\'s height is its stalled share', () => {
+    // One lane stalled 2 cycles in every 10, with no phase under it: at 10 cycles a pixel each column is 20 % stall.
+    const n = 1000
+    const stalls = Array.from({ length: n / 10 }, (_, k) => [0, k * 10 + 8, 2, 'raw', 0] as [number, number, number, 'raw', number])
+    const trace = buildTrace({ lanes: 1, cycles: n, instructions: [{ lanes: [[1, 1, n - 1, n - 1, null, null, null, null]] }], stalls })
+    const layout = buildLayout(trace, { trackHeight: 20 })
+    const list = drawList(layout, cycleScale({ start: 0, end: n - 10 }, 99), { only: 'stalls' })
+    expect(list.count).toBeGreaterThan(0)
+    for (let r = 0; r < list.count; r++) {
+      expect(keyKind(list.key[r]!)).toBe(3)
+      expect(list.h[r]).toBe(4) // 20 px × 0.2
+      expect(list.y[r]! + list.h[r]!).toBe(20) // from the bottom of the track
+    }
   })
 
   it('keeps the colour of merged bars of one static instruction', () => {

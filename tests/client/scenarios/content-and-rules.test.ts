@@ -8,8 +8,10 @@ import { DEFAULT_LIST_PARAMS } from '@/stores/scenarios'
 describe('scenario content from the Bench', () => {
   const base = scenarioContentSchema.parse({ title: 'saxpy tail', tags: ['tail'], program: 'old' })
 
-  it('takes program, machine and view from the Bench and keeps the other fields', () => {
-    const c = contentFrom(base, { program: 'new', machine: base.machine, view: { cursor: 7, window: null, selected: 2 } })
+  it('takes program, machine, view and expectations from the Bench and keeps the other fields', () => {
+    const expectations = [{ kind: 'metric' as const, metric: 'cycles' as const, op: '<=' as const, value: 120 }]
+    const c = contentFrom(base, { program: 'new', machine: base.machine, view: { cursor: 7, window: null, selected: 2 }, expectations })
+    expect(c.expectations).toEqual(expectations)
     expect(c.title).toBe('saxpy tail')
     expect(c.tags).toEqual(['tail'])
     expect(c.program).toBe('new')

@@ -85,3 +85,13 @@ describe('the readable version diff', () => {
     expect(valueText(v)).toBe(s)
   })
 })
+
+describe('field labels in the version diff (issue 10)', () => {
+  it('names machine fields by the machine form label and content fields by the scenario form label', async () => {
+    const { diffFieldLabel } = await import('@/lib/scenarios/versionDiff')
+    expect(diffFieldLabel('machine', 'rfBanks')).toBe('Banks per lane')
+    expect(diffFieldLabel('machine', 'fpuElementsPerCycle.32')).toBe('FPU elements per beat, SEW 32')
+    expect(diffFieldLabel('fields', 'initialData')).toBe('Named data')
+    expect(diffFieldLabel('fields', 'title')).toBe('Title')
+  })
+})

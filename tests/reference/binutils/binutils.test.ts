@@ -40,12 +40,12 @@ if (!present) {
 /**
  * objdump text normalised for comparison: whitespace squeezed, its `# ...`
  * comments and `<symbol+offset>` annotations dropped, and binutils 2.40's
- * immediate-form aliases (add/and/or/sll/srl/sra with an immediate) named as
- * the ISA names them (addi/andi/ori/slli/srli/srai), which is what Chimeline prints.
+ * immediate-form aliases (add/and/or/xor/sll/srl/sra and their *w forms with an
+ * immediate) named as the ISA names them (addi/andi/ori/xori/slli/srli/srai, addiw/slliw/...), which is what Chimeline prints.
  */
 function normalise(text: string): string {
   const t = text.replace(/#.*$/, '').replace(/\s*<[^>]*>/, '').replace(/\s+/g, ' ').trim()
-  return t.replace(/^(add|and|or|sll|srl|sra) ([a-z0-9]+),([a-z0-9]+),(-?(0x[0-9a-f]+|[0-9]+))$/, (_m, op: string, rd: string, rs: string, imm: string) => `${op}i ${rd},${rs},${imm}`)
+  return t.replace(/^(add|and|or|xor|sll|srl|sra)(w?) ([a-z0-9]+),([a-z0-9]+),(-?(0x[0-9a-f]+|[0-9]+))$/, (_m, op: string, w: string, rd: string, rs: string, imm: string) => `${op}i${w} ${rd},${rs},${imm}`)
 }
 
 describe.skipIf(!present)('GNU binutils riscv64-linux-gnu-as -march=rv64gcv and objdump -d on tests/reference/binutils/corpus.s', () => {
@@ -110,6 +110,8 @@ describe('objdump text normalisation used by the binutils check', () => {
     ['add\ta0,a1,a2', 'add a0,a1,a2'],
     ['jr\tt0 # fffffff0 <fwd+0x10>', 'jr t0'],
     ['bnez\ta1,c78 <fwd>', 'bnez a1,c78'],
+    ['xor\ta0,a1,-1', 'xori a0,a1,-1'],
+    ['sraw\tt0,sp,0x1f', 'sraiw t0,sp,0x1f'],
   ])('%j becomes %j', (a, b) => {
     expect(normalise(a)).toBe(b)
   })

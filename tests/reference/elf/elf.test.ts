@@ -58,7 +58,7 @@ function nmAddresses(file: string): Map<string, number> {
  */
 function normalise(text: string): string {
   const t = text.replace(/#.*$/, '').replace(/\s*<[^>]*>/, '').replace(/\s+/g, ' ').trim()
-  return t.replace(/^(add|and|or|sll|srl|sra) ([a-z0-9]+),([a-z0-9]+),(-?(0x[0-9a-f]+|[0-9]+))$/, (_m, op: string, rd: string, rs: string, imm: string) => `${op}i ${rd},${rs},${imm}`)
+  return t.replace(/^(add|and|or|xor|sll|srl|sra)(w?) ([a-z0-9]+),([a-z0-9]+),(-?(0x[0-9a-f]+|[0-9]+))$/, (_m, op: string, w: string, rd: string, rs: string, imm: string) => `${op}i${w} ${rd},${rs},${imm}`)
 }
 
 /** objdump -d rows of one function: address, word and normalised text. */

@@ -94,7 +94,7 @@ describe('limits', () => {
   })
 
   it('stops a run whose recorded stream outgrows the memory limit', () => {
-    const e = fails(`.data\nbuf: .zero 64\n.text\n  vsetvli t0, zero, e8, m1\n  la a0, buf\nloop:\n  vle8.v v1, (a0)\n  j loop`, { memoryLimit: 100_000 })
+    const e = fails(`.data\nbuf: .zero 64\n.text\n  vsetvli t0, zero, e8, m1\n  la a0, buf\nloop:\n  vle8.v v1, (a0)\n  j loop`, { memoryLimit: 100_000, stackBytes: 0 })
     expect(e.code).toBe('memory-limit')
     expect(e.message).toMatch(/dynamic instruction stream/)
   })

@@ -27,8 +27,8 @@ describe('decodeWord', () => {
 
   it.each([
     [0x0001, 'compressed', 'compressed'],
-    [0xc6432157, 'unsupported', 'vector instruction Chimeline does not support yet'], // vwadd.vv v2,v4,v6
-    [0x03056087, 'unsupported', 'does not support yet'], // vle32ff.v v1,(a0)
+    [0x6a001057, 'reserved', 'no RISC-V V 1.0 instruction (a reserved encoding)'], // OPFVV funct6 011010: reserved (V 1.0 section 19)
+    [0x02106007, 'reserved', 'reserved encoding'], // unit-stride load with lumop 00001: reserved (V 1.0 section 7.4)
     [0x00051507, 'unknown', 'not an instruction Chimeline supports'], // flh fa0,0(a0): scalar, not vector
     [0xffffffff, 'unknown', '0xffffffff'],
   ])('rejects %s with a structured %s error', (word, code, message) => {

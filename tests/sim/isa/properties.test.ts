@@ -16,6 +16,10 @@ function operandsFor(syntax: readonly OperandKind[], vector: boolean): fc.Arbitr
     const range = IMM_RANGE[k]
     if (k === 'vm') parts.vm = fc.boolean()
     else if (k === 'v0') parts.vm = fc.constant(false)
+    // rm: the five rounding modes and dyn (5 and 6 are reserved); fence sets are 4 bits; any 12-bit CSR number.
+    else if (k === 'rm') parts.rm = fc.constantFrom(0, 1, 2, 3, 4, 7)
+    else if (k === 'pred' || k === 'succ') parts[k] = fc.integer({ min: 0, max: 15 })
+    else if (k === 'csr') parts.csr = fc.integer({ min: 0, max: 0xfff })
     else if (k === 'branch' || k === 'jump') parts.imm = fc.integer({ min: (range?.[0] ?? 0) / 2, max: (range?.[1] ?? 0) / 2 }).map((v) => v * 2)
     else if (range) parts[f.key] = fc.integer({ min: range[0], max: range[1] })
     else parts[f.key] = fc.integer({ min: 0, max: 31 })

@@ -65,7 +65,9 @@ export interface RunDigest {
 
 export function digestRun(result: TimingResult): RunDigest {
   const t = result.trace
-  const { stallCycles, ...timingMetrics } = t.metrics
+  // The per-width flops and peaks follow from the instructions' flops and SEW and from the machine, all digested
+  // here; leaving them out kept the digests of runs without FP32 or FP16 work when they were added.
+  const { stallCycles, flopsBySew: _f, peakFlopsPerCycleBySew: _p, ...timingMetrics } = t.metrics
   const h = createHash('sha256')
   h.update(JSON.stringify({ error: result.error ?? null, cycles: t.cycles, instructions: t.instructions.map(({ stalls: _, ...rest }) => rest), resources: t.resources, metrics: timingMetrics }))
   h.update(new Uint8Array(t.laneTimes.buffer, t.laneTimes.byteOffset, t.laneTimes.byteLength))

@@ -91,7 +91,8 @@ describe('golden corpus: every cycle the engine computed before its speed work',
       const machine = parseMachine(input)
       check(`example ${file} on ${name}`, streamOf(text, machine), machine)
     }
-  })
+    // Every preset times the long stream in full: minutes on a loaded 2-core machine, seconds on a quiet one.
+  }, 300_000)
 
   it('times a 1,600-instruction strip-mined run, with and without usage spans, and runs cut short by each limit, as recorded', () => {
     const machine = parseMachine({})

@@ -5,7 +5,7 @@
 import { computed, type ComputedRef } from 'vue'
 import { useThemeVars } from 'naive-ui'
 import { useThemeStore } from '@/stores/theme'
-import type { ChartTheme } from '@/lib/lanechart/colours'
+import { STALL_GREY, type ChartTheme } from '@/lib/lanechart/colours'
 
 export function useChartTheme(): ComputedRef<ChartTheme> {
   const vars = useThemeVars()
@@ -19,8 +19,7 @@ export function useChartTheme(): ComputedRef<ChartTheme> {
       muted: v.textColor3,
       grid: v.dividerColor,
       accent: v.primaryColor,
-      // Our own neutral greys, a step apart from the theme's text greys so that a stall never reads as text.
-      stall: store.isDark ? '#70767d' : '#a3a9b0',
+      stall: store.isDark ? STALL_GREY.dark : STALL_GREY.light,
     }
   })
 }

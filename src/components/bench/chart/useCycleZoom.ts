@@ -8,6 +8,7 @@
  */
 import { onBeforeUnmount, onMounted, type Ref } from 'vue'
 import { select, zoom, zoomIdentity, type D3ZoomEvent, type ZoomBehavior } from 'd3'
+import { chartTakesGesture } from '@/lib/lanechart/gestures'
 import { DEFAULT_MIN_SPAN, transformToWindow, windowToTransform, type CycleWindow } from '@/lib/lanechart/window'
 
 export interface CycleZoomOptions {
@@ -16,6 +17,8 @@ export interface CycleZoomOptions {
   height: () => number
   view: () => CycleWindow
   onChange: (w: CycleWindow) => void
+  /** True once the user has clicked the chart (it has the focus): the wheel then zooms without Ctrl or Cmd. */
+  engaged: () => boolean
 }
 
 export function useCycleZoom(target: Ref<HTMLElement | null>, options: CycleZoomOptions) {
@@ -43,6 +46,7 @@ export function useCycleZoom(target: Ref<HTMLElement | null>, options: CycleZoom
     behaviour = zoom<HTMLElement, unknown>()
       // Keep d3-zoom from interpreting a click as a tiny pan.
       .clickDistance(3)
+      .filter((event: WheelEvent | MouseEvent) => chartTakesGesture(event, options.engaged()))
       .on('zoom', (event: D3ZoomEvent<HTMLElement, unknown>) => {
         if (!event.sourceEvent) return
         options.onChange(transformToWindow(event.transform, options.cycles(), Math.max(1, options.width())))

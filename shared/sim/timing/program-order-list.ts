@@ -4,7 +4,7 @@
  * instructions keep only what is still looked at, so that a long run does not
  * hold every instruction it ever timed.
  */
-export class Window<T> {
+export class ProgramOrderList<T> {
   private items: (T | undefined)[] = []
   /** Absolute index of items[0]. */
   private base = 0

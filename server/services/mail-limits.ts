@@ -1,0 +1,69 @@
+/**
+ * Limits on what an account can make the server e-mail (share links,
+ * invitations): recipients per message, and messages per hour and per day,
+ * stricter for accounts younger than `newAccountDays`. A self-signed-up
+ * account once sent 341 messages in 38 s with text of its choosing; now a
+ * request over a limit sends nothing and answers 429 with Retry-After (or 400
+ * naming `to` for too many recipients, which waiting does not fix).
+ *
+ * Each allowed request is recorded (mail_sends) under a per-account advisory
+ * lock, so concurrent requests cannot overdraw the budget together.
+ */
+import { Op } from 'sequelize'
+import type { AppContext } from '../context'
+import { ApiError, errors } from '../http/errors'
+import { MailSend, type User } from '../models'
+
+export interface MailBudget {
+  perHour: number
+  perDay: number
+  recipientsPerMessage: number
+}
+
+export interface MailLimits {
+  enabled: boolean
+  regular: MailBudget
+  /** For accounts younger than newAccountDays. */
+  newAccount: MailBudget
+  newAccountDays: number
+}
+
+const HOUR_MS = 3_600_000
+const DAY_MS = 24 * HOUR_MS
+
+/**
+ * Records that `user` sends `recipients` messages of this kind, or throws
+ * without recording. Call it before sending anything.
+ */
+export async function reserveMail(ctx: AppContext, user: User, kind: MailSend['kind'], recipients: number): Promise<void> {
+  const limits = ctx.config.mailLimits
+  if (!limits.enabled) return
+  const young = Date.now() - user.createdAt.getTime() < limits.newAccountDays * DAY_MS
+  const budget = young ? limits.newAccount : limits.regular
+  const who = young ? `an account younger than ${limits.newAccountDays} day(s)` : 'an account'
+  if (recipients > budget.recipientsPerMessage) {
+    throw errors.validation({ to: `At most ${budget.recipientsPerMessage} address(es) per message for ${who}` }, 'Too many recipients for one message')
+  }
+  await ctx.sequelize.transaction(async (transaction) => {
+    await ctx.sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `mail:${user.id}` }, transaction })
+    const now = Date.now()
+    for (const [windowMs, limit, name] of [[HOUR_MS, budget.perHour, 'hour'], [DAY_MS, budget.perDay, 'day']] as const) {
+      const since = new Date(now - windowMs)
+      const rows = await MailSend.findAll({ where: { userId: user.id, createdAt: { [Op.gt]: since } }, order: [['createdAt', 'ASC']], attributes: ['recipients', 'createdAt'], transaction })
+      let sent = rows.reduce((n, r) => n + r.recipients, 0)
+      if (sent + recipients <= limit) continue
+      // Wait until enough of the window's sends have aged out to make room.
+      let retryAt = now + windowMs
+      for (const r of rows) {
+        sent -= r.recipients
+        if (sent + recipients <= limit) {
+          retryAt = r.createdAt.getTime() + windowMs
+          break
+        }
+      }
+      const seconds = Math.max(1, Math.ceil((retryAt - now) / 1000))
+      throw new ApiError(429, 'rate_limited', `${who[0]?.toUpperCase()}${who.slice(1)} may have the server send ${limit} e-mail(s) per ${name}; nothing was sent: try again in ${Math.ceil(seconds / 60)} minute(s)`, undefined, seconds)
+    }
+    await MailSend.create({ userId: user.id, kind, recipients }, { transaction })
+  })
+}

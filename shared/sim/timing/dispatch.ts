@@ -1,0 +1,121 @@
+/**
+ * The front end (timing model sections 2 and 3): scalar instructions, vset,
+ * and in-order dispatch of vector instructions into the arithmetic and memory
+ * queues, renaming their registers. What it dispatches in cycle c reads from
+ * c + 1.
+ */
+import type { VectorOp } from '../exec/stream'
+import { REASON } from '../trace/types'
+import type { Ctx } from './context'
+import type { Inst } from './inst'
+import { LoadInst, MemInst, StoreInst } from './memory'
+import { PermutationInst } from './permutation'
+import { OrderedReductionInst, ReductionInst } from './reduction'
+import type { TimingState } from './state'
+import { UnitInst } from './units'
+
+// Imported bindings copied once: a module binding may cost a getter call per use in the per-cycle paths.
+const R_FRONTEND = REASON.frontend
+const R_QUEUE = REASON.queue
+const R_RENAME = REASON.rename
+
+function makeInst(ctx: Ctx, op: VectorOp, src: Int32Array[], mask: Int32Array | null): Inst {
+  if (op.memory || op.unit === 'load' || op.unit === 'store') {
+    return op.memory?.isStore || op.unit === 'store' ? new StoreInst(ctx, op, src, mask) : new LoadInst(ctx, op, src, mask)
+  }
+  if (op.shape === 'ordered-reduction') return new OrderedReductionInst(ctx, op, src, mask)
+  if (op.shape === 'reduction' || (op.shape === 'scalar-result' && /^(vcpop|vfirst)/.test(op.op))) {
+    return new ReductionInst(ctx, op, src, mask)
+  }
+  if (op.shape === 'permutation') return new PermutationInst(ctx, op, src, mask)
+  return new UnitInst(ctx, op, src, mask)
+}
+
+function isMem(op: VectorOp): boolean {
+  return !!op.memory || op.unit === 'load' || op.unit === 'store'
+}
+
+/** Tries to dispatch op in cycle c; returns false (and sets the front-end reason) when it must wait. */
+function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
+  const m = s.machine
+  const ctx = s.ctx
+  const mem = isMem(op)
+  if (mem ? s.memQueued >= m.memQueueDepth : s.arithQueued >= m.arithQueueDepth) {
+    s.feReason = R_QUEUE
+    return false
+  }
+  if (ctx.ren.freeCount < op.dstRegs.length) {
+    s.feReason = R_RENAME
+    return false
+  }
+  const src = op.srcRegs.map((g) => Int32Array.from(g, (r) => ctx.ren.lookup(r)))
+  const mask = op.masked ? Int32Array.of(ctx.ren.lookup(0)) : null
+  for (const g of src) for (const p of g) ctx.ren.addReader(p)
+  if (mask) ctx.ren.addReader(mask[0] ?? 0)
+  const inst = makeInst(ctx, op, src, mask)
+  const dst = new Int32Array(op.dstRegs.length)
+  const old = new Int32Array(op.dstRegs.length)
+  op.dstRegs.forEach((r, k) => {
+    const [p, o] = ctx.ren.rename(r)
+    ctx.rf.invalidate(p)
+    dst[k] = p
+    old[k] = o
+  })
+  inst.dst = dst
+  inst.oldDst = old
+  inst.dispatch = c
+  s.dispatchAt[op.seq] = c
+  s.inflight.push(inst)
+  if (inst instanceof MemInst) {
+    s.mem.push(inst)
+    s.memQueued++
+  } else {
+    s.arith.push(inst)
+    s.arithQueued++
+  }
+  return true
+}
+
+/** One front-end cycle: a scalar instruction, a vset, or up to dispatchWidth vector dispatches. */
+export function frontEnd(s: TimingState, c: number): boolean {
+  const ops = s.stream.ops
+  s.feReason = R_FRONTEND
+  s.feDispatched = -1
+  if (s.hold >= 0 || s.holdReleasedAt === c) return false
+  let dispatched = 0
+  for (;;) {
+    if (s.opIdx >= ops.length) {
+      if (dispatched > 0 || s.scalarAfterLeft === 0) return dispatched > 0
+      s.scalarAfterLeft--
+      return true
+    }
+    if (s.scalarLeft > 0) {
+      if (dispatched > 0) return true
+      s.scalarLeft--
+      return true
+    }
+    const op = ops[s.opIdx] as VectorOp
+    if (op.isConfig) {
+      if (dispatched > 0) return true
+      s.dispatchAt[op.seq] = c
+      s.completeAt[op.seq] = c
+      s.feDispatched = op.seq
+      advance(s)
+      return true
+    }
+    if (!dispatch(s, op, c)) return dispatched > 0
+    if (dispatched === 0) s.feDispatched = op.seq
+    dispatched++
+    advance(s)
+    if (op.scalarResult) {
+      s.hold = op.seq
+      return true
+    }
+    if (dispatched >= s.machine.dispatchWidth) return true
+  }
+}
+
+function advance(s: TimingState): void {
+  s.opIdx++
+  s.scalarLeft = s.stream.ops[s.opIdx]?.scalarBefore ?? 0
+}

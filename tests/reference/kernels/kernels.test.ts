@@ -1,0 +1,137 @@
+/**
+ * Compiler output against QEMU (/work/shared/handbook reference check 6): a
+ * corpus of C kernels of our own (tests/reference/kernels/*.c, with the small
+ * runtime runtime.h that writes results through the Linux write system call)
+ * is compiled by Debian's clang-16 with
+ *   --target=riscv64-unknown-elf -march=rv64gcv -O2 -ffreestanding -nostdlib -S
+ * and that exact output is assembled and run by Chimeline. The reference is the
+ * same source compiled with -fno-addrsig (GNU as 2.40 does not know LLVM's
+ * .addrsig), assembled by riscv64-linux-gnu-as, linked by riscv64-linux-gnu-ld
+ * --no-relax and run by qemu-riscv64 at VLEN 128, 256 and 1024: Chimeline's
+ * output must equal QEMU's byte for byte at each VLEN. Each kernel also runs
+ * through the timing model to completion on every preset, and the assembler's
+ * and executor's limits hold on compiler output.
+ */
+import { execFile } from 'node:child_process'
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { basename, join } from 'node:path'
+import { promisify } from 'node:util'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { assemble } from '../../../shared/sim/isa/assembler'
+import { execute } from '../../../shared/sim/exec/execute'
+import { PRESETS } from '../../../shared/sim/presets'
+import { runPipeline } from '../../../shared/sim/run'
+import { pool, runQemu, VLENS } from '../qemu/harness'
+
+const run = promisify(execFile)
+const DIR = import.meta.dirname
+const KERNELS = readdirSync(DIR).filter((f) => f.endsWith('.c')).sort().map((f) => basename(f, '.c'))
+const CLANG = 'clang-16'
+const FLAGS = ['--target=riscv64-unknown-elf', '-march=rv64gcv', '-O2', '-ffreestanding', '-nostdlib', '-S']
+const TOOLS = [CLANG, 'riscv64-linux-gnu-as', 'riscv64-linux-gnu-ld', 'qemu-riscv64']
+
+async function missing(): Promise<string[]> {
+  const out: string[] = []
+  for (const t of TOOLS) {
+    try {
+      await run('sh', ['-c', `command -v ${t}`])
+    } catch {
+      out.push(t)
+    }
+  }
+  return out
+}
+
+const absent = await missing()
+if (absent.length > 0) {
+  const msg = `${absent.join(', ')} missing: install with \`bash scripts/ensure-tools.sh clang riscv\``
+  if (process.env.CI === 'true') throw new Error(`CI: ${msg}`)
+  console.warn(`\n!!!!! SKIPPING the compiled-kernel reference check: ${msg} !!!!!\n`)
+}
+
+interface Built {
+  /** clang's assembly, exactly as written. */
+  asm: string
+  /** QEMU's standard output by VLEN. */
+  qemu: Map<number, Buffer>
+}
+
+describe.skipIf(absent.length > 0)('C kernels compiled by clang-16: Chimeline runs the compiler output and prints what QEMU prints', () => {
+  let dir = ''
+  const built = new Map<string, Built>()
+
+  beforeAll(async () => {
+    dir = mkdtempSync(join(tmpdir(), 'chimeline-kernels-'))
+    await pool(KERNELS.map((k) => async () => {
+      const src = join(DIR, `${k}.c`)
+      const asmPath = join(dir, `${k}.s`)
+      const gasPath = join(dir, `${k}.gas.s`)
+      await run(CLANG, [...FLAGS, src, '-o', asmPath])
+      await run(CLANG, [...FLAGS, '-fno-addrsig', src, '-o', gasPath])
+      await run('riscv64-linux-gnu-as', ['-march=rv64gcv', gasPath, '-o', join(dir, `${k}.o`)])
+      await run('riscv64-linux-gnu-ld', ['--no-relax', join(dir, `${k}.o`), '-o', join(dir, k)])
+      const qemu = new Map<number, Buffer>()
+      for (const vlen of VLENS) {
+        const r = await runQemu(join(dir, k), vlen)
+        if (r.exitCode !== 0) throw new Error(`${k} exits with ${r.exitCode} under QEMU at VLEN ${vlen}`)
+        qemu.set(vlen, r.stdout)
+      }
+      built.set(k, { asm: readFileSync(asmPath, 'utf8'), qemu })
+    }), 2)
+  }, 240_000)
+  afterAll(() => {
+    if (dir) rmSync(dir, { recursive: true, force: true })
+  })
+
+  it('has at least 12 kernels of our own', () => {
+    expect(KERNELS.length).toBeGreaterThanOrEqual(12)
+  })
+
+  it('compiles to the instructions the issue names (vector loops really were vectorised)', () => {
+    const all = [...built.values()].map((b) => b.asm).join('\n')
+    for (const op of ['vl1re64.v', 'vs1r.v', 'vwmacc.vv', 'vsext.vf2', 'vzext.vf2', 'vnsrl.wi', 'vfwcvt.f.x.v', 'vfncvt.f.f.w', 'vredsum.vs', 'vlse32.v', 'vsse64.v', 'vmerge.vim', 'fmadd.d', 'addw', 'sext.w', 'csrr']) {
+      expect(all, op).toMatch(new RegExp(`\\s${op.replace(/\./g, '\\.')}\\s`))
+    }
+  })
+
+  const cases = KERNELS.flatMap((k) => VLENS.map((vlen) => ({ k, vlen })))
+  it.each(cases)('$k at VLEN $vlen: the exact compiler output prints the same bytes as QEMU', ({ k, vlen }) => {
+    const b = built.get(k)!
+    const asm = assemble(b.asm)
+    if (!asm.ok) throw new Error(asm.errors.slice(0, 5).map((e) => `${e.line}:${e.column} ${e.message}`).join('\n'))
+    const r = execute(asm.program, { vlen })
+    if (!r.ok) throw new Error(`${r.error.line}:${r.error.column} ${r.error.message}`)
+    const want = b.qemu.get(vlen)!
+    expect(want.length).toBeGreaterThan(0)
+    expect(Buffer.from(r.output).equals(want), `${k}: ${r.output.length} bytes, QEMU ${want.length}`).toBe(true)
+    expect(r.ended).toBe('exit')
+  })
+
+  it.each(PRESETS.map((p) => ({ preset: p.id, machine: p.machine })))('every kernel times to completion on preset $preset', ({ machine }) => {
+    for (const k of KERNELS) {
+      const r = runPipeline({ program: built.get(k)!.asm, machine })
+      expect(r.ok ? 'ok' : `${k}: ${r.error.stage} ${r.error.message}`).toBe('ok')
+      if (r.ok) expect(r.trace.cycles).toBeGreaterThan(0)
+    }
+  }, 120_000)
+
+  it.each([['compiled-daxpy', 'daxpy'], ['compiled-fir', 'fir']])('examples/%s.s is the compiler output of %s.c, unchanged below its header', (example, k) => {
+    const text = readFileSync(join(DIR, '../../../examples', `${example}.s`), 'utf8')
+    expect(text.replace(/^(#[^\n]*\n)+/, '')).toBe(built.get(k)!.asm)
+  })
+
+  it('keeps the limits on compiler output: instructions, data and steps (each named with where)', () => {
+    const text = built.get('daxpy')!.asm
+    const full = assemble(text)
+    if (!full.ok) throw new Error('daxpy does not assemble')
+    const n = full.program.instructions.length
+    const fewer = assemble(text, { maxInstructions: n - 1 })
+    expect(!fewer.ok && fewer.errors[0]).toMatchObject({ code: 'too-many-instructions', message: `more than ${n - 1} instructions (after expanding pseudo-instructions)` })
+    const smallData = assemble(text, { maxDataBytes: 1024 })
+    expect(!smallData.ok && smallData.errors[0]?.code).toBe('data-too-large')
+    const steps = execute(full.program, { vlen: 128, stepLimit: 1000 })
+    expect(!steps.ok && steps.error).toMatchObject({ code: 'step-limit' })
+    expect(!steps.ok && steps.error.line).toBeGreaterThan(0)
+  })
+})

@@ -1,0 +1,129 @@
+/**
+ * Bounds and closed forms derived by hand from the timing model (the team's
+ * timing model v2, in the project's words in docs/model.md), one machine field
+ * or section at a time. Each expected value is worked out in the comment
+ * beside it; none comes from running the engine.
+ *
+ * Notation: L lanes, b beats a lane, D the FPU latency. The single-instruction
+ * closed form (model section 5): one vfadd.vv dispatched in cycle 0 reads in
+ * 1..b, takes beats in 2..b+1, writes in 2+D..b+1+D, and the run takes
+ * b + D + 2 cycles (cycles count from 0 to the last busy one).
+ */
+import { describe, expect, it } from 'vitest'
+import type { VectorOp } from '../../../shared/sim/exec/stream'
+import { createTimingState, finish, step } from '../../../shared/sim/timing/simulate'
+import { laneTiming } from '../../../shared/sim/trace/types'
+import { ampleMachine, buildOp, buildStream, unitLoad } from './factories'
+
+const D = 4
+const vfadd = (d: number, vl: number, a = 1, b = 2): VectorOp => buildOp({ vl, dstRegs: [d], srcRegs: [[a], [b]], text: `vfadd.vv v${d}, v${a}, v${b}` })
+const independent = (n: number, vl: number) => Array.from({ length: n }, (_, k) => vfadd(8 + k, vl))
+const cyclesOf = (ops: VectorOp[], machine: Parameters<typeof ampleMachine>[0]) => {
+  const s = createTimingState(buildStream(ops), ampleMachine(machine), { identicalLanes: false })
+  while (step(s));
+  const { trace, error } = finish(s)
+  expect(error).toBeUndefined()
+  return trace
+}
+
+describe('lane slots (model section 4: an instruction holds a slot from its first read to its last write)', () => {
+  it('n independent instructions of b beats on one slot take at least n x (b + D) cycles', () => {
+    // With laneSlots 1 the next instruction starts reading only after the previous one wrote its last word:
+    // each occupies the lane for its b reads/beats and D cycles of latency, b + D cycles at least, in turn.
+    const n = 6
+    const b = 4 // vl 32 on 8 lanes, FP64: 4 elements a lane, one a beat
+    const t = cyclesOf(independent(n, 32), { lanes: 8, laneSlots: 1 })
+    expect(t.cycles).toBeGreaterThanOrEqual(n * (b + D))
+  })
+
+  it('three slots overlap them: the same stream takes fewer cycles than on one', () => {
+    // Common practice: more slots let the next instruction read while the previous one waits out its latency.
+    expect(cyclesOf(independent(6, 32), { lanes: 8, laneSlots: 3 }).cycles).toBeLessThan(cyclesOf(independent(6, 32), { lanes: 8, laneSlots: 1 }).cycles)
+  })
+})
+
+describe('renaming (model section 3: a physical register returns to the pool when its replacing writer finishes)', () => {
+  it('one spare physical register serialises writers: n of them take at least n x (b + D + 1) cycles', () => {
+    // physRegs 33 leaves one register beyond the 32 architectural ones. Writer k + 1 needs it, and it is freed
+    // only when writer k finishes: writer k, dispatched in cycle t, finishes in t + b + D + 1 at the earliest
+    // (the closed form), and writer k + 1 is dispatched no earlier than that. So dispatches are b + D + 1
+    // apart, and n writers need n x (b + D + 1) cycles.
+    const n = 5
+    const b = 4
+    expect(cyclesOf(independent(n, 32), { lanes: 8, physRegs: 33 }).cycles).toBeGreaterThanOrEqual(n * (b + D + 1))
+  })
+})
+
+describe('dispatch width (model section 2: up to dispatchWidth vector instructions a cycle, in program order)', () => {
+  it('n one-beat instructions dispatched one a cycle end no earlier than n - 1 + (1 + D + 2)', () => {
+    // The last one is dispatched in cycle n - 1 at the earliest; from its dispatch it needs b + D + 2 cycles (b = 1)
+    // counted from its dispatch cycle: the run lasts at least (n - 1) + D + 3 cycles.
+    const n = 12
+    expect(cyclesOf(independent(n, 8), { lanes: 8, dispatchWidth: 1 }).cycles).toBeGreaterThanOrEqual(n - 1 + D + 3)
+  })
+
+  it('with dispatch width 4 the last of 12 is dispatched in cycle 2 at the earliest, and every instruction no earlier than floor(k / 4)', () => {
+    const t = cyclesOf(independent(12, 8), { lanes: 8, dispatchWidth: 4 })
+    t.instructions.forEach((ins, k) => expect(ins.dispatch).toBeGreaterThanOrEqual(Math.floor(k / 4)))
+    expect(t.instructions.filter((i) => i.dispatch === 0)).toHaveLength(4)
+  })
+})
+
+describe('gathers (model section 7: strided and indexed accesses move gatherElementsPerCycle elements a cycle)', () => {
+  it.each([1, 2, 4])('a strided load of vl 64 at g = %i elements a cycle takes at least 64 / g cycles of bus', (g) => {
+    // 64 elements at g a cycle need 64 / g cycles of requests, then memLatency until the last arrives.
+    const op = unitLoad(8, 64, 0x1000, 64, { memory: { pattern: 'strided', isStore: false, addresses: Float64Array.from({ length: 64 }, (_, i) => 0x1000 + 64 * i) } })
+    const t = cyclesOf([op], { lanes: 8, gatherElementsPerCycle: g, memLatency: 16 })
+    expect(t.cycles).toBeGreaterThanOrEqual(64 / g + 16)
+  })
+})
+
+describe('permutations over the ring (model section 9: a ring link carries one word a cycle each way)', () => {
+  // vslidedown by one: destination element i comes from source element i + 1. Element i lives in lane i mod L,
+  // so each moved element goes from lane (i + 1) mod L to lane i mod L: (i - (i + 1)) mod L = L - 1 hops on a
+  // one-way ring, and 1 hop the other way on a bidirectional ring. vl - 1 elements move (the last gets none).
+  const L = 8
+  const vl = 64
+  const slide = buildOp({ op: 'vslidedown.vi', shape: 'permutation', unit: 'alu', flopsPerElement: 0, vl, dstRegs: [8], srcRegs: [[4]], sourceIndex: Int32Array.from({ length: vl }, (_, i) => (i + 1 < vl ? i + 1 : -1)) })
+  const linkWords = (ringBidirectional: boolean) => {
+    const t = cyclesOf([slide], { lanes: L, ringBidirectional })
+    const links = L * 2
+    return { words: Math.round(t.metrics.ringUtilization * t.cycles * links), cycles: t.cycles }
+  }
+
+  it('a slide down by one crosses L - 1 links per element on a one-way ring: (vl - 1) x (L - 1) link-words', () => {
+    expect(linkWords(false).words).toBe((vl - 1) * (L - 1))
+  })
+
+  it('and one link per element on a bidirectional ring: vl - 1 link-words, and no more cycles', () => {
+    const two = linkWords(true)
+    expect(two.words).toBe(vl - 1)
+    expect(two.cycles).toBeLessThanOrEqual(linkWords(false).cycles)
+  })
+})
+
+describe('stepping the engine by hand (createTimingState, step): one vfadd.vv, vl 4, one lane, ample ports', () => {
+  it('dispatches in cycle 0, reads 1..4, executes 2..5, writes 6..9 and ends after cycle 9 (b + D + 2 = 10 cycles)', () => {
+    // Closed form with b = 4 (4 elements, one a beat), D = 4.
+    const s = createTimingState(buildStream([vfadd(3, 4)]), ampleMachine({ lanes: 1, vlen: 256 }), { identicalLanes: false })
+    const busy: number[] = []
+    const more: boolean[] = []
+    for (let c = 0; c < 10; c++) {
+      more.push(step(s))
+      expect(s.cycle).toBe(c + 1)
+      busy.push(s.ctx.progress[0] ?? 0)
+      if (c === 0) {
+        // After cycle 0: the op was dispatched and nothing else has happened in the lane.
+        expect(s.opIdx).toBe(1)
+        expect(s.dispatchAt[0]).toBe(0)
+        expect(s.completeAt[0]).toBe(-1)
+      }
+    }
+    expect(more).toEqual([true, true, true, true, true, true, true, true, true, false])
+    expect(busy).toEqual([0, 1, 1, 1, 1, 1, 1, 1, 1, 1])
+    expect(s.completeAt[0]).toBe(9)
+    const { trace } = finish(s)
+    expect(trace.cycles).toBe(10)
+    expect(laneTiming(trace, 0, 0)).toMatchObject({ readStart: 1, readEnd: 4, execStart: 2, writeStart: 6, writeEnd: 9 })
+  })
+})
