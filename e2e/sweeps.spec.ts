@@ -7,7 +7,6 @@
  */
 import { expect, test } from '@playwright/test'
 import { runPipeline } from '../shared/sim/run'
-import { inlineSymbols } from '../shared/sweep/inlineSymbols'
 import { withSymbols } from '../shared/sweep/symbols'
 import { FMA_CURVE } from '../tests/sweep/programs'
 import { DEMO, signIn, watchConsole } from './helpers/auth'
@@ -43,7 +42,7 @@ test('a vl curve from the Bench: Sweep this, run on the Worker pool, plot, table
   await screenshot(page, 'sweeps-vl-curve')
 
   // The Bench's machine is the default one (preset Default 8-lane): one point against a Node run of it.
-  const single = runPipeline({ program: inlineSymbols(withSymbols(FMA_CURVE, new Map([['AVL', 8]]))), machine: { issue: 'staggered' } })
+  const single = runPipeline({ program: withSymbols(FMA_CURVE, new Map([['AVL', 8]])), machine: { issue: 'staggered' } })
   if (!single.ok) throw new Error(single.error.message)
   const row = page.locator('[data-testid="sweep-table"] tr', { has: page.locator('td', { hasText: /^staggered$/ }) }).filter({ has: page.locator('td', { hasText: /^8$/ }) })
   await expect(row.first()).toContainText(String(single.trace.cycles))

@@ -13,7 +13,6 @@ import { checkMachine } from '../schemas/machine'
 import type { SweepPointResult, SweepValue } from '../schemas/sweep'
 import { prepareRun, timePrepared, type PrepareResult, type RunError } from '../sim/run'
 import { figuresOf } from './figures'
-import { inlineSymbols } from './inlineSymbols'
 import { pointInput, pointValues, type ResolvedSweep } from './resolve'
 import { withSymbols } from './symbols'
 
@@ -39,7 +38,7 @@ export function createPointRunner(sweep: ResolvedSweep) {
     if (p) {
       prepared.delete(key) // re-inserted below: the Map's order is the use order
     } else {
-      p = prepareRun({ program: inlineSymbols(text) }, { vlen })
+      p = prepareRun({ program: text }, { vlen })
       if (prepared.size >= PREPARED_CACHE) prepared.delete(prepared.keys().next().value as string)
     }
     prepared.set(key, p)

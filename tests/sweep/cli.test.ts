@@ -12,7 +12,6 @@ import { parse } from 'csv-parse/sync'
 import { describe, expect, it } from 'vitest'
 import { runPipeline } from '../../shared/sim/run'
 import { figuresOf } from '../../shared/sweep/figures'
-import { inlineSymbols } from '../../shared/sweep/inlineSymbols'
 import { withSymbols } from '../../shared/sweep/symbols'
 import { FMA_CURVE } from './programs'
 
@@ -57,7 +56,7 @@ describe('sweep output', () => {
       ['staggered', '7'],
       ['staggered', '8'],
     ])
-    const single = runPipeline({ program: inlineSymbols(withSymbols(FMA_CURVE, new Map([['AVL', 8]]))), machine: { lanes: 4, issue: 'staggered' } })
+    const single = runPipeline({ program: withSymbols(FMA_CURVE, new Map([['AVL', 8]])), machine: { lanes: 4, issue: 'staggered' } })
     if (!single.ok) throw new Error(single.error.message)
     const f = figuresOf(single.trace.metrics)
     expect(rows[3]).toMatchObject({ cycles: String(f.cycles), flops: String(f.flops), flopsPerCycle: String(f.flopsPerCycle), laneBusyMin: String(f.laneBusyMin), 'stall.bank': String(f.stalls.bank), status: 'ok', error: '' })

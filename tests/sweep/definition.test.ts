@@ -3,7 +3,6 @@ import { sweepDefinitionSchema, SWEEP_FIGURE_COLUMNS } from '../../shared/schema
 import { parseSpec } from '../../shared/sweep/spec'
 import { pointValues, resolveSweep } from '../../shared/sweep/resolve'
 import { symbolDefinitions, withSymbols } from '../../shared/sweep/symbols'
-import { inlineSymbols } from '../../shared/sweep/inlineSymbols'
 import { sweepCsvHeader } from '../../shared/sweep/csv'
 import { runSweep } from '../../shared/sweep/runSweep'
 import { runPipeline } from '../../shared/sim/run'
@@ -40,10 +39,6 @@ describe('program symbols', () => {
       { name: 'N', line: 2, value: '4' },
     ])
     expect(withSymbols(text, new Map([['AVL', 17]]))).toBe('loop:\n    .equ AVL, 17   # elements\n  .set  N,4\n    li a0, AVL\n')
-  })
-  it('inlines whole-number symbols for the assembler, keeping line numbers and comments', () => {
-    expect(inlineSymbols(text)).toBe('loop:\n\n\n    li a0, 256\n')
-    expect(inlineSymbols('.equ A, 3\nli a0, A # A stays in the comment\n')).toBe('\nli a0, 3 # A stays in the comment\n')
   })
 })
 
@@ -90,7 +85,7 @@ describe('running a sweep', () => {
     const r = resolve({ program: FMA_CURVE, parameters: [{ path: 'AVL', spec: '5,16' }, { path: 'lanes', spec: '4' }] })
     if (!r.ok) throw new Error('unresolved')
     const { points } = runSweep(r.sweep)
-    const single = runPipeline({ program: inlineSymbols(FMA_CURVE.replace('.equ    AVL, 256', '.equ    AVL, 16')), machine: { lanes: 4 } })
+    const single = runPipeline({ program: FMA_CURVE.replace('.equ    AVL, 256', '.equ    AVL, 16'), machine: { lanes: 4 } })
     if (!single.ok) throw new Error(single.error.message)
     expect(points[1]?.figures).toEqual(figuresOf(single.trace.metrics))
     expect(points[1]?.values).toEqual([16, 4])

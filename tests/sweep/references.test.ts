@@ -7,7 +7,6 @@ import { sweepDefinitionSchema, type SweepPointResult } from '../../shared/schem
 import { pointValues, resolveSweep, type ResolvedSweep } from '../../shared/sweep/resolve'
 import { runSweep } from '../../shared/sweep/runSweep'
 import { pointProgram } from '../../shared/sweep/runPoint'
-import { inlineSymbols } from '../../shared/sweep/inlineSymbols'
 import { runPipeline } from '../../shared/sim/run'
 import { FMA_CURVE, REDUCTION_CURVE } from './programs'
 
@@ -98,7 +97,7 @@ describe('vl = min(AVL, VLMAX) at every swept AVL (RISC-V V 1.0, section 6.3, th
     for (let i = 0; i < s.count; i++) {
       const [vlen, avl] = pointValues(s, i) as [number, number]
       // The first vector instruction after vsetvli; the stream stops there, so only the vl matters.
-      const text = inlineSymbols(pointProgram(s, [vlen, avl])).replace(/vid\.v[\s\S]*?(?=\n\s+li\s+a0, 0)/, 'vid.v   v2')
+      const text = pointProgram(s, [vlen, avl]).replace(/vid\.v[\s\S]*?(?=\n\s+li\s+a0, 0)/, 'vid.v   v2')
       const r = runPipeline({ program: text, machine: { vlen } })
       if (!r.ok) throw new Error(r.error.message)
       const vid = r.trace.instructions.find((ins) => ins.op === 'vid.v')
