@@ -77,6 +77,14 @@ const PLANS: Record<string, DemoPlan> = {
       { message: '8 banks of 2 ports per lane: no collisions left', machine: { rfBanks: 8, rfPortsPerBank: 2 } },
     ],
   },
+  'compiled-daxpy': {
+    tags: ['fp64', 'compiler output', 'strip-mining'],
+    variants: [{ message: '4 lanes: the same compiled loop on half the lanes', machine: { lanes: 4 } }],
+  },
+  'compiled-fir': {
+    tags: ['int16', 'compiler output', 'fixed point'],
+    variants: [{ message: 'Serial issue: the widening multiply-adds no longer overlap', machine: { issue: 'serial' } }],
+  },
   'long-stream': {
     tags: ['fp64', 'throughput'],
     variants: [

@@ -94,13 +94,16 @@ function lastLaneStalls(trace: TimingTrace, pos: number, spans: number[]): Instr
     }
   }
   if (lane < 0) return null
-  // Only waits between dispatch and the end count: a wait before dispatch is not in the latency.
-  const from = trace.instructions[pos]?.dispatch ?? 0
+  // Only waits after the dispatch cycle count: a wait before dispatch is not in the latency, and the
+  // dispatch cycle itself (a `frontend` stall of the lanes waiting for it) is part of the ideal b + D + 2.
+  const from = (trace.instructions[pos]?.dispatch ?? -1) + 1
   const cycles = new Map<StallReason, number>()
   for (const s of spans) {
-    if (trace.stalls.lane[s] !== lane || trace.stalls.start[s]! + trace.stalls.length[s]! <= from) continue
+    const start = Math.max(trace.stalls.start[s]!, from)
+    const length = trace.stalls.start[s]! + trace.stalls.length[s]! - start
+    if (trace.stalls.lane[s] !== lane || length <= 0) continue
     const reason = STALL_REASONS[trace.stalls.reason[s]!]!
-    cycles.set(reason, (cycles.get(reason) ?? 0) + trace.stalls.length[s]!)
+    cycles.set(reason, (cycles.get(reason) ?? 0) + length)
   }
   return { lane, reasons: [...cycles].map(([reason, c]) => ({ reason, cycles: c })).sort((a, b) => b.cycles - a.cycles) }
 }
