@@ -12,54 +12,25 @@
  * mistake in the command line (options, files, machine fields), 1 for a
  * program or model error (assembly, execution, a cycle or trace limit).
  */
-import { readFileSync, writeFileSync } from 'node:fs'
-import { checkMachine, defaultMachine } from '../../shared/schemas/machine'
+import { writeFileSync } from 'node:fs'
+import { checkMachine } from '../../shared/schemas/machine'
 import { readDump, type DumpRequest, type DumpValue } from '../../shared/sim/exec/dump'
 import type { Program } from '../../shared/sim/isa/types'
-import { PRESETS } from '../../shared/sim/presets'
 import { runPipeline, type RunError } from '../../shared/sim/run'
 import { toCsv } from '../../shared/sim/trace/csv'
 import { traceToJson } from '../../shared/sim/trace/schema'
 import { summarize } from '../../shared/sim/trace/summary'
 import type { TimingTrace } from '../../shared/sim/trace/types'
 import { toVcd } from '../../shared/sim/trace/vcd'
-import { applySets, mergeMachine, parseSimArgs, UsageError, type Format, type SimArgs } from './simArgs'
+import { machineInputFromArgs, parseSimArgs, readText, UsageError, type Format, type SimArgs } from './simArgs'
 import { appVersion as version } from '../version'
 
 /** A program or model error: exit code 1. */
 class RunFailure extends Error {}
 
-function readText(path: string, what: string): string {
-  try {
-    return readFileSync(path, 'utf8')
-  } catch (e) {
-    throw new UsageError(`cannot read ${what} ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`)
-  }
-}
-
-function presetMachine(name: string | undefined): Record<string, unknown> {
-  if (name === undefined) return { ...defaultMachine }
-  const key = name.toLowerCase()
-  const preset = PRESETS.find((p) => p.id === key || p.name.toLowerCase() === key)
-  if (!preset) throw new UsageError(`unknown preset "${name}" (presets: ${PRESETS.map((p) => `"${p.name}" (${p.id})`).join(', ')})`)
-  return mergeMachine({ ...defaultMachine }, preset.machine as Record<string, unknown>)
-}
-
 /** The machine of the command line, validated by the shared machine schema. */
 export function machineFromArgs(args: SimArgs) {
-  let machine = presetMachine(args.preset)
-  if (args.config) {
-    let partial: unknown
-    try {
-      partial = JSON.parse(readText(args.config, 'config file'))
-    } catch (e) {
-      if (e instanceof UsageError) throw e
-      throw new UsageError(`config file ${args.config} is not JSON: ${(e as Error).message}`)
-    }
-    if (typeof partial !== 'object' || partial === null || Array.isArray(partial)) throw new UsageError(`config file ${args.config} must hold a JSON object of machine fields`)
-    machine = mergeMachine(machine, partial as Record<string, unknown>)
-  }
-  machine = applySets(machine, args.sets)
+  const machine = machineInputFromArgs(args)
   const checked = checkMachine(machine)
   if (!checked.ok) throw new UsageError(`machine: ${checked.issues.map((i) => `${i.field}: ${i.message}`).join('; ')}`)
   return checked.machine

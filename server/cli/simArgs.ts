@@ -2,7 +2,10 @@
  * Command-line arguments of `npm run -s sim`: parsing and the `--set` overrides.
  * Kept apart from sim.ts so that the tests can drive it without a process.
  */
+import { readFileSync } from 'node:fs'
 import { parseArgs } from 'node:util'
+import { defaultMachine } from '../../shared/schemas/machine'
+import { PRESETS } from '../../shared/sim/presets'
 import { parseDumpRequest, type DumpRequest } from '../../shared/sim/exec/dump'
 import { FP_REDUCTION_ORDERS, type FpReductionOrder } from '../../shared/sim/run'
 
@@ -125,4 +128,40 @@ export function mergeMachine<T extends Record<string, unknown>>(base: T, partial
     out[key] = isRecord(value) && isRecord(out[key]) ? mergeMachine(out[key] as Record<string, unknown>, value) : value
   }
   return out as T
+}
+
+/** A file's text, or a usage error naming what it was for. */
+export function readText(path: string, what: string): string {
+  try {
+    return readFileSync(path, 'utf8')
+  } catch (e) {
+    throw new UsageError(`cannot read ${what} ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`)
+  }
+}
+
+/**
+ * The machine fields of a command line, not yet validated: the defaults, then
+ * the preset (by id or name), then --config's JSON object, then each --set.
+ * `sim` and `sweep` build their machine the same way.
+ */
+export function machineInputFromArgs(args: Pick<SimArgs, 'preset' | 'config' | 'sets'>): Record<string, unknown> {
+  let machine: Record<string, unknown> = { ...defaultMachine }
+  if (args.preset !== undefined) {
+    const key = args.preset.toLowerCase()
+    const preset = PRESETS.find((p) => p.id === key || p.name.toLowerCase() === key)
+    if (!preset) throw new UsageError(`unknown preset "${args.preset}" (presets: ${PRESETS.map((p) => `"${p.name}" (${p.id})`).join(', ')})`)
+    machine = mergeMachine(machine, preset.machine as Record<string, unknown>)
+  }
+  if (args.config) {
+    let partial: unknown
+    try {
+      partial = JSON.parse(readText(args.config, 'config file'))
+    } catch (e) {
+      if (e instanceof UsageError) throw e
+      throw new UsageError(`config file ${args.config} is not JSON: ${(e as Error).message}`)
+    }
+    if (typeof partial !== 'object' || partial === null || Array.isArray(partial)) throw new UsageError(`config file ${args.config} must hold a JSON object of machine fields`)
+    machine = mergeMachine(machine, partial as Record<string, unknown>)
+  }
+  return applySets(machine, args.sets)
 }

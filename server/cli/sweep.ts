@@ -13,50 +13,20 @@
  * (a program that does not assemble, say); 0 otherwise, failed points included
  * as rows with their stage and message.
  */
-import { readFileSync, writeFileSync } from 'node:fs'
-import { defaultMachine } from '../../shared/schemas/machine'
+import { writeFileSync } from 'node:fs'
 import { sweepDefinitionSchema, SWEEP_HARD_MAX_POINTS, type SweepDefinition } from '../../shared/schemas/sweep'
-import { PRESETS } from '../../shared/sim/presets'
 import { resolveSweep, type ResolvedSweep } from '../../shared/sweep/resolve'
 import { toSweepCsv } from '../../shared/sweep/csv'
 import { ESTIMATE_NOTE } from '../../shared/sim/trace/summary'
-import { applySets, mergeMachine, UsageError } from './simArgs'
+import { machineInputFromArgs, readText, UsageError } from './simArgs'
 import { parseSweepArgs, type SweepArgs } from './sweepArgs'
 import { runOnThreads } from './sweepThreads'
 
 /** A program or model error: exit code 1. */
 class SweepFailure extends Error {}
 
-function readText(path: string, what: string): string {
-  try {
-    return readFileSync(path, 'utf8')
-  } catch (e) {
-    throw new UsageError(`cannot read ${what} ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`)
-  }
-}
-
 /** The base machine: preset, then --config, then each --set (validated with the swept fields by resolveSweep). */
-function baseMachine(args: SweepArgs): Record<string, unknown> {
-  let machine: Record<string, unknown> = { ...defaultMachine }
-  if (args.preset !== undefined) {
-    const key = args.preset.toLowerCase()
-    const preset = PRESETS.find((p) => p.id === key || p.name.toLowerCase() === key)
-    if (!preset) throw new UsageError(`unknown preset "${args.preset}" (presets: ${PRESETS.map((p) => `"${p.name}" (${p.id})`).join(', ')})`)
-    machine = mergeMachine(machine, preset.machine as Record<string, unknown>)
-  }
-  if (args.config) {
-    let partial: unknown
-    try {
-      partial = JSON.parse(readText(args.config, 'config file'))
-    } catch (e) {
-      if (e instanceof UsageError) throw e
-      throw new UsageError(`config file ${args.config} is not JSON: ${(e as Error).message}`)
-    }
-    if (typeof partial !== 'object' || partial === null || Array.isArray(partial)) throw new UsageError(`config file ${args.config} must hold a JSON object of machine fields`)
-    machine = mergeMachine(machine, partial as Record<string, unknown>)
-  }
-  return applySets(machine, args.sets)
-}
+const baseMachine = (args: SweepArgs): Record<string, unknown> => machineInputFromArgs(args)
 
 export function definitionFromArgs(args: SweepArgs): { definition: SweepDefinition; sweep: ResolvedSweep } {
   const parsed = sweepDefinitionSchema.safeParse({
