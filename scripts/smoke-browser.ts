@@ -8,7 +8,8 @@
  */
 import fs from 'node:fs'
 import path from 'node:path'
-import { chromium, type Page } from '@playwright/test'
+import type { Page } from '@playwright/test'
+import { launchChromium } from './bench/browser'
 import { DEMO_PASSWORD, DEMO_USERS } from '../server/services/demo-seed'
 
 const [baseUrl, shareUrl] = process.argv.slice(2)
@@ -30,10 +31,7 @@ async function step(page: Page, what: string, work: () => Promise<void>): Promis
   }
 }
 
-const browser = await chromium.launch({
-  executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-  args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-})
+const browser = await launchChromium()
 try {
   const page = await browser.newPage({ viewport: { width: 1440, height: 900 } })
   const owner = DEMO_USERS.find((u) => u.workspace === 'owner')?.email ?? ''

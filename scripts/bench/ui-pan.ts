@@ -16,8 +16,8 @@
  */
 import { mkdirSync } from 'node:fs'
 import path from 'node:path'
-import { chromium, type Page } from '@playwright/test'
-import { build, preview } from 'vite'
+import type { Page } from '@playwright/test'
+import { launchChromium, serveProbePage } from './browser'
 
 const arg = (name: string, fallback: number) => {
   const i = process.argv.indexOf(`--${name}`)
@@ -84,22 +84,11 @@ function recordWhilePanning(page: Page, ms: number): Promise<Sample> {
 
 async function main() {
   mkdirSync(outDir, { recursive: true })
-  await build({
-    configFile: 'vite.config.ts',
-    logLevel: 'error',
-    // The probe page lives in e2e/fixtures; a root-relative input keeps its path in the output.
-    build: { outDir, emptyOutDir: true, rollupOptions: { input: { probe: path.resolve('e2e/fixtures/chart-probe.html') } } },
-  })
-  const server = await preview({ configFile: 'vite.config.ts', logLevel: 'error', build: { outDir }, preview: { port: 0, host: '127.0.0.1' } })
-  const address = server.httpServer.address()
-  if (!address || typeof address === 'string') throw new Error('the preview server did not start')
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'],
-  })
+  const probe = await serveProbePage('chart-probe', outDir)
+  const browser = await launchChromium()
   try {
     const page = await browser.newPage({ viewport: { width, height: 900 } })
-    await page.goto(`http://127.0.0.1:${address.port}/e2e/fixtures/chart-probe.html?example=long-stream&lanes=8`)
+    await page.goto(`${probe.url}?example=long-stream&lanes=8`)
     await page.locator('#status').filter({ hasText: 'done' }).waitFor({ timeout: 60_000 })
     const chart = page.getByTestId('lane-chart')
     const bars = await chart.getAttribute('data-bars')
@@ -129,7 +118,7 @@ async function main() {
     }
   } finally {
     await browser.close()
-    await new Promise<void>((resolve) => server.httpServer.close(() => resolve()))
+    await probe.close()
   }
 }
 

@@ -15,7 +15,7 @@
  * Options: --runs N (default 7), --port N (default 3190).
  */
 import { spawn } from 'node:child_process'
-import { chromium } from '@playwright/test'
+import { launchChromium } from './browser'
 import { build } from 'vite'
 import { DEMO, DEMO_PASSWORD } from '../../e2e/helpers/auth'
 
@@ -82,10 +82,7 @@ const server = spawn('node_modules/.bin/tsx', ['scripts/serve-test.ts'], {
 })
 try {
   await waitForHealth(60_000)
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'],
-  })
+  const browser = await launchChromium()
   const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } })
   await page.goto(`${base}/signin`)
   await page.getByLabel('E-mail').fill(DEMO.editor)

@@ -9,7 +9,7 @@
  */
 import { spawn } from 'node:child_process'
 import { loadavg } from 'node:os'
-import { chromium } from '@playwright/test'
+import { launchChromium } from './browser'
 import { build } from 'vite'
 import { DEMO, DEMO_PASSWORD } from '../../e2e/helpers/auth'
 import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
@@ -41,7 +41,7 @@ await build({ logLevel: 'warn' })
 const server = spawn('node_modules/.bin/tsx', ['scripts/serve-test.ts'], { env: { ...process.env, CHIMELINE_E2E_PORT: String(port) }, stdio: ['ignore', 'ignore', 'inherit'], detached: true })
 try {
   await waitForHealth(60_000)
-  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'] })
+  const browser = await launchChromium()
   const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } })
   await page.goto(`${base}/signin`)
   await page.getByLabel('E-mail').fill(DEMO.editor)

@@ -12,28 +12,17 @@
  */
 import { mkdirSync } from 'node:fs'
 import path from 'node:path'
-import { chromium } from '@playwright/test'
-import { build, preview } from 'vite'
+import { launchChromium, serveProbePage } from './browser'
 
 const outDir = path.resolve('.tmp/bench-ui-worker')
 
 async function main() {
   mkdirSync(outDir, { recursive: true })
-  await build({
-    configFile: 'vite.config.ts',
-    logLevel: 'error',
-    build: { outDir, emptyOutDir: true, rollupOptions: { input: { probe: path.resolve('e2e/fixtures/worker-probe.html') } } },
-  })
-  const server = await preview({ configFile: 'vite.config.ts', logLevel: 'error', build: { outDir }, preview: { port: 0, host: '127.0.0.1' } })
-  const address = server.httpServer.address()
-  if (!address || typeof address === 'string') throw new Error('the preview server did not start')
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'],
-  })
+  const probe = await serveProbePage('worker-probe', outDir)
+  const browser = await launchChromium()
   try {
     const page = await browser.newPage()
-    await page.goto(`http://127.0.0.1:${address.port}/e2e/fixtures/worker-probe.html?lanes=1&repeat=3`)
+    await page.goto(`${probe.url}?lanes=1&repeat=3`)
     await page.locator('#status').filter({ hasText: 'idle' }).waitFor()
     await page.click('#run')
     let interactions = 0
@@ -49,7 +38,7 @@ async function main() {
     console.log(`  ${interactions} click + key press pairs; longest input delay ${await page.locator('#max-input-delay').textContent()} ms, longest timer lateness ${await page.locator('#max-gap').textContent()} ms (target: under 100 ms each)`)
   } finally {
     await browser.close()
-    await new Promise<void>((resolve) => server.httpServer.close(() => resolve()))
+    await probe.close()
   }
 }
 

@@ -5,7 +5,8 @@
  * per-element arrays are cut, or extended the way the instruction walks
  * (addresses by the last stride, every new element active, a permutation's
  * new elements from their own index). The functional values do not matter to
- * the timing model, only where the elements are; nothing is hard-coded.
+ * the timing model, only where the elements are: the neighbours' cycles come from
+ * these runs, never from a table or a formula.
  * Pure (no DOM): it runs in the simulator Worker.
  */
 import { parseMachine, type MachineInput } from '@shared/schemas/machine'
