@@ -26,7 +26,7 @@ import { runPipeline } from '../../shared/sim/run'
 import { applyInitialData } from '../services/scenario-run'
 import { parseErrorPlace, placeOfPath } from './jsonPlace'
 import { toJunit, type CheckedScenario } from './junit'
-import { applySets, mergeMachine, UsageError, type SimArgs } from './simArgs'
+import { applySets, mergeMachine, oneFile, parseSets, UsageError, type SimArgs } from './simArgs'
 
 export const USAGE = 'usage: chimeline check BUNDLE.json [--junit FILE.xml] [--preset NAME] [--set PATH=VALUE]...'
 
@@ -51,14 +51,9 @@ export function parseCheckArgs(argv: string[]): CheckArgs {
   }
   const { values, positionals } = parsed
   if (values.help) throw new UsageError(USAGE)
-  if (positionals.length !== 1) throw new UsageError(`${positionals.length === 0 ? 'no bundle file given' : `one bundle file expected, got ${positionals.length}`}; ${USAGE}`)
-  const sets = (values.set ?? []).map((text) => {
-    const eq = text.indexOf('=')
-    const path = eq > 0 ? text.slice(0, eq).split('.') : []
-    if (eq <= 0 || path.some((p) => p === '')) throw new UsageError(`--set expects PATH=VALUE with a dotted machine field name, e.g. units.fpu.latency=6 (got "${text}")`)
-    return { path, raw: text.slice(eq + 1), text }
-  })
-  return { file: positionals[0] as string, junit: values.junit, preset: values.preset, sets }
+  const file = oneFile(positionals, 'bundle', USAGE)
+  const sets = parseSets(values.set, 'PATH=VALUE')
+  return { file, junit: values.junit, preset: values.preset, sets }
 }
 
 /** Reads and validates a bundle; a problem names the file, the line and column, and the field. */

@@ -57,9 +57,7 @@ export function parseSimArgs(argv: string[]): SimArgs {
   }
   const { values, positionals } = parsed
   if (values.help) throw new UsageError(USAGE)
-  if (positionals.length !== 1) {
-    throw new UsageError(`${positionals.length === 0 ? 'no program file given' : `one program file expected, got ${positionals.length}`}; ${USAGE}`)
-  }
+  const file = oneFile(positionals, 'program', USAGE)
   const format = values.format ?? 'summary'
   if (!(FORMATS as readonly string[]).includes(format)) {
     throw new UsageError(`--format must be one of ${FORMATS.join(', ')} (got "${format}")`)
@@ -74,13 +72,8 @@ export function parseSimArgs(argv: string[]): SimArgs {
     return r.request
   })
   if (dumps.length > 0 && format !== 'summary') throw new UsageError(`--dump adds data to the summary; it cannot be used with --format ${format}`)
-  const sets = (values.set ?? []).map((text) => {
-    const eq = text.indexOf('=')
-    const path = eq > 0 ? text.slice(0, eq).split('.') : []
-    if (eq <= 0 || path.some((p) => p === '')) throw new UsageError(`--set expects path=value with a dotted machine field name, e.g. units.fpu.latency=6 (got "${text}")`)
-    return { path, raw: text.slice(eq + 1), text }
-  })
-  return { file: positionals[0] as string, preset: values.preset, config: values.config, sets, format: format as Format, out: values.out, fpOrder: fpOrder as FpReductionOrder, dumps }
+  const sets = parseSets(values.set)
+  return { file, preset: values.preset, config: values.config, sets, format: format as Format, out: values.out, fpOrder: fpOrder as FpReductionOrder, dumps }
 }
 
 /** "4" -> 4, "true" -> true, "serial" -> "serial": the schema then judges the value. */
@@ -128,6 +121,22 @@ export function mergeMachine<T extends Record<string, unknown>>(base: T, partial
     out[key] = isRecord(value) && isRecord(out[key]) ? mergeMachine(out[key] as Record<string, unknown>, value) : value
   }
   return out as T
+}
+
+/** The one file a command line names (`what`: 'program', 'bundle'), or a usage error. */
+export function oneFile(positionals: string[], what: string, usage: string): string {
+  if (positionals.length !== 1) throw new UsageError(`${positionals.length === 0 ? `no ${what} file given` : `one ${what} file expected, got ${positionals.length}`}; ${usage}`)
+  return positionals[0] as string
+}
+
+/** The --set options: dotted machine field names and raw values (`spelling` is how the usage line writes the form). */
+export function parseSets(texts: string[] | undefined, spelling = 'path=value'): SimArgs['sets'] {
+  return (texts ?? []).map((text) => {
+    const eq = text.indexOf('=')
+    const path = eq > 0 ? text.slice(0, eq).split('.') : []
+    if (eq <= 0 || path.some((p) => p === '')) throw new UsageError(`--set expects ${spelling} with a dotted machine field name, e.g. units.fpu.latency=6 (got "${text}")`)
+    return { path, raw: text.slice(eq + 1), text }
+  })
 }
 
 /** A file's text, or a usage error naming what it was for. */

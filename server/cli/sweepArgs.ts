@@ -4,7 +4,7 @@
  */
 import { availableParallelism } from 'node:os'
 import { parseArgs } from 'node:util'
-import { UsageError } from './simArgs'
+import { oneFile, parseSets, UsageError } from './simArgs'
 
 export const SWEEP_FORMATS = ['csv', 'json'] as const
 export type SweepFormat = (typeof SWEEP_FORMATS)[number]
@@ -59,9 +59,7 @@ export function parseSweepArgs(argv: string[]): SweepArgs {
   }
   const { values, positionals } = parsed
   if (values.help) throw new UsageError(SWEEP_USAGE)
-  if (positionals.length !== 1) {
-    throw new UsageError(`${positionals.length === 0 ? 'no program file given' : `one program file expected, got ${positionals.length}`}; ${SWEEP_USAGE}`)
-  }
+  const file = oneFile(positionals, 'program', SWEEP_USAGE)
   const format = values.format ?? 'csv'
   if (!(SWEEP_FORMATS as readonly string[]).includes(format)) throw new UsageError(`--format must be one of ${SWEEP_FORMATS.join(', ')} (got "${format}")`)
   const vary = (values.vary ?? []).map((text) => {
@@ -70,17 +68,12 @@ export function parseSweepArgs(argv: string[]): SweepArgs {
     return { path: text.slice(0, eq), spec: text.slice(eq + 1) }
   })
   if (vary.length === 0) throw new UsageError(`give at least one --vary PATH=SPEC; ${SWEEP_USAGE}`)
-  const sets = (values.set ?? []).map((text) => {
-    const eq = text.indexOf('=')
-    const path = eq > 0 ? text.slice(0, eq).split('.') : []
-    if (eq <= 0 || path.some((p) => p === '')) throw new UsageError(`--set expects path=value with a dotted machine field name, e.g. units.fpu.latency=6 (got "${text}")`)
-    return { path, raw: text.slice(eq + 1), text }
-  })
+  const sets = parseSets(values.set)
   const time = values['time-limit']
   const seconds = time === undefined ? undefined : Number(time)
   if (seconds !== undefined && !(Number.isFinite(seconds) && seconds > 0 && seconds <= 86_400)) throw new UsageError(`--time-limit takes seconds, more than 0 and at most 86400 (got "${time}")`)
   return {
-    file: positionals[0] as string,
+    file,
     preset: values.preset,
     config: values.config,
     sets,
