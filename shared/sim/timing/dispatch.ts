@@ -66,6 +66,7 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
   inst.dispatch = c
   s.dispatchAt[op.seq] = c
   s.inflight.push(inst)
+  if (inst.hasGlobal) s.globalInsts.push(inst)
   if (inst instanceof MemInst) {
     s.mem.push(inst)
     s.memQueued++

@@ -120,9 +120,10 @@ export class SpanRecorder {
   private uStart = new Int32Array(0)
   private uLen = new Int32Array(0)
   private uRow = new Int32Array(0)
-  /** Closed spans, counted as the full machine holds them (see `setLaneFactor`). */
+  /** Closed spans, counted as the full machine holds them (see `setLaneWeights`). */
   private closed = 0
-  private stallWeight = 1
+  /** Lanes of the machine each recorded lane stands for (1 each unless symmetry.ts groups lanes). */
+  private readonly laneWeight: Int32Array
   private useWeight = new Int32Array(0)
   /** Stall cycles by reason index. */
   readonly stallTotals = new Float64Array(STALL_REASONS.length)
@@ -134,6 +135,7 @@ export class SpanRecorder {
     this.sStart = new Int32Array(lanes)
     this.sLen = new Int32Array(lanes)
     this.sRow = new Int32Array(lanes)
+    this.laneWeight = new Int32Array(lanes).fill(1)
     this.totals = new Float64Array(0)
   }
 
@@ -157,13 +159,14 @@ export class SpanRecorder {
   }
 
   /**
-   * This recorder times one lane for `factor` identical ones (symmetry.ts):
-   * its stall spans and lane-resource spans count `factor` times against the
-   * span limit, so that a run stops where the full one would.
+   * Each recorded lane stands for `weights[lane]` alike lanes (symmetry.ts):
+   * its stall cycles count that many times in the totals, and its stall spans
+   * and lane-resource spans against the span limit, so that a run stops where
+   * the full one would.
    */
-  setLaneFactor(factor: number): void {
-    this.stallWeight = factor
-    this.resources.forEach((r, i) => (this.useWeight[i] = r.lane === null ? 1 : factor))
+  setLaneWeights(weights: Int32Array): void {
+    this.laneWeight.set(weights)
+    this.resources.forEach((r, i) => (this.useWeight[i] = r.lane === null ? 1 : (weights[r.lane] ?? 1)))
   }
 
   /** Spans closed so far (the trace-size limit counts these). */
@@ -173,7 +176,7 @@ export class SpanRecorder {
 
   /** Lane `lane` waited in cycle c for `inst` because of reason index `reason`. */
   stallAt(lane: number, c: number, reason: number, inst: number): void {
-    this.stallTotals[reason] = (this.stallTotals[reason] ?? 0) + 1
+    this.stallTotals[reason] = (this.stallTotals[reason] ?? 0) + (this.laneWeight[lane] ?? 1)
     const open = this.sReason[lane] ?? -1
     if (open === reason && this.sInst[lane] === inst && (this.sStart[lane] ?? 0) + (this.sLen[lane] ?? 0) === c) {
       this.sLen[lane] = (this.sLen[lane] ?? 0) + 1
@@ -200,14 +203,14 @@ export class SpanRecorder {
     while (n > 0 && t.get(0, n - 1) >= cycles) {
       n--
       const r = t.get(S_REASON, n)
-      tot[r] = (tot[r] ?? 0) - t.get(S_LEN, n)
+      tot[r] = (tot[r] ?? 0) - t.get(S_LEN, n) * (this.laneWeight[t.get(S_LANE, n)] ?? 1)
     }
     t.count = n
     for (let i = 0; i < n; i++) {
       const over = t.get(0, i) + t.get(S_LEN, i) - cycles
       if (over <= 0) continue
       const r = t.get(S_REASON, i)
-      tot[r] = (tot[r] ?? 0) - over
+      tot[r] = (tot[r] ?? 0) - over * (this.laneWeight[t.get(S_LANE, i)] ?? 1)
       t.set(S_LEN, i, t.get(S_LEN, i) - over)
     }
   }
@@ -215,7 +218,7 @@ export class SpanRecorder {
   private closeStall(lane: number): void {
     this.stall.set(S_LEN, this.sRow[lane] ?? 0, this.sLen[lane] ?? 0)
     this.sReason[lane] = -1
-    this.closed += this.stallWeight
+    this.closed += this.laneWeight[lane] ?? 1
   }
 
   /**

@@ -5,10 +5,13 @@
  */
 import type { VectorOp } from '../exec/stream'
 import type { ExecUnit } from './config'
-import { elementsPerBeat, UNIT_COUNT, UNIT_INDEX, unitLatency, wordsFor } from './config'
+import { elementsPerBeat, UNIT_COUNT as UNITS_PER_LANE, UNIT_INDEX, unitLatency, wordsFor } from './config'
 import type { Ctx } from './context'
 import type { Operand } from './inst'
 import { F_EXEC_START, F_READ_START, fillLaneElements, Inst } from './inst'
+
+// Copied once: under tsx's module transform (Node: the CLIs, the server, the bench) each use of an imported binding is a getter call.
+const UNIT_COUNT: number = UNITS_PER_LANE
 
 /** Mask-producing instructions write one bit per element. */
 const MASK_DST = /^vm(seq|sne|sltu?|sleu?|sgtu?|feq|fne|flt|fle|fgt|fge|and|nand|andn|or|nor|orn|xor|xnor|sbf|sif|sof)\./
@@ -101,7 +104,11 @@ export class UnitInst extends Inst {
     ctx.busyLane(lane)
     if (j === 0) this.setTime(lane, F_EXEC_START, c)
     const last = j === b - 1
-    for (const s of this.srcs) s.cons[lane] = last ? (s.words[lane] ?? 0) : Math.floor((upto * s.bits) / 64)
+    const srcs = this.srcs
+    for (let k = 0; k < srcs.length; k++) {
+      const s = srcs[k] as Operand
+      s.cons[lane] = last ? (s.words[lane] ?? 0) : Math.floor((upto * s.bits) / 64)
+    }
     const before = j === 0 ? 0 : Math.floor((Math.min(n, j * this.epc) * this.dstBits) / 64)
     const after = last ? (this.dstWords[lane] ?? 0) : Math.floor((upto * this.dstBits) / 64)
     for (let w = before; w < after; w++) this.resultReady(lane, w, c + this.latency)
