@@ -48,19 +48,29 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
     s.feReason = R_RENAME
     return false
   }
-  const src = op.srcRegs.map((g) => Int32Array.from(g, (r) => ctx.ren.lookup(r)))
-  const mask = op.masked ? Int32Array.of(ctx.ren.lookup(0)) : null
-  for (const g of src) for (const p of g) ctx.ren.addReader(p)
-  if (mask) ctx.ren.addReader(mask[0] ?? 0)
+  const ren = ctx.ren
+  const src: Int32Array[] = []
+  for (const g of op.srcRegs) {
+    const phys = new Int32Array(g.length)
+    for (let k = 0; k < g.length; k++) {
+      const p = ren.lookup(g[k] ?? 0)
+      phys[k] = p
+      ren.addReader(p)
+    }
+    src.push(phys)
+  }
+  const mask = op.masked ? Int32Array.of(ren.lookup(0)) : null
+  if (mask) ren.addReader(mask[0] ?? 0)
   const inst = makeInst(ctx, op, src, mask)
-  const dst = new Int32Array(op.dstRegs.length)
-  const old = new Int32Array(op.dstRegs.length)
-  op.dstRegs.forEach((r, k) => {
-    const [p, o] = ctx.ren.rename(r)
+  const n = op.dstRegs.length
+  const dst = new Int32Array(n)
+  const old = new Int32Array(n)
+  for (let k = 0; k < n; k++) {
+    const [p, o] = ren.rename(op.dstRegs[k] ?? 0)
     ctx.rf.invalidate(p)
     dst[k] = p
     old[k] = o
-  })
+  }
   inst.dst = dst
   inst.oldDst = old
   inst.dispatch = c

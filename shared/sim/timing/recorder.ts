@@ -44,6 +44,16 @@ class Columns {
     ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width] = start
     return i
   }
+  /** Columns 1 to 5 of row i at once (one chunk lookup): the rest of a row when its span closes. */
+  setRest(i: number, a: number, b: number, c: number, d: number, e: number): void {
+    const chunk = this.chunks[i >>> CHUNK_BITS] as Int32Array
+    const at = (i & LOW) * this.width
+    chunk[at + 1] = a
+    chunk[at + 2] = b
+    chunk[at + 3] = c
+    chunk[at + 4] = d
+    if (this.width > 5) chunk[at + 5] = e
+  }
   set(k: number, i: number, v: number): void {
     ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width + k] = v
   }
@@ -57,7 +67,12 @@ class Columns {
     const w = this.width
     const chunks = this.chunks
     if (idx === null) {
-      for (let i = 0; i < n; i++) out[i] = (chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * w + k] ?? 0
+      // Chunk by chunk: one lookup per chunk, a strided walk inside it.
+      for (let ci = 0, i = 0; i < n; ci++) {
+        const chunk = chunks[ci] as Int32Array
+        const end = Math.min(n, i + CHUNK)
+        for (let at = k; i < end; i++, at += w) out[i] = chunk[at] as number
+      }
     } else {
       for (let i = 0; i < idx.length; i++) {
         const j = idx[i] ?? 0
@@ -183,12 +198,8 @@ export class SpanRecorder {
       return
     }
     if (open >= 0) this.closeStall(lane)
-    const t = this.stall
-    const row = t.push(c)
-    t.set(S_INST, row, inst)
-    t.set(S_REASON, row, reason)
-    t.set(S_LANE, row, lane)
-    this.sRow[lane] = row
+    // The row is taken now (rows stay in order of their start); the rest is written when the span closes.
+    this.sRow[lane] = this.stall.push(c)
     this.sReason[lane] = reason
     this.sInst[lane] = inst
     this.sStart[lane] = c
@@ -216,7 +227,8 @@ export class SpanRecorder {
   }
 
   private closeStall(lane: number): void {
-    this.stall.set(S_LEN, this.sRow[lane] ?? 0, this.sLen[lane] ?? 0)
+    // Columns S_LEN, S_INST, S_REASON, S_LANE.
+    this.stall.setRest(this.sRow[lane] ?? 0, this.sLen[lane] ?? 0, this.sInst[lane] ?? 0, this.sReason[lane] ?? 0, lane, 0)
     this.sReason[lane] = -1
     this.closed += this.laneWeight[lane] ?? 1
   }
@@ -270,11 +282,8 @@ export class SpanRecorder {
   }
 
   private openUse(r: number, c: number, amount: number, inst: number, len: number, writes: number): void {
-    const t = this.usage
-    const row = t.push(c)
-    t.set(U_INST, row, inst)
-    t.set(U_RESOURCE, row, r)
-    this.uRow[r] = row
+    // The row is taken now (rows stay in order of their start); the rest is written when the span closes.
+    this.uRow[r] = this.usage.push(c)
     this.uInst[r] = inst
     this.uAmt[r] = amount
     this.uWr[r] = writes
@@ -283,11 +292,8 @@ export class SpanRecorder {
   }
 
   private closeUse(r: number): void {
-    const row = this.uRow[r] ?? 0
-    const t = this.usage
-    t.set(U_LEN, row, this.uLen[r] ?? 0)
-    t.set(U_AMOUNT, row, this.uAmt[r] ?? 0)
-    t.set(U_WRITES, row, this.uWr[r] ?? 0)
+    // Columns U_LEN, U_INST, U_AMOUNT, U_RESOURCE, U_WRITES.
+    this.usage.setRest(this.uRow[r] ?? 0, this.uLen[r] ?? 0, this.uInst[r] ?? 0, this.uAmt[r] ?? 0, r, this.uWr[r] ?? 0)
     this.uInst[r] = -1
     this.closed += this.useWeight[r] ?? 1
   }
