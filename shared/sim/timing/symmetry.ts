@@ -184,32 +184,46 @@ export function replicate(
     }
   }
   const u = spans.usage
-  let n = 0
-  for (let i = 0; i < u.count; i++) {
-    const j = lane[u.resource[i] ?? 0] ?? -2
-    n += j >= 0 ? (size[j] ?? 0) : 1
+  const uCount = u.count
+  const uResource = u.resource
+  const uStart = u.start
+  const uLength = u.length
+  const uAmount = u.amount
+  const uInst = u.instruction
+  const uWrites = u.writes ?? new Uint32Array(uCount)
+  // Copies of each row: its class's size for a lane resource, 1 for a bus.
+  const copies = new Int32Array(base.length)
+  for (let r = 0; r < base.length; r++) {
+    const j = lane[r] as number
+    copies[r] = j >= 0 ? (size[j] as number) : 1
   }
+  let n = 0
+  for (let i = 0; i < uCount; i++) n += copies[uResource[i] as number] as number
   const resource = new Uint32Array(n)
   const start = new Int32Array(n)
   const length = new Int32Array(n)
   const amount = new Uint16Array(n)
   const instruction = new Int32Array(n)
   const writes = new Uint32Array(n)
-  const w1 = u.writes
-  for (let i = 0, o = 0; i < u.count; i++) {
-    const r = u.resource[i] ?? 0
-    const j = lane[r] ?? -2
-    const id = base[r] ?? 0
-    const a = u.amount[i] ?? 0
-    const c0 = u.start[i] ?? 0
-    const len = u.length[i] ?? 0
-    const inst = u.instruction[i] ?? 0
-    const wr = w1 ? (w1[i] ?? 0) : 0
-    const f = j >= 0 ? (first[j] ?? 0) : 0
-    const e = j >= 0 ? f + (size[j] ?? 0) : 1
-    const step = j >= 0 ? perLane : 0
-    for (let l = f; l < e; l++, o++) {
-      resource[o] = id + l * step
+  // The id of a row's first copy and the step between copies, per timed resource.
+  const firstId = new Int32Array(base.length)
+  const idStep = new Int32Array(base.length)
+  for (let r = 0; r < base.length; r++) {
+    const j = lane[r] as number
+    firstId[r] = (base[r] as number) + (j >= 0 ? (first[j] as number) * perLane : 0)
+    idStep[r] = j >= 0 ? perLane : 0
+  }
+  for (let i = 0, o = 0; i < uCount; i++) {
+    const r = uResource[i] as number
+    const e = o + (copies[r] as number)
+    const st = idStep[r] as number
+    const c0 = uStart[i] as number
+    const len = uLength[i] as number
+    const a = uAmount[i] as number
+    const inst = uInst[i] as number
+    const wr = uWrites[i] as number
+    for (let id = firstId[r] as number; o < e; o++, id += st) {
+      resource[o] = id
       start[o] = c0
       length[o] = len
       amount[o] = a
