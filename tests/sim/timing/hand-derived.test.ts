@@ -13,6 +13,8 @@ import { describe, expect, it } from 'vitest'
 import type { VectorOp } from '../../../shared/sim/exec/stream'
 import { createTimingState, finish, step } from '../../../shared/sim/timing/simulate'
 import { laneTiming } from '../../../shared/sim/trace/types'
+import { runPipeline } from '../../../shared/sim/run'
+import { REDUCTION_CURVE } from '../../sweep/programs'
 import { ampleMachine, buildOp, buildStream, unitLoad } from './factories'
 
 const D = 4
@@ -125,5 +127,25 @@ describe('stepping the engine by hand (createTimingState, step): one vfadd.vv, v
     const { trace } = finish(s)
     expect(trace.cycles).toBe(10)
     expect(laneTiming(trace, 0, 0)).toMatchObject({ readStart: 1, readEnd: 4, execStart: 2, writeStart: 6, writeEnd: 9 })
+  })
+})
+
+describe('reduction accumulators past the FPU latency (model section 8; docs/model.md "Two rules of thumb")', () => {
+  it('8 accumulators take exactly D = 4 cycles more than 4 on a 256-element sum: one more combine level, nothing gained in the fold', () => {
+    // Lane 7 holds 32 elements and takes its first beat in cycle 41. With A >= D no beat waits for its
+    // accumulator, so beats run in 41..72 for A = 4 and A = 8 alike, the unit busy every cycle.
+    // A = 4: partials ready 73..76; the two earliest ready are combined in 74 (ready 78), 76 (80), 80 (84).
+    // A = 8: partials ready 69..76; combines in 73 (77), 74 (78), 75 (79), 76 (80), 78 (82), 80 (84), 84 (88).
+    // The ring, vs1[0] and the write are the same afterwards, so the run is 4 cycles longer.
+    const run = (reductionAccumulators: number) => {
+      const r = runPipeline({ program: REDUCTION_CURVE, machine: { reductionAccumulators } })
+      if (!r.ok) throw new Error(r.error.message)
+      return r.trace
+    }
+    const [four, eight] = [run(4), run(8)]
+    const last = four.instructions.length - 1
+    expect(laneTiming(four, last, 7)).toMatchObject({ execStart: 41, execEnd: 84 })
+    expect(laneTiming(eight, last, 7)).toMatchObject({ execStart: 41, execEnd: 88 })
+    expect(eight.cycles - four.cycles).toBe(D)
   })
 })
