@@ -9,6 +9,7 @@ import { REASON } from '../trace/types'
 import type { Ctx } from './context'
 import type { Inst } from './inst'
 import { LoadInst, MemInst, StoreInst } from './memory'
+import { opClass } from './op-class'
 import { PermutationInst } from './permutation'
 import { OrderedReductionInst, ReductionInst } from './reduction'
 import type { TimingState } from './state'
@@ -24,7 +25,7 @@ function makeInst(ctx: Ctx, op: VectorOp, src: Int32Array[], mask: Int32Array | 
     return op.memory?.isStore || op.unit === 'store' ? new StoreInst(ctx, op, src, mask) : new LoadInst(ctx, op, src, mask)
   }
   if (op.shape === 'ordered-reduction') return new OrderedReductionInst(ctx, op, src, mask)
-  if (op.shape === 'reduction' || (op.shape === 'scalar-result' && /^(vcpop|vfirst)/.test(op.op))) {
+  if (op.shape === 'reduction' || (op.shape === 'scalar-result' && opClass(op.op).maskScalar)) {
     return new ReductionInst(ctx, op, src, mask)
   }
   if (op.shape === 'permutation') return new PermutationInst(ctx, op, src, mask)

@@ -149,3 +149,16 @@ describe('reduction accumulators past the FPU latency (model section 8; docs/mod
     expect(eight.cycles - four.cycles).toBe(D)
   })
 })
+
+describe('carry and borrow outs write a mask (model version 3; RISC-V V 1.0 section 11.4: vmadc and vmsbc write mask registers)', () => {
+  it.each(['vmadc.vv', 'vmsbc.vv'])('%s at SEW 64 writes one word a lane, after its last beat: write at b + 1 + D, cycles b + D + 2', (op) => {
+    // 8 lanes, vl 512: n = 64 elements and b = 64 beats a lane (the ALU takes 64 / SEW = 1 element a beat).
+    // Reads in 1..64, beats in 2..65 (section 5); the destination is 64 mask bits = one word, complete with
+    // the last beat, so it asks for a port at 65 + D with the ALU latency D = 2 and is written then.
+    const alu = 2
+    const b = 64
+    const trace = cyclesOf([buildOp({ op, text: `${op} v3, v1, v2`, unit: 'alu', flopsPerElement: 0, vl: 512 })], { lanes: 8, vlen: 8 * 64 * 64 })
+    for (let l = 0; l < 8; l++) expect(laneTiming(trace, 0, l)).toMatchObject({ readStart: 1, readEnd: b, execStart: 2, writeStart: b + 1 + alu, writeEnd: b + 1 + alu })
+    expect(trace.cycles).toBe(b + alu + 2)
+  })
+})
