@@ -13,10 +13,10 @@
  *   }
  */
 import { opInfo, type OpInfo } from '../isa/table'
-import type { Instruction, Program, SimDiagnostic, SourceLoc } from '../isa/types'
+import { instructionSize, type Instruction, type Program, type SimDiagnostic, type SourceLoc } from '../isa/types'
 import type { Handler, Recorder, VectorEvent } from './handler'
 import { handlerTable } from './handlers'
-import { RETURNED_TO_CALLER } from './scalar'
+import { OUTSIDE_TEXT, RETURNED_TO_CALLER } from './scalar'
 import { ExecFault, Machine, type UnorderedSum } from './machine'
 import type { DynamicStream, VectorOp } from './stream'
 import type { Vtype } from './vtype'
@@ -108,7 +108,6 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   }
   const m = new Machine(options.vlen, program.data, program.dataBase, stackBytes)
   m.unorderedSum = options.fpReductionOrder
-  const code = program.instructions
   const metas: OpInfo[] = []
   const handlers: Handler[] = []
   const vlHistory: number[] = []
@@ -120,7 +119,13 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
     used += bytes
     if (used > memoryLimit) throw new ExecFault('memory-limit', `memory limit exceeded (${memoryLimit} bytes) by ${what}`)
   }
-  const table = handlerTable(program.textBase, {
+  const code = program.instructions
+  // Instructions are 4 or 2 (compressed) bytes: an address's index comes from a table, not a division.
+  const textEnd = code.length ? code[code.length - 1]!.address + instructionSize(code[code.length - 1]!) : program.textBase
+  const indexAt = new Map<number, number>(code.map((ins, i) => [ins.address, i]))
+  indexAt.set(textEnd, code.length)
+  const indexOf = (address: number): number => indexAt.get(address) ?? (address >= program.textBase && address < textEnd ? -1 : OUTSIDE_TEXT)
+  const table = handlerTable(indexOf, {
     write: (bytes) => {
       charge(bytes.length, 'the program output')
       outputChunks.push(bytes.slice())
@@ -187,8 +192,8 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   let steps = 0
   let ended: ExecuteSuccess['ended'] = 'end-of-text'
   // _start when the program defines it, else its first instruction.
-  index = program.entry === undefined ? 0 : (program.entry - program.textBase) / 4
-  if (!(Number.isInteger(index) && index >= 0 && index <= code.length)) return failure('jump-range', `the entry point 0x${(program.entry ?? 0).toString(16)} is not an instruction of the program`)
+  index = program.entry === undefined ? 0 : indexOf(program.entry)
+  if (index < 0) return failure('jump-range', `the entry point 0x${(program.entry ?? 0).toString(16)} is not an instruction of the program`)
   try {
     while (index < code.length) {
       if (steps === stepLimit) {
@@ -209,10 +214,8 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
         ended = 'return'
         break
       }
-      if (m.next < 0 || m.next > code.length) {
-        const target = program.textBase + 4 * m.next
-        const end = program.textBase + 4 * code.length
-        return failure('jump-range', `${ins.op} jumps outside the program, to address 0x${target.toString(16)} (the text is 0x${program.textBase.toString(16)}..0x${(end - 1).toString(16)})`, ins.loc, index)
+      if (m.next === OUTSIDE_TEXT) {
+        return failure('jump-range', `${ins.op} jumps outside the program, to address 0x${m.jumpTarget.toString(16)} (the text is 0x${program.textBase.toString(16)}..0x${(textEnd - 1).toString(16)})`, ins.loc, index)
       }
       index = m.next
     }

@@ -70,6 +70,8 @@ export class Machine {
 
   /** Index of the next static instruction; handlers of jumps and branches set it. */
   next = 0
+  /** The address of the last jump or taken branch (named when it leaves the text). */
+  jumpTarget = 0
   /** Set by the exit system call. */
   exitCode: number | null = null
   /** Summation order of vfredusum; undefined means element order (as QEMU). */

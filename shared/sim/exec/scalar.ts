@@ -5,7 +5,7 @@
  * sign-extend (unprivileged ISA, "RV64I Base Integer Instruction Set").
  * F and D are in scalarfp.ts.
  */
-import type { Instruction } from '../isa/types'
+import { instructionSize, type Instruction } from '../isa/types'
 import type { Handler } from './handler'
 import { operand } from './handler'
 import { ExecFault, Machine } from './machine'
@@ -34,15 +34,25 @@ function regImm(fn: Binary): Handler {
  */
 export const RETURNED_TO_CALLER = -1
 
-function jumpTo(m: Machine, textBase: number, target: number): void {
-  if ((target - textBase) % 4 !== 0) throw new ExecFault('misaligned', `jump target 0x${target.toString(16)} is not 4-byte aligned`)
-  m.next = (target - textBase) / 4
+/**
+ * Index of the instruction at an address: -1 inside the text but not at an
+ * instruction's first byte, OUTSIDE_TEXT beyond it. Instructions are 4 or 2
+ * (compressed) bytes long, so targets are looked up, not divided.
+ */
+export type IndexOf = (address: number) => number
+export const OUTSIDE_TEXT = -2
+
+function jumpTo(m: Machine, indexOf: IndexOf, target: number): void {
+  const i = indexOf(target)
+  if (i === -1) throw new ExecFault('misaligned', `jump target 0x${target.toString(16)} is not the first byte of an instruction`)
+  m.next = i
+  m.jumpTarget = target
 }
 
 type Cond = (a: bigint, b: bigint) => boolean
-function branch(cond: Cond, textBase: number): Handler {
+function branch(cond: Cond, indexOf: IndexOf): Handler {
   return (m, ins) => {
-    if (cond(rs1(m, ins), rs2(m, ins))) jumpTo(m, textBase, ins.address + operand(ins, 'imm'))
+    if (cond(rs1(m, ins), rs2(m, ins))) jumpTo(m, indexOf, ins.address + operand(ins, 'imm'))
   }
 }
 
@@ -188,7 +198,7 @@ function ecall(sys: Syscalls): Handler {
   }
 }
 
-export function scalarHandlers(textBase: number, sys: Syscalls): Record<string, Handler> {
+export function scalarHandlers(indexOf: IndexOf, sys: Syscalls): Record<string, Handler> {
   return {
     // lui/auipc: imm is the 20-bit field; the shifted value is sign-extended from 32 bits (RV64I).
     lui: (m, ins) => m.setX(ins.operands.rd, BigInt.asIntN(32, imm(ins) << 12n)),
@@ -234,21 +244,21 @@ export function scalarHandlers(textBase: number, sys: Syscalls): Record<string, 
     divuw: regReg(word(div, false)),
     remw: regReg(word(rem)),
     remuw: regReg(word(rem, false)),
-    beq: branch((a, b) => a === b, textBase),
-    bne: branch((a, b) => a !== b, textBase),
-    blt: branch((a, b) => a < b, textBase),
-    bge: branch((a, b) => a >= b, textBase),
-    bltu: branch((a, b) => u64(a) < u64(b), textBase),
-    bgeu: branch((a, b) => u64(a) >= u64(b), textBase),
+    beq: branch((a, b) => a === b, indexOf),
+    bne: branch((a, b) => a !== b, indexOf),
+    blt: branch((a, b) => a < b, indexOf),
+    bge: branch((a, b) => a >= b, indexOf),
+    bltu: branch((a, b) => u64(a) < u64(b), indexOf),
+    bgeu: branch((a, b) => u64(a) >= u64(b), indexOf),
     jal: (m, ins) => {
-      m.setX(ins.operands.rd, BigInt(ins.address + 4))
-      jumpTo(m, textBase, ins.address + operand(ins, 'imm'))
+      m.setX(ins.operands.rd, BigInt(ins.address + instructionSize(ins)))
+      jumpTo(m, indexOf, ins.address + operand(ins, 'imm'))
     },
     jalr: (m, ins) => {
       const target = Number(BigInt.asUintN(64, rs1(m, ins) + imm(ins)) & ~1n)
-      m.setX(ins.operands.rd, BigInt(ins.address + 4))
+      m.setX(ins.operands.rd, BigInt(ins.address + instructionSize(ins)))
       if (target === 0) m.next = RETURNED_TO_CALLER
-      else jumpTo(m, textBase, target)
+      else jumpTo(m, indexOf, target)
     },
     lb: load(1, true),
     lh: load(2, true),
