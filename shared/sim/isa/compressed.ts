@@ -81,7 +81,7 @@ export const C_FORMS: readonly CForm[] = [
   { name: 'c.addiw', op: 'addiw', match: Q(1, 1), mask: F3, regs: [{ ...rdFull, nonzero: true }], imm: { scatter: imm6, signed: true }, rs1IsRd: true, syntax: ['rd', 'imm'] },
   { name: 'c.li', op: 'addi', match: Q(1, 2), mask: F3, regs: [rdFull], imm: { scatter: imm6, signed: true }, fixed: { rs1: 0 }, syntax: ['rd', 'imm'] },
   { name: 'c.addi16sp', op: 'addi', match: Q(1, 3) | (2 << 7), mask: F3 | (0x1f << 7), regs: [], imm: { scatter: [[9, 9, 12], [4, 4, 6], [6, 6, 5], [8, 7, 3], [5, 5, 2]], signed: true, nonzero: true }, fixed: { rd: 2, rs1: 2 }, syntax: ['sp', 'imm'] },
-  { name: 'c.lui', op: 'lui', match: Q(1, 3), mask: F3, regs: [{ ...rdFull, nonzero: true, not2: true }], imm: { scatter: [[17, 17, 12], [16, 12, 2]], signed: true, nonzero: true }, lui: true, syntax: ['rd', 'imm'] },
+  { name: 'c.lui', op: 'lui', match: Q(1, 3), mask: F3, regs: [{ ...rdFull, not2: true }], imm: { scatter: [[17, 17, 12], [16, 12, 2]], signed: true, nonzero: true }, lui: true, syntax: ['rd', 'imm'] },
   { name: 'c.srli', op: 'srli', match: 0x8001, mask: 0xec03, regs: [rdP7], imm: { scatter: imm6, signed: false }, rs1IsRd: true, syntax: ['rd', 'imm'] },
   { name: 'c.srai', op: 'srai', match: 0x8401, mask: 0xec03, regs: [rdP7], imm: { scatter: imm6, signed: false }, rs1IsRd: true, syntax: ['rd', 'imm'] },
   { name: 'c.andi', op: 'andi', match: 0x8801, mask: 0xec03, regs: [rdP7], imm: { scatter: imm6, signed: true }, rs1IsRd: true, syntax: ['rd', 'imm'] },
