@@ -1,6 +1,6 @@
 /**
  * Functional execution of an assembled Program: runs it instruction by
- * instruction on a Machine and returns the final architectural state, what it
+ * instruction on an ArchState (the hart's architectural state) and returns the final architectural state, what it
  * printed and the dynamic instruction stream for the timing model. It never
  * throws: problems come back as a diagnostic at the instruction's line and
  * column.
@@ -14,10 +14,10 @@
  */
 import { opInfo, type OpInfo } from '../isa/table'
 import { instructionSize, type Instruction, type Program, type SimDiagnostic, type SourceLoc } from '../isa/types'
-import type { Handler, Recorder, VectorEvent } from './handler'
+import type { Handler, StreamSink, VectorEvent } from './handler'
 import { handlerTable } from './handlers'
 import { OUTSIDE_TEXT, RETURNED_TO_CALLER } from './scalar'
-import { ExecFault, Machine, type UnorderedSum } from './machine'
+import { ExecFault, ArchState, type UnorderedSum } from './machine'
 import type { DynamicStream, VectorOp } from './stream'
 import type { Vtype } from './vtype'
 import { isValidVlen } from './vtype'
@@ -106,7 +106,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   if (program.data.length + stackBytes > memoryLimit) {
     return failure('memory-limit', `memory limit exceeded: the data segment (${program.data.length} bytes) and the stack (${stackBytes} bytes) need more than the limit of ${memoryLimit}`)
   }
-  const m = new Machine(options.vlen, program.data, program.dataBase, stackBytes)
+  const m = new ArchState(options.vlen, program.data, program.dataBase, stackBytes)
   m.unorderedSum = options.fpReductionOrder
   const metas: OpInfo[] = []
   const handlers: Handler[] = []
@@ -147,7 +147,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   const ops: VectorOp[] = []
   let scalarSince = 0
   let index = 0
-  const recorder: Recorder = {
+  const sink: StreamSink = {
     on: options.recordStream !== false,
     vector(ins: Instruction, ev: VectorEvent) {
       const info = metas[index]!
@@ -204,7 +204,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
       steps++
       m.retired = steps - 1
       m.next = index + 1
-      handlers[index]!(m, ins, recorder)
+      handlers[index]!(m, ins, sink)
       if (!metas[index]!.vector) scalarSince++
       if (m.exitCode !== null) {
         ended = 'exit'

@@ -41,7 +41,8 @@ export type IntView = Int8Array | Int16Array | Int32Array | Uint8Array | Uint16A
 // defined little-endian, which every platform this runs on is.
 if (new Uint8Array(new Uint16Array([1]).buffer)[0] !== 1) throw new Error('Chimeline needs a little-endian platform')
 
-export class Machine {
+/** The hart's architectural state (not the machine configuration of shared/schemas/machine.ts, which the timing model reads). */
+export class ArchState {
   readonly vlenb: number
   readonly x = new BigInt64Array(32)
   readonly xu = new BigUint64Array(this.x.buffer)

@@ -8,11 +8,11 @@
 import { instructionSize, type Instruction } from '../isa/types'
 import type { Handler } from './handler'
 import { operand } from './handler'
-import { ExecFault, Machine } from './machine'
+import { ExecFault, ArchState } from './machine'
 import { scalarFpHandlers } from './scalarfp'
 
-const rs1 = (m: Machine, ins: Instruction): bigint => m.x[operand(ins, 'rs1')]!
-const rs2 = (m: Machine, ins: Instruction): bigint => m.x[operand(ins, 'rs2')]!
+const rs1 = (m: ArchState, ins: Instruction): bigint => m.x[operand(ins, 'rs1')]!
+const rs2 = (m: ArchState, ins: Instruction): bigint => m.x[operand(ins, 'rs2')]!
 const imm = (ins: Instruction): bigint => BigInt(operand(ins, 'imm'))
 const shamt = (b: bigint): bigint => BigInt.asUintN(64, b) & 63n
 const u64 = (v: bigint): bigint => BigInt.asUintN(64, v)
@@ -42,7 +42,7 @@ export const RETURNED_TO_CALLER = -1
 export type IndexOf = (address: number) => number
 export const OUTSIDE_TEXT = -2
 
-function jumpTo(m: Machine, indexOf: IndexOf, target: number): void {
+function jumpTo(m: ArchState, indexOf: IndexOf, target: number): void {
   const i = indexOf(target)
   if (i === -1) throw new ExecFault('misaligned', `jump target 0x${target.toString(16)} is not the first byte of an instruction`)
   m.next = i
@@ -59,7 +59,7 @@ function branch(cond: Cond, indexOf: IndexOf): Handler {
 /** Loads of 1, 2, 4 or 8 bytes, sign- or zero-extended. */
 function load(width: 1 | 2 | 4 | 8, signed: boolean): Handler {
   return (m, ins) => {
-    const off = m.offset(Machine.address(rs1(m, ins), imm(ins)), width)
+    const off = m.offset(ArchState.address(rs1(m, ins), imm(ins)), width)
     const v = m.mem
     const value = width === 8 ? v.getBigInt64(off, true)
       : width === 4 ? BigInt(signed ? v.getInt32(off, true) : v.getUint32(off, true))
@@ -71,7 +71,7 @@ function load(width: 1 | 2 | 4 | 8, signed: boolean): Handler {
 
 function store(width: 1 | 2 | 4 | 8): Handler {
   return (m, ins) => {
-    const off = m.offset(Machine.address(rs1(m, ins), imm(ins)), width)
+    const off = m.offset(ArchState.address(rs1(m, ins), imm(ins)), width)
     const value = rs2(m, ins)
     if (width === 8) m.mem.setBigInt64(off, value, true)
     else if (width === 4) m.mem.setInt32(off, Number(BigInt.asIntN(32, value)), true)
@@ -123,7 +123,7 @@ const AMOS: Record<string, (o: bigint, v: bigint, w: 4 | 8) => bigint> = {
 }
 
 /** Reads a CSR (privileged spec CSR listing; V 1.0 section 3 for vcsr = vxrm << 1 | vxsat). */
-function readCsr(m: Machine, csr: number): bigint {
+function readCsr(m: ArchState, csr: number): bigint {
   switch (csr) {
     case 0x001: return BigInt(m.fflags)
     case 0x002: return BigInt(m.frm)
@@ -140,7 +140,7 @@ function readCsr(m: Machine, csr: number): bigint {
   }
 }
 
-function writeCsr(m: Machine, csr: number, v: bigint): void {
+function writeCsr(m: ArchState, csr: number, v: bigint): void {
   const n = Number(BigInt.asUintN(32, v))
   switch (csr) {
     case 0x001: m.fflags = n & 0x1f; return

@@ -15,24 +15,24 @@ import {
 } from './fp'
 import type { Handler } from './handler'
 import { operand } from './handler'
-import { ExecFault, Machine } from './machine'
+import { ExecFault, ArchState } from './machine'
 
 type Width = 's' | 'd'
 const FMT: Record<Width, FloatFormat> = { s: BINARY32, d: BINARY64 }
 
 /** The rounding mode an instruction uses: its rm field, or frm for dyn (reserved values fault, as on hardware). */
-export function roundingMode(m: Machine, ins: Instruction): RoundingMode {
+export function roundingMode(m: ArchState, ins: Instruction): RoundingMode {
   const rm = ins.operands.rm ?? 7
   const mode = rm === 7 ? m.frm : rm
   if (mode > 4) throw new ExecFault('rounding-mode', `${ins.op}: rounding mode ${mode} is reserved (frm = ${m.frm}); use rne, rtz, rdn, rup or rmm`)
   return mode as RoundingMode
 }
 
-function get(m: Machine, w: Width, r: number): number {
+function get(m: ArchState, w: Width, r: number): number {
   return w === 'd' ? m.f[r]! : m.f32Operand(r)
 }
 
-function put(m: Machine, w: Width, rd: number, value: number): void {
+function put(m: ArchState, w: Width, rd: number, value: number): void {
   if (w === 'd') {
     if (value !== value) m.fBits[rd] = CANONICAL_NAN64
     else m.f[rd] = value
@@ -126,7 +126,7 @@ function fromInt(w: Width, kind: keyof typeof INT_KINDS): Handler {
 
 function fload(w: Width): Handler {
   return (m, ins) => {
-    const off = m.offset(Machine.address(m.x[operand(ins, 'rs1')]!, operand(ins, 'imm')), w === 'd' ? 8 : 4)
+    const off = m.offset(ArchState.address(m.x[operand(ins, 'rs1')]!, operand(ins, 'imm')), w === 'd' ? 8 : 4)
     if (w === 'd') m.fBits[operand(ins, 'rd')] = m.mem.getBigUint64(off, true)
     else m.setF32Bits(operand(ins, 'rd'), m.mem.getUint32(off, true))
   }
@@ -134,7 +134,7 @@ function fload(w: Width): Handler {
 
 function fstore(w: Width): Handler {
   return (m, ins) => {
-    const off = m.offset(Machine.address(m.x[operand(ins, 'rs1')]!, operand(ins, 'imm')), w === 'd' ? 8 : 4)
+    const off = m.offset(ArchState.address(m.x[operand(ins, 'rs1')]!, operand(ins, 'imm')), w === 'd' ? 8 : 4)
     if (w === 'd') m.mem.setBigUint64(off, m.fBits[operand(ins, 'rs2')]!, true)
     else m.mem.setUint32(off, m.fWords[2 * operand(ins, 'rs2')]!, true)
   }

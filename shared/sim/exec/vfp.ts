@@ -6,7 +6,7 @@ import type { Instruction } from '../isa/types'
 import { BINARY32, BINARY64, floatToInt, type FloatFormat, fusedMultiplyAdd as fma, maximumNumber, minimumNumber } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireFpSew } from './handler'
-import { checkGroup, type Machine, regGroup } from './machine'
+import { checkGroup, type ArchState, regGroup } from './machine'
 import { copyOrMerge, writeMaskBits } from './vint'
 
 type Form = 'vv' | 'vf'
@@ -44,12 +44,12 @@ const FP_OPS: Record<string, FpDef> = {
 }
 
 /** The f[rs1] operand at SEW (binary32 values must be NaN-boxed). */
-function fScalar(m: Machine, ins: Instruction, sew: 32 | 64): number {
+function fScalar(m: ArchState, ins: Instruction, sew: 32 | 64): number {
   const rs1 = operand(ins, 'rs1')
   return sew === 64 ? m.f[rs1]! : m.f32Operand(rs1)
 }
 
-function fScalarBits(m: Machine, ins: Instruction, sew: 32 | 64): bigint {
+function fScalarBits(m: ArchState, ins: Instruction, sew: 32 | 64): bigint {
   const rs1 = operand(ins, 'rs1')
   return sew === 64 ? m.fBits[rs1]! : BigInt(m.f32OperandBits(rs1))
 }
@@ -85,7 +85,7 @@ function fpOp(def: FpDef, form: Form): Handler {
 }
 
 /** Element-wise unary operation on vs2, with integer or FP views chosen by the caller. */
-function unaryOp(body: (m: Machine, sew: 32 | 64, d: number, s2: number, i: number) => void): Handler {
+function unaryOp(body: (m: ArchState, sew: 32 | 64, d: number, s2: number, i: number) => void): Handler {
   return (m, ins, rec) => {
     const sew = requireFpSew(m, ins)
     const lmul = m.vtype.lmul
