@@ -24,7 +24,7 @@ import { promisify } from 'node:util'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { assemble } from '../../../shared/sim/isa/assembler'
 import { decodeAt } from '../../../shared/sim/isa/decoder'
-import { WHOLE_EXECUTABLE } from '../../../server/services/elf/program'
+import { executableToAssembly, WHOLE_EXECUTABLE } from '../../../server/services/elf/program'
 import { readElf } from '../../../server/services/elf/reader'
 import { uploadWork } from '../../../server/services/uploads'
 import type { UploadFields } from '../../../shared/schemas/upload'
@@ -193,6 +193,21 @@ describe.skipIf(absent.length > 0)('C kernels compiled by clang-16: Chimeline ru
     const smallData = assemble(text, { maxDataBytes: 1024 })
     expect(!smallData.ok && smallData.errors[0]?.code).toBe('data-too-large')
     const steps = execute(full.program, { vlen: 128, stepLimit: 1000 })
+    expect(!steps.ok && steps.error).toMatchObject({ code: 'step-limit' })
+    expect(!steps.ok && steps.error.line).toBeGreaterThan(0)
+  })
+
+  it('keeps the limits on a linked executable: instructions and data span at import, steps when it runs', async () => {
+    const elf = readElf(built.get('daxpy')!.elf)
+    expect(() => executableToAssembly(elf, 'daxpy', 10)).toThrow('.text has more than 10 instructions; the limit is 10')
+    // The same object linked with .bss 32 MiB above .sdata (ld -Tbss): the data span exceeds the 16 MiB data limit.
+    const far = join(dir, 'daxpy-far')
+    await run('riscv64-linux-gnu-ld', ['--no-relax', '-Tbss=0x2100000', join(dir, 'daxpy.o'), '-o', far])
+    expect(() => executableToAssembly(readElf(readFileSync(far)), 'daxpy-far', 1000)).toThrow(/^the data spans \d+ bytes \(0x[0-9a-f]+\.\.0x[0-9a-f]+\); the limit is 16777216$/)
+    const text = importedProgram('daxpy.elf', built.get('daxpy')!.elf, { kind: 'elf', function: WHOLE_EXECUTABLE })
+    const program = assemble(text)
+    if (!program.ok) throw new Error('the import does not assemble')
+    const steps = execute(program.program, { vlen: 128, stepLimit: 1000 })
     expect(!steps.ok && steps.error).toMatchObject({ code: 'step-limit' })
     expect(!steps.ok && steps.error.line).toBeGreaterThan(0)
   })
