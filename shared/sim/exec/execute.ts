@@ -108,6 +108,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   }
   const m = new ArchState(options.vlen, program.data, program.dataBase, stackBytes)
   m.unorderedSum = options.fpReductionOrder
+  m.readsFpFlags = program.instructions.some((ins) => ins.op.startsWith('csrr') && (ins.operands.csr === 1 || ins.operands.csr === 3))
   const metas: OpInfo[] = []
   const handlers: Handler[] = []
   const vlHistory: number[] = []

@@ -78,7 +78,13 @@ export class ArchState {
   /** Summation order of vfredusum; undefined means element order (as QEMU). */
   unorderedSum: UnorderedSum | undefined
 
-  /** Floating-point CSR fields: frm (dynamic rounding mode) and fflags (accrued exceptions, written by csr* only). */
+  /**
+   * Whether the program can read fflags (a Zicsr instruction names fflags or
+   * fcsr): vector FP instructions work out their exception flags only then,
+   * as that takes an exact computation per element.
+   */
+  readsFpFlags = false
+  /** Floating-point CSR fields: frm (dynamic rounding mode) and fflags (accrued exceptions). */
   frm = 0
   fflags = 0
   /** Fixed-point CSR fields (V 1.0 section 3.8, 3.9): rounding mode and saturation flag. */
