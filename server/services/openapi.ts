@@ -61,7 +61,7 @@ export const DOCUMENTED_ROUTES: DocumentedRoute[] = [
   { method: 'post', path: '/api/invitations/accept', summary: 'Accept an invitation token', access: 'signed in', body: ws.acceptInvitationBodySchema, ok: 200, response: ws.workspaceResponseSchema },
   { method: 'get', path: '/api/admin/outbox', summary: 'Messages the local SMTP sink received', access: 'site admin', ok: 200, response: outboxResponseSchema },
 
-  { method: 'get', path: '/api/workspaces/:id/sweeps', summary: "The workspace's sweeps, newest first (200 at most), with points done", access: 'member', ok: 200, response: sw.sweepListResponseSchema },
+  { method: 'get', path: '/api/workspaces/:id/sweeps', summary: "The workspace's sweeps, newest first (200 at most), with points done; ?scenarioId= one scenario's, with their version numbers", access: 'member', ok: 200, response: sw.sweepListResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/sweeps', summary: 'Save a browser sweep with its points, or queue a server sweep for the workers (429 past the workspace limits)', access: 'owner, editor', body: sw.createSweepBodySchema, ok: 201, response: sw.sweepCreatedResponseSchema },
   { method: 'get', path: '/api/workspaces/:id/sweeps/:sweepId', summary: 'One sweep: definition, progress and the points done (poll while it runs)', access: 'member', ok: 200, response: sw.sweepResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/sweeps/:sweepId/cancel', summary: 'Cancel a queued or running server sweep; the points done are kept', access: 'owner, editor', ok: 200, response: sw.sweepCreatedResponseSchema },

@@ -57,6 +57,13 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Sweep', requiresAuth: true },
   },
   {
+    // Side by side: both runs and the view are in the query (src/lib/compare/url.ts).
+    path: '/compare',
+    name: 'compare',
+    component: () => import('@/views/CompareView.vue'),
+    meta: { title: 'Side by side', requiresAuth: true },
+  },
+  {
     path: '/learn',
     name: 'learn',
     component: () => import('@/views/LearnView.vue'),
