@@ -13,7 +13,7 @@
 import fs from 'node:fs'
 import path from 'node:path'
 import type { Expectation } from '../../shared/schemas/expectation'
-import { scenarioContentSchema } from '../../shared/schemas/scenario'
+import { scenarioContentSchema, type ScenarioContent } from '../../shared/schemas/scenario'
 import type { AppContext } from '../context'
 import { projectRoot } from '../db/cluster'
 import { Scenario, Suite, type User, type Workspace } from '../models'
@@ -144,6 +144,18 @@ export const KERNELS: readonly Kernel[] = [
   },
 ]
 
+/** A kernel's scenario content, as the demo seeds it. */
+export function kernelContent(k: Kernel): ScenarioContent {
+  const program = fs.readFileSync(path.join(projectRoot, 'examples', k.file), 'utf8')
+  return scenarioContentSchema.parse({
+    title: k.title,
+    description: `A kernel of the demo suite "${KERNEL_SUITE_TITLE}" (\`examples/${k.file}\`); its expectations hold on the default machine.\n\n_Results are model estimates, not sign-off for silicon._`,
+    tags: ['kernel', ...k.tags],
+    program,
+    expectations: k.expectations,
+  })
+}
+
 export async function seedKernelSuite(ctx: AppContext, workspace: Workspace, author: User): Promise<{ created: number }> {
   const existing = new Map((await Scenario.findAll({ where: { workspaceId: workspace.id }, paranoid: false, attributes: ['id', 'title'] })).map((s) => [s.title, s.id]))
   let created = 0
@@ -151,15 +163,7 @@ export async function seedKernelSuite(ctx: AppContext, workspace: Workspace, aut
   for (const k of KERNELS) {
     let id = existing.get(k.title)
     if (!id) {
-      const program = fs.readFileSync(path.join(projectRoot, 'examples', k.file), 'utf8')
-      const content = scenarioContentSchema.parse({
-        title: k.title,
-        description: `A kernel of the demo suite "${KERNEL_SUITE_TITLE}" (\`examples/${k.file}\`); its expectations hold on the default machine.\n\n_Results are model estimates, not sign-off for silicon._`,
-        tags: ['kernel', ...k.tags],
-        program,
-        expectations: k.expectations,
-      })
-      id = (await createScenario(ctx, author, workspace.id, { content, message: 'The kernel with its expectations on the default machine' })).id
+      id = (await createScenario(ctx, author, workspace.id, { content: kernelContent(k), message: 'The kernel with its expectations on the default machine' })).id
       created++
     }
     ids.push(id)

@@ -100,7 +100,9 @@ export function reportCsv(r: Report): string {
 /** A Markdown table (the README's figure and `chimeline report --format md`). */
 export function reportMarkdown(r: Report): string {
   const cols = ['kernel', ...r.machines.flatMap((m) => [`${m}: cycles`, 'flops/cycle', 'of peak', 'bytes/cycle', 'lane busy', 'top two stalls', 'bound']), ...(r.machines.length === 2 ? ['ratio'] : [])]
-  const out = [`| ${cols.join(' | ')} |`, `| ${cols.map((_, i) => (i === 0 ? '---' : '---:')).join(' | ')} |`]
+  // Numbers right-aligned; the kernel, the stalls and the bound are words.
+  const align = cols.map((c, i) => (i === 0 || c === 'top two stalls' || c === 'bound' ? '---' : '---:'))
+  const out = [`| ${cols.join(' | ')} |`, `| ${align.join(' | ')} |`]
   for (const row of r.rows) {
     const cells = row.cells.flatMap((c) => (c ? [String(c.cycles), c.flopsPerCycle.toFixed(2), c.fractionOfPeak.toFixed(3), c.bytesPerCycle.toFixed(1), c.laneBusyMean.toFixed(2), [stallText(c, 0), stallText(c, 1)].filter(Boolean).join(', ') || 'none', c.bound] : ['failed', '', '', '', '', '', '']))
     out.push(`| ${[row.title, ...cells, ...(r.machines.length === 2 ? [row.ratio === null ? '' : row.ratio.toFixed(2)] : [])].join(' | ')} |`)
