@@ -58,3 +58,15 @@ export function runSuiteScenarios(scenarios: SuiteScenario[], presetId: string |
   const failed = all.filter((r) => !r.pass).length
   return { entries, passed: all.length - failed, failed, red: failed > 0 || entries.some((e) => e.status === 'missing') }
 }
+
+/** Claims whose verdict differs between two runs' entries, in the newer run's order (`title › claim: pass -> FAIL`). */
+export function changedVerdicts(before: SuiteRunEntry[], after: SuiteRunEntry[]): string[] {
+  const old = new Map(before.flatMap((e) => e.results.map((r) => [`${e.scenarioId}\n${r.text}`, r.pass] as const)))
+  const word = (pass: boolean) => (pass ? 'pass' : 'FAIL')
+  return after.flatMap((e) =>
+    e.results.flatMap((r) => {
+      const was = old.get(`${e.scenarioId}\n${r.text}`)
+      return was === undefined || was === r.pass ? [] : [`${e.title} › ${r.text}: ${word(was)} -> ${word(r.pass)}`]
+    }),
+  )
+}

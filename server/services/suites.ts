@@ -21,6 +21,7 @@ import type { AppContext } from '../context'
 import { ApiError, errors } from '../http/errors'
 import { Membership, Scenario, Suite, SuiteRun, User } from '../models'
 import { exportBundle } from './scenario-bundles'
+import { changedVerdicts } from './suite-runner'
 
 export function runSummary(r: SuiteRun): SuiteRunSummary {
   return {
@@ -162,5 +163,7 @@ export async function getRun(workspaceId: string, id: string, runId: string): Pr
   const s = await findSuite(workspaceId, id)
   const r = await SuiteRun.findOne({ where: { id: runId, suiteId: s.id }, ...withStarter })
   if (!r) throw errors.notFound('suite run')
-  return { ...runSummary(r), suiteTitle: s.title, entries: r.entries }
+  const before = await SuiteRun.findOne({ where: { suiteId: s.id, createdAt: { [Op.lt]: r.createdAt }, status: { [Op.in]: ['passed', 'failed'] } }, order: [['createdAt', 'DESC']] })
+  const previous = before ? { id: before.id, modelVersion: before.modelVersion, presetId: before.presetId, changed: changedVerdicts(before.entries, r.entries) } : null
+  return { ...runSummary(r), suiteTitle: s.title, entries: r.entries, previous }
 }

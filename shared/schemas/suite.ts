@@ -119,7 +119,19 @@ export const suiteRunSummarySchema = z.object({
 })
 export type SuiteRunSummary = z.output<typeof suiteRunSummarySchema>
 
-export const suiteRunSchema = suiteRunSummarySchema.extend({ suiteTitle: z.string(), entries: z.array(suiteRunEntrySchema) })
+/**
+ * What changed since the suite's previous finished run: its model version and
+ * machine, and each claim whose verdict flipped (`title › claim: pass -> FAIL`),
+ * so a change of results can be traced to a model or machine change.
+ */
+export const suiteRunPreviousSchema = z.object({
+  id: z.string(),
+  modelVersion: z.number().int().nullable(),
+  presetId: z.string().nullable(),
+  changed: z.array(z.string()),
+})
+
+export const suiteRunSchema = suiteRunSummarySchema.extend({ suiteTitle: z.string(), entries: z.array(suiteRunEntrySchema), previous: suiteRunPreviousSchema.nullable() })
 export type SuiteRun = z.output<typeof suiteRunSchema>
 
 export const suiteSchema = z.object({

@@ -105,6 +105,8 @@ describe('suites', () => {
     const failing = run.entries[0]?.results.find((r) => !r.pass)
     expect(failing).toMatchObject({ text: 'cycles <= 16', measured: '24' })
     expect(failing?.at?.cycle).toBe(23)
+    // Against the run before (default machine): exactly this claim flipped, with the machine as the change.
+    expect(run.previous).toMatchObject({ presetId: null, modelVersion: MODEL_VERSION, changed: ['One vfadd › cycles <= 16: pass -> FAIL'] })
 
     const mail = await waitForMail(team.viewer.user.email, since, 10_000)
     expect(mail.subject).toBe('Suite "Adds": 1 expectation(s) failing')
@@ -135,6 +137,7 @@ describe('suites', () => {
     expect(bumped.modelVersion).toBe(MODEL_VERSION + 1)
     expect(bumped.status).toBe('passed')
     expect(verdictsOf(bumped)).toEqual(verdictsOf(previous))
+    expect(bumped.previous).toMatchObject({ modelVersion: MODEL_VERSION, changed: [] })
     // A retried job finds the run finished and writes nothing again.
     await runSuiteJob({ config: runtime.ctx.config, sequelize: runtime.ctx.sequelize, mailer: runtime.ctx.mailer, logger: runtime.ctx.logger, modelVersion: 99 }, { runId: row.id })
     expect((await SuiteRunRow.findByPk(row.id))?.modelVersion).toBe(MODEL_VERSION + 1)
