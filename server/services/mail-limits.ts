@@ -1,6 +1,6 @@
 /**
  * Limits on what an account can make the server e-mail (share links,
- * invitations): recipients per message, and messages per hour and per day,
+ * invitations, red suite runs it started): recipients per message, and messages per hour and per day,
  * stricter for accounts younger than `newAccountDays`. A self-signed-up
  * account once sent 341 messages in 38 s with text of its choosing; now a
  * request over a limit sends nothing and answers 429 with Retry-After (or 400
@@ -35,7 +35,7 @@ const DAY_MS = 24 * HOUR_MS
  * Records that `user` sends `recipients` messages of this kind, or throws
  * without recording. Call it before sending anything.
  */
-export async function reserveMail(ctx: AppContext, user: User, kind: MailSend['kind'], recipients: number): Promise<void> {
+export async function reserveMail(ctx: Pick<AppContext, 'config' | 'sequelize'>, user: User, kind: MailSend['kind'], recipients: number): Promise<void> {
   const limits = ctx.config.mailLimits
   if (!limits.enabled) return
   const young = Date.now() - user.createdAt.getTime() < limits.newAccountDays * DAY_MS

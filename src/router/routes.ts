@@ -64,6 +64,26 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Side by side', requiresAuth: true },
   },
   {
+    path: '/suites',
+    name: 'suites',
+    component: () => import('@/views/SuitesView.vue'),
+    meta: { title: 'Suites', requiresAuth: true },
+  },
+  {
+    path: '/suites/:id',
+    name: 'suite',
+    component: () => import('@/views/SuiteView.vue'),
+    props: true,
+    meta: { title: 'Suite', requiresAuth: true },
+  },
+  {
+    path: '/suites/:id/report',
+    name: 'suite-report',
+    component: () => import('@/views/ReportView.vue'),
+    props: true,
+    meta: { title: 'Characterisation report', requiresAuth: true },
+  },
+  {
     path: '/learn',
     name: 'learn',
     component: () => import('@/views/LearnView.vue'),
