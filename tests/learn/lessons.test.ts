@@ -13,6 +13,7 @@
 import { describe, expect, it } from 'vitest'
 import { evaluateExpectations } from '../../shared/expectations/evaluate'
 import { LESSONS, lessonById, questionCount } from '../../shared/learn'
+import { lessonContent } from '../../shared/learn/content'
 import type { Lesson } from '../../shared/learn/lesson'
 import { runPipeline, type RunResult } from '../../shared/sim/run'
 import { laneTiming, type TimingTrace } from '../../shared/sim/trace/types'
@@ -98,6 +99,13 @@ describe('Learn lessons: five, each on its own scenario, each ending with a ques
           const t = laneTiming(trace, position(trace, load.instruction), load.lane)
           expect({ elements: t.elements, beats: t.beats }, `#${load.instruction} lane ${load.lane}`).toEqual({ elements: load.elements, beats: load.beats })
         }
+      })
+
+      it('as scenario content (what the Bench plays), its expectations are the steps\' checks and all pass', () => {
+        const content = lessonContent(lesson)
+        expect(content.expectations.length).toBeGreaterThan(0)
+        const played = runPipeline({ program: content.program, machine: content.machine })
+        expect(failures(evaluateExpectations(content.expectations, played))).toEqual([])
       })
 
       for (const x of lesson.experiments) {
