@@ -88,6 +88,7 @@ export const lanesAndBeats = defineLesson({
   laneLoads: [
     { step: 0, instruction: 1, lane: 0, elements: 8, beats: 8 },
     { step: 0, instruction: 1, lane: 7, elements: 8, beats: 8 },
+    { step: 1, instruction: 1, lane: 0, elements: 8, beats: 8 },
     { step: 3, instruction: 3, lane: 0, elements: 8, beats: 4 },
     { step: 3, instruction: 3, lane: 7, elements: 8, beats: 4 },
   ],

@@ -83,6 +83,18 @@ describe('Learn lessons: five, each on its own scenario, each ending with a ques
         })
       })
 
+      it('every number a note sets in bold is one its step claims (a check, a lane load or an experiment of that step)', () => {
+        lesson.walkthrough.steps.forEach((s, i) => {
+          const claimed = new Set<number>()
+          const add = (e: { value?: unknown }) => typeof e.value === 'number' && claimed.add(e.value)
+          s.checks.forEach(add)
+          for (const x of lesson.experiments.filter((x) => x.step === i)) x.checks.forEach(add)
+          for (const l of lesson.laneLoads.filter((l) => l.step === i)) claimed.add(l.elements).add(l.beats)
+          const bold = [...s.note.matchAll(/\*\*(\d+)\*\*/g)].map((m) => Number(m[1]))
+          expect(bold.filter((n) => !claimed.has(n)), `step ${i + 1}: bold numbers without a claim`).toEqual([])
+        })
+      })
+
       it('every number question has an answer in the run, and every choice a right option', () => {
         for (const s of lesson.walkthrough.steps) {
           const q = s.question
