@@ -1,8 +1,9 @@
 /**
  * A lesson as scenario content: what the Learn page puts on the Bench to play
  * it (and what a copy of it saves). Its expectations are every step's checks,
- * so the Bench's Expectations panel shows the lesson's claims holding; the
- * view is the first step's.
+ * so the Bench's Expectations panel shows the lesson's claims holding; its
+ * walkthrough is the lesson's (kept when the user saves a copy); the view is
+ * the first step's.
  */
 import { scenarioContentSchema, type ScenarioContent } from '../schemas/scenario'
 import type { Expectation } from '../schemas/expectation'
@@ -34,5 +35,6 @@ export function lessonContent(lesson: Lesson): ScenarioContent {
         }
       : {},
     expectations,
+    walkthroughs: [lesson.walkthrough],
   })
 }

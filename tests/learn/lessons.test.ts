@@ -12,6 +12,7 @@
  */
 import { describe, expect, it } from 'vitest'
 import { evaluateExpectations } from '../../shared/expectations/evaluate'
+import type { Expectation } from '../../shared/schemas/expectation'
 import { LESSONS, lessonById, questionCount } from '../../shared/learn'
 import { lessonContent } from '../../shared/learn/content'
 import type { Lesson } from '../../shared/learn/lesson'
@@ -86,7 +87,9 @@ describe('Learn lessons: five, each on its own scenario, each ending with a ques
       it('every number a note sets in bold is one its step claims (a check, a lane load or an experiment of that step)', () => {
         lesson.walkthrough.steps.forEach((s, i) => {
           const claimed = new Set<number>()
-          const add = (e: { value?: unknown }) => typeof e.value === 'number' && claimed.add(e.value)
+          const add = (e: Expectation) => {
+            if ('value' in e && typeof e.value === 'number') claimed.add(e.value)
+          }
           s.checks.forEach(add)
           for (const x of lesson.experiments.filter((x) => x.step === i)) x.checks.forEach(add)
           for (const l of lesson.laneLoads.filter((l) => l.step === i)) claimed.add(l.elements).add(l.beats)
