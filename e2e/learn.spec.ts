@@ -79,3 +79,23 @@ test('leaving a lesson any other way puts my own Bench back', async ({ page }) =
   await expect(page).toHaveURL(/\/bench/)
   await expect(page.getByTestId('metric-cycles')).toHaveText(mine, { timeout: 60_000 })
 })
+
+test('a teacher presents a lesson full screen at 1920x1080 and leaves back to the lesson', async ({ page }) => {
+  test.setTimeout(120_000)
+  await page.setViewportSize({ width: 1920, height: 1080 })
+  await signIn(page, DEMO.owner)
+  await page.goto('/learn/reduction')
+  await expect(page.getByTestId('walkthrough-player')).toBeVisible({ timeout: 60_000 })
+  await page.getByTestId('walkthrough-present-0').click()
+  const stage = page.getByTestId('present-stage')
+  await expect(stage).toBeVisible()
+  await page.keyboard.press('ArrowRight')
+  await page.keyboard.press('ArrowRight')
+  await expect(stage).toContainText('Combining the partials')
+  // Let the cursor's glide (GLIDE_MS, 450 ms) end before the picture.
+  await page.waitForTimeout(600)
+  await page.screenshot({ path: `${SCREENSHOT_DIR}/learn-present-1920.png`, animations: 'disabled' })
+  await page.keyboard.press('Escape')
+  await expect(stage).toHaveCount(0)
+  await expect(page.getByTestId('lesson-title')).toHaveText(lessonById('reduction')!.title)
+})

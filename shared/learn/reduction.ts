@@ -58,6 +58,7 @@ export const reduction = defineLesson({
       },
       {
         cursor: 32,
+        subRows: false,
         window: { start: 0, end: 36 },
         highlight: { instruction: 1, lane: 7 },
         note:
@@ -67,6 +68,7 @@ export const reduction = defineLesson({
       },
       {
         cursor: 37,
+        subRows: false,
         window: { start: 28, end: 71 },
         highlight: { instruction: 1, lane: 6 },
         note:
@@ -76,6 +78,7 @@ export const reduction = defineLesson({
       },
       {
         cursor: 71,
+        subRows: false,
         window: { start: 28, end: 71 },
         highlight: { instruction: 1, lane: 0, register: 4 },
         note:
@@ -85,6 +88,7 @@ export const reduction = defineLesson({
       },
       {
         cursor: 71,
+        subRows: false,
         window: { start: 28, end: 71 },
         highlight: { instruction: 1, lane: 0 },
         note: '**Your turn.** Lane 7 sends its total in cycle 32; lane 0 writes the result in cycle 71.',
