@@ -151,4 +151,29 @@ describe('POST /api/workspaces/:id/invitations/bulk', () => {
     expect(res.status).toBe(400)
     expect(res.body.error.fields.addresses).toContain('an account younger than 3 day(s) may have the server send at most 2 an hour')
   })
+
+  it('a message the mail server refuses is reported as failed and its invitation withdrawn, so pasting the list again retries just that one', async () => {
+    const { owner, workspaceId } = await teacher()
+    const [ok, bounce] = [uniqueEmail('ok'), uniqueEmail('bounce')]
+    const mailer = runtime.ctx.mailer
+    const send = mailer.send.bind(mailer)
+    // The SMTP hand-over failing for one recipient (a refused RCPT, a dropped connection).
+    mailer.send = async (mail) => {
+      if (mail.to === bounce) throw new Error('550 mailbox unavailable')
+      return send(mail)
+    }
+    try {
+      const res = await bulk(owner, workspaceId, { addresses: `${ok}\n${bounce}` })
+      expect(res.status).toBe(201)
+      expect(res.body.invited.map((i: { email: string }) => i.email)).toEqual([ok])
+      expect(res.body.failed).toEqual([{ email: bounce, line: 2, message: 'The mail server did not take the message; paste the list again to retry' }])
+      expect(await Invitation.count({ where: { workspaceId, email: bounce } })).toBe(0)
+    } finally {
+      mailer.send = send
+    }
+    const again = await bulk(owner, workspaceId, { addresses: `${ok}\n${bounce}` })
+    expect(again.status).toBe(201)
+    expect(again.body.invited.map((i: { email: string }) => i.email)).toEqual([bounce])
+    expect(again.body.pending).toEqual([{ email: ok, line: 1 }])
+  })
 })
