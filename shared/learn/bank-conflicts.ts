@@ -45,7 +45,7 @@ export const bankConflicts = defineLesson({
         highlight: { instruction: 1, lane: 0, register: 7 },
         subRows: true,
         note:
-          '**A conflict.** v1 and v7 differ by 6, the number of banks, so word *w* of both sits in the *same* bank. In cycle 3 both operands ask for bank 1; one is refused its port. That happens in every lane: **8** `bank` stall cycles in all.',
+          '**A conflict.** v1 and v7 differ by 6, the number of banks, so word *w* of both sits in the *same* bank. (The bank follows the physical register; nothing has written v1 or v7 yet, so renaming has not moved them.) In cycle 3 both operands ask for bank 1; one is refused its port. That happens in every lane: **8** `bank` stall cycles in all.',
         checks: [stallCyclesAre('bank', 8)],
       },
       {
