@@ -10,6 +10,7 @@
  */
 import { expect, test } from '@playwright/test'
 import { LESSONS, lessonById } from '../shared/learn'
+import { experimentMachine } from '../shared/learn/lesson'
 import { runPipeline } from '../shared/sim/run'
 import { factValue } from '../shared/walkthroughs/facts'
 import { DEMO, signIn, watchConsole } from './helpers/auth'
@@ -98,4 +99,19 @@ test('a teacher presents a lesson full screen at 1920x1080 and leaves back to th
   await page.keyboard.press('Escape')
   await expect(stage).toHaveCount(0)
   await expect(page.getByTestId('lesson-title')).toHaveText(lessonById('reduction')!.title)
+})
+
+test('a "try" button takes the lesson to my Bench with the machine change its note talks about', async ({ page }) => {
+  test.setTimeout(120_000)
+  const lesson = lessonById('uneven-lanes')!
+  const serial = lesson.experiments.findIndex((x) => x.label === 'issue: serial')
+  const run = runPipeline({ program: lesson.program, machine: experimentMachine(lesson, lesson.experiments[serial]!) })
+  if (!run.ok) throw new Error(run.error.message)
+  await signIn(page, DEMO.viewer)
+  await page.goto('/learn/uneven-lanes')
+  await expect(page.getByTestId('walkthrough-player')).toBeVisible({ timeout: 60_000 })
+  await page.getByTestId(`try-${serial}`).click()
+  await expect(page).toHaveURL(/\/bench/)
+  await expect(page.getByTestId('metric-cycles')).toHaveText(String(run.trace.cycles), { timeout: 60_000 })
+  await expect(page.getByTestId('walkthrough-player')).toHaveCount(0)
 })

@@ -70,6 +70,20 @@ export function stallCyclesAre(reason: Extract<Expectation, { kind: 'stall' }>['
   return { kind: 'stall', reason, op: '==', value }
 }
 
+/**
+ * The lesson's machine with an experiment's fields over it: top-level fields
+ * replace, nested groups (`units`, `fpuElementsPerCycle`) merge one level
+ * deep, so `{ units: { fpu: { latency: 6 } } }` keeps the other units.
+ */
+export function experimentMachine(lesson: Lesson, experiment: LessonExperiment): MachineInput {
+  const out: Record<string, unknown> = { ...lesson.machine }
+  for (const [k, v] of Object.entries(experiment.machine)) {
+    const b = out[k]
+    out[k] = b && typeof b === 'object' && v && typeof v === 'object' ? { ...b, ...v } : v
+  }
+  return out as MachineInput
+}
+
 /** The number of questions a lesson asks (the Learn list shows it). */
 export function questionCount(lesson: Lesson): number {
   return lesson.walkthrough.steps.filter((s) => s.question).length

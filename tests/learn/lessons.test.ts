@@ -15,27 +15,17 @@ import { evaluateExpectations } from '../../shared/expectations/evaluate'
 import type { Expectation } from '../../shared/schemas/expectation'
 import { LESSONS, lessonById, questionCount } from '../../shared/learn'
 import { lessonContent } from '../../shared/learn/content'
-import type { Lesson } from '../../shared/learn/lesson'
+import { experimentMachine, type Lesson, type LessonExperiment } from '../../shared/learn/lesson'
 import { runPipeline, type RunResult } from '../../shared/sim/run'
 import { laneTiming, type TimingTrace } from '../../shared/sim/trace/types'
 import { factValue } from '../../shared/walkthroughs/facts'
 
 type OkRun = Extract<RunResult, { ok: true }>
 
-function run(lesson: Lesson, patch: object = {}): OkRun {
-  const r = runPipeline({ program: lesson.program, machine: mergeMachine(lesson.machine, patch) })
+function run(lesson: Lesson, patch: LessonExperiment['machine'] = {}): OkRun {
+  const r = runPipeline({ program: lesson.program, machine: experimentMachine(lesson, { step: 0, label: '', machine: patch, checks: [] }) })
   if (!r.ok) throw new Error(`${lesson.id}: ${r.error.stage} ${r.error.message}`)
   return r
-}
-
-/** A one-level deep merge: experiments change top-level fields, or one unit's latency. */
-function mergeMachine(base: object, patch: object): object {
-  const out: Record<string, unknown> = { ...base }
-  for (const [k, v] of Object.entries(patch)) {
-    const b = out[k]
-    out[k] = b && typeof b === 'object' && v && typeof v === 'object' ? { ...b, ...v } : v
-  }
-  return out
 }
 
 function failures(results: ReturnType<typeof evaluateExpectations>): string[] {
@@ -222,5 +212,16 @@ describe('Learn lessons against closed forms of the timing model (derived by han
     // Tree: levels k = 0..2 cost 2^k hop + D after the partial leaves, then vs1[0].
     const tree = run(lesson, { interLane: 'tree' }).trace
     expect(tree.cycles).toBe(partial + 1 + [0, 1, 2].reduce((s, k) => s + 2 ** k * hop + D, 0) + D + 1)
+  })
+})
+
+describe('experimentMachine', () => {
+  it('replaces top-level fields and merges nested groups one level deep (the other units keep their latencies)', () => {
+    const lesson = lessonById('chaining') as Lesson
+    expect(experimentMachine(lesson, { step: 0, label: '', machine: { chaining: false, units: { mul: { latency: 5 } } }, checks: [] })).toEqual({
+      ...lesson.machine,
+      chaining: false,
+      units: { fpu: { latency: 4 }, mul: { latency: 5 } },
+    })
   })
 })
