@@ -46,7 +46,7 @@ test('a teacher records six steps on the ragged tail, presents them, shares them
   await page.locator('#walkthrough-title-input').fill(`${run} Why lanes 3 to 7 finish early`)
   const recorded: number[] = []
   const notes = [
-    'Cycle 0: the **vector unit** starts; 19 elements go to 8 lanes.',
+    'The **vector unit** starts: 19 elements go to 8 lanes.',
     'Lanes 0 to 2 get **three** elements, lanes 3 to 7 get two.',
     'Watch lane 7: it has one element fewer.',
     'The load feeds every lane; the FMA follows it (chaining).',
@@ -79,7 +79,7 @@ test('a teacher records six steps on the ragged tail, presents them, shares them
   await page.locator('#walkthrough-note-input').fill(notes[0]!.replace('starts', 'begins'))
   await page.getByTestId('walkthrough-add-step').click()
   await expect(page.getByTestId('walkthrough-step-0')).toContainText('begins')
-  await screenshot(page, 'walkthrough-recorder')
+  await panel.screenshot({ path: '.screenshots/walkthrough-recorder.png', animations: 'disabled' })
   await page.getByTestId('walkthrough-save').click()
   await expect(page.getByText(/Saved the walkthrough with version 2/)).toBeVisible()
   await expect(panel.getByTestId('walkthrough-list')).toContainText('6 steps')
@@ -154,6 +154,7 @@ test('a teacher records six steps on the ragged tail, presents them, shares them
   await expect(player.getByTestId('walkthrough-verdict')).toContainText('last busy cycle')
   await expect(student.getByTestId('estimate-note')).toBeVisible()
   await screenshot(student, 'walkthrough-student')
+  await student.locator('.results').first().screenshot({ path: '.screenshots/walkthrough-student-chart.png', animations: 'disabled' })
   await student.keyboard.press('ArrowLeft')
   await expect(player.getByTestId('walkthrough-step')).toHaveText('step 5 of 6')
   await student.keyboard.press('Escape')
