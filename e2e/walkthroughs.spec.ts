@@ -127,6 +127,7 @@ test('a teacher records six steps on the ragged tail, presents them, shares them
   await dialog.getByRole('button', { name: 'Create link' }).click()
   await expect(dialog.getByTestId('share-created')).toBeVisible()
   const url = await dialog.getByTestId('share-url').locator('input').inputValue()
+  await expect(dialog.getByTestId('share-walkthrough-links')).toContainText(`${url}?walkthrough=1`)
   expect(url).toMatch(/\/s\/[A-Za-z0-9_-]+$/)
 
   // A signed-out student plays it.
