@@ -90,6 +90,13 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Learn', requiresAuth: true },
   },
   {
+    path: '/learn/:lessonId',
+    name: 'learn-lesson',
+    component: () => import('@/views/LearnLessonView.vue'),
+    props: true,
+    meta: { title: 'Lesson', requiresAuth: true },
+  },
+  {
     path: '/admin/outbox',
     name: 'outbox',
     component: () => import('@/views/OutboxView.vue'),
