@@ -53,7 +53,7 @@ export async function reserveMail(ctx: Pick<AppContext, 'config' | 'sequelize'>,
  * it in parts); one that does not fit yet is a 429 saying how many e-mails
  * are left. Nothing is recorded when it throws.
  */
-export async function reserveMailBatch(ctx: AppContext, user: User, kind: MailSend['kind'], messages: number, field: string): Promise<void> {
+export async function reserveMailBatch(ctx: Pick<AppContext, 'config' | 'sequelize'>, user: User, kind: MailSend['kind'], messages: number, field: string): Promise<void> {
   const limits = ctx.config.mailLimits
   if (!limits.enabled || messages === 0) return
   const { budget, who } = budgetOf(limits, user)
@@ -72,7 +72,7 @@ function budgetOf(limits: MailLimits, user: User): { budget: MailBudget; who: st
   return { budget: young ? limits.newAccount : limits.regular, who: young ? `an account younger than ${limits.newAccountDays} day(s)` : 'an account' }
 }
 
-async function record(ctx: AppContext, user: User, kind: MailSend['kind'], recipients: number, budget: MailBudget, who: string, sayLeft: boolean): Promise<void> {
+async function record(ctx: Pick<AppContext, 'config' | 'sequelize'>, user: User, kind: MailSend['kind'], recipients: number, budget: MailBudget, who: string, sayLeft: boolean): Promise<void> {
   await ctx.sequelize.transaction(async (transaction) => {
     await ctx.sequelize.query('SELECT pg_advisory_xact_lock(hashtext(:key))', { replacements: { key: `mail:${user.id}` }, transaction })
     const now = Date.now()
