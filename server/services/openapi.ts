@@ -9,6 +9,7 @@ import * as su from '../../shared/schemas/suite'
 import { OpenAPIRegistry, OpenApiGeneratorV31 } from '@asteasolutions/zod-to-openapi'
 import { z } from 'zod'
 import * as auth from '../../shared/schemas/auth'
+import * as classroom from '../../shared/schemas/classroom'
 import { bundleSchema, exportBodySchema } from '../../shared/schemas/bundle'
 import { errorBodySchema } from '../../shared/schemas/errors'
 import { healthResponseSchema } from '../../shared/schemas/health'
@@ -57,12 +58,13 @@ export const DOCUMENTED_ROUTES: DocumentedRoute[] = [
   { method: 'post', path: '/api/workspaces/:id/undo-delete', summary: 'Bring a deleted workspace back within 30 days (410 undo_expired after)', access: 'owner', ok: 200, response: ws.workspaceResponseSchema },
   { method: 'get', path: '/api/workspaces/:id/members', summary: 'Members and pending invitations', access: 'member', ok: 200, response: ws.membersResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/invitations', summary: 'Invite by e-mail', access: 'owner', body: ws.invitationBodySchema, ok: 201, response: ws.invitationResponseSchema },
+  { method: 'post', path: '/api/workspaces/:id/invitations/bulk', summary: 'Invite a class from a pasted list of addresses', access: 'owner', body: classroom.bulkInvitationBodySchema, ok: 201, response: classroom.bulkInvitationResultSchema },
   { method: 'patch', path: '/api/workspaces/:id/members/:userId', summary: 'Change a role', access: 'owner', body: ws.memberRoleBodySchema, ok: 200, response: ws.memberResponseSchema },
   { method: 'delete', path: '/api/workspaces/:id/members/:userId', summary: 'Remove a member, or leave', access: 'owner, or the member themselves', ok: 204 },
   { method: 'post', path: '/api/invitations/accept', summary: 'Accept an invitation token', access: 'signed in', body: ws.acceptInvitationBodySchema, ok: 200, response: ws.workspaceResponseSchema },
   { method: 'get', path: '/api/admin/outbox', summary: 'Messages the local SMTP sink received', access: 'site admin', ok: 200, response: outboxResponseSchema },
 
-  { method: 'get', path: '/api/workspaces/:id/sweeps', summary: "The workspace's sweeps, newest first (200 at most), with points done", access: 'member', ok: 200, response: sw.sweepListResponseSchema },
+  { method: 'get', path: '/api/workspaces/:id/sweeps', summary: "The workspace's sweeps, newest first (200 at most), with points done; ?scenarioId= one scenario's, with their version numbers", access: 'member', ok: 200, response: sw.sweepListResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/sweeps', summary: 'Save a browser sweep with its points, or queue a server sweep for the workers (429 past the workspace limits)', access: 'owner, editor', body: sw.createSweepBodySchema, ok: 201, response: sw.sweepCreatedResponseSchema },
   { method: 'get', path: '/api/workspaces/:id/sweeps/:sweepId', summary: 'One sweep: definition, progress and the points done (poll while it runs)', access: 'member', ok: 200, response: sw.sweepResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/sweeps/:sweepId/cancel', summary: 'Cancel a queued or running server sweep; the points done are kept', access: 'owner, editor', ok: 200, response: sw.sweepCreatedResponseSchema },

@@ -9,8 +9,9 @@
  * - versions are in order, numbered 1, 2, 3 ... without gaps; the last is the
  *   scenario's current content;
  * - `content` is a ScenarioContent (title, description, tags, program,
- *   machine, initialData, view, expectations) with every default filled in;
- *   bundles written before expectations existed have none, and read as [];
+ *   machine, initialData, view, expectations, walkthroughs) with every
+ *   default filled in; bundles written before expectations or walkthroughs
+ *   existed have none, and read as [];
  * - `author` is the author's display name as it was;
  * - `run` is the summary recorded when the version was saved.
  * - `suite` (optional) is present when a suite was exported: its title and

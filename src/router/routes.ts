@@ -57,6 +57,13 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Sweep', requiresAuth: true },
   },
   {
+    // Side by side: both runs and the view are in the query (src/lib/compare/url.ts).
+    path: '/compare',
+    name: 'compare',
+    component: () => import('@/views/CompareView.vue'),
+    meta: { title: 'Side by side', requiresAuth: true },
+  },
+  {
     path: '/suites',
     name: 'suites',
     component: () => import('@/views/SuitesView.vue'),
@@ -81,6 +88,13 @@ export const routes: RouteRecordRaw[] = [
     name: 'learn',
     component: () => import('@/views/LearnView.vue'),
     meta: { title: 'Learn', requiresAuth: true },
+  },
+  {
+    path: '/learn/:lessonId',
+    name: 'learn-lesson',
+    component: () => import('@/views/LearnLessonView.vue'),
+    props: true,
+    meta: { title: 'Lesson', requiresAuth: true },
   },
   {
     path: '/admin/outbox',
