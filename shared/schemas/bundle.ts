@@ -14,10 +14,14 @@
  *   existed have none, and read as [];
  * - `author` is the author's display name as it was;
  * - `run` is the summary recorded when the version was saved.
+ * - `suite` (optional) is present when a suite was exported: its title and
+ *   the preset its runs use (null: each scenario's own machine), which
+ *   `chimeline check` uses unless given --preset.
  * A later formatVersion will come with a reader for this one.
  */
 import { z } from 'zod'
 import { runSummarySchema, scenarioContentSchema } from './scenario'
+import { PRESET_IDS } from '../sim/presets'
 
 export const BUNDLE_FORMAT = 'chimeline-scenario-bundle'
 export const BUNDLE_FORMAT_VERSION = 1
@@ -57,6 +61,13 @@ export const bundleSchema = z
     formatVersion: z.literal(BUNDLE_FORMAT_VERSION, { error: `formatVersion ${BUNDLE_FORMAT_VERSION} is the only one this Chimeline reads` }),
     exportedAt: z.iso.datetime(),
     scenarios: z.array(bundleScenarioSchema).min(1, 'A bundle holds at least one scenario').max(BUNDLE_MAX_SCENARIOS, `At most ${BUNDLE_MAX_SCENARIOS} scenarios per bundle`),
+    suite: z
+      .object({
+        title: z.string().max(200),
+        presetId: z.enum(PRESET_IDS, { error: `The preset is one of ${PRESET_IDS.join(', ')}` }).nullable(),
+      })
+      .strict()
+      .optional(),
   })
   .strict()
 export type Bundle = z.output<typeof bundleSchema>
