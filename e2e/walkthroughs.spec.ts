@@ -13,7 +13,7 @@ import { parseMachine } from '../shared/schemas/machine'
 import { DEFAULT_PRESET_ID, PRESETS } from '../shared/sim/presets'
 import { runPipeline } from '../shared/sim/run'
 import { accessToken, createScenario, workspaceId } from './helpers/api'
-import { DEMO, fillSignIn, signIn, watchConsole } from './helpers/auth'
+import { DEMO, fillSignIn, signIn, userMenu, watchConsole } from './helpers/auth'
 import { screenshot } from './helpers/screenshots'
 
 const SAXPY = readFileSync('examples/saxpy.s', 'utf8')
@@ -124,6 +124,18 @@ test('a teacher records six steps on the ragged tail, presents them, shares them
   await expect(page.getByTestId('walkthrough-player')).toHaveCount(0)
   await expect.poll(() => cursorText(page)).toBe(beforePresent)
   await expect(page.getByTestId('program-panel').or(page.locator('.left')).first()).toBeVisible()
+  // The same stage in the dark theme (a dim lecture room).
+  await userMenu(page, 'Switch to dark theme')
+  await expect.poll(() => page.evaluate(() => document.documentElement.dataset.theme)).toBe('dark')
+  await panel.getByTestId('walkthrough-present-0').click()
+  await page.keyboard.press('ArrowRight')
+  await page.keyboard.press('ArrowRight')
+  await expect(stage.getByTestId('walkthrough-step')).toHaveText('step 3 of 6')
+  await page.waitForTimeout(600)
+  await page.screenshot({ path: '.screenshots/walkthrough-present-dark.png', animations: 'disabled' })
+  await page.keyboard.press('Escape')
+  await expect(stage).toHaveCount(0)
+  await userMenu(page, 'Switch to light theme')
   await page.setViewportSize({ width: 1280, height: 900 })
 
   // Share it.
