@@ -9,7 +9,7 @@
  * they accrue IEEE 754 exception flags, as vfp.ts does.
  */
 import type { Instruction, Sew } from '../isa/types'
-import { arith, BINARY64, floatToInt, fusedMultiplyAdd, intToFloat, NV, RNE, RTZ, type RoundingMode, takeFlags, toBinary32, BINARY32 } from './fp'
+import { arith, BINARY64, floatToInt, fusedMultiplyAdd, intToFloat, NV, RNE, RTZ, type RoundingMode, signalingNaN, takeFlags, toBinary32, BINARY32 } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireVtype } from './handler'
 import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
@@ -26,14 +26,7 @@ function readF(m: ArchState, reg: number, eew: 32 | 64, i: number): number {
 
 /** Element i of the group at `reg` at width eew is a signaling NaN (quiet bit clear). */
 function signalingF(m: ArchState, reg: number, eew: 32 | 64, i: number): boolean {
-  return signalingBits(readElem(m, reg, eew, i, false), eew)
-}
-
-function signalingBits(bits: bigint, eew: 32 | 64): boolean {
-  const exp = eew === 64 ? 0x7ff0000000000000n : 0x7f800000n
-  const frac = eew === 64 ? 0x000fffffffffffffn : 0x007fffffn
-  const quiet = eew === 64 ? 0x0008000000000000n : 0x00400000n
-  return (bits & exp) === exp && (bits & frac) !== 0n && (bits & quiet) === 0n
+  return signalingNaN(readElem(m, reg, eew, i, false), eew)
 }
 
 function writeF(m: ArchState, reg: number, eew: 32 | 64, i: number, v: number): void {
@@ -70,7 +63,7 @@ function wideArith(fn: (a: number, b: number, d: number) => number, form: Form, 
     checkMaskOverlap(ins, vd)
     const k = vv ? 0 : m.f32Operand(operand(ins, 'rs1'))
     const flags = m.readsFpFlags
-    const kSignaling = flags && !vv && signalingBits(BigInt(m.f32OperandBits(operand(ins, 'rs1'))), 32)
+    const kSignaling = flags && !vv && signalingNaN(BigInt(m.f32OperandBits(operand(ins, 'rs1'))), 32)
     if (flags) takeFlags()
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(ins.operands.vm, i)) continue
