@@ -105,7 +105,7 @@ test.describe('reading the Lane chart', () => {
   test('a ragged tail is explained in numbers, from runs of the even neighbours', async ({ page, request }) => {
     test.setTimeout(120_000)
     // The long stream at vl 250 instead of 256 on the Long-vector 8-lane preset (VLEN 16384), saved with it.
-    const program = readFileSync('examples/long-stream.s', 'utf8').replace(/li\s+a0, 256/, 'li      a0, 250')
+    const program = readFileSync('examples/long-stream.s', 'utf8').replace(/\.equ\s+AVL, 256/, '.equ    AVL, 250')
     const machine = PRESETS.find((p) => p.id === 'long-vector-8')!.machine
     const cycles = (text: string) => {
       const r = runPipeline({ program: text, machine: parseMachine(machine) })
@@ -113,7 +113,7 @@ test.describe('reading the Lane chart', () => {
       return r.trace.cycles
     }
     const at250 = cycles(program)
-    const saved = at250 - cycles(program.replace('li      a0, 250', 'li      a0, 248'))
+    const saved = at250 - cycles(program.replace('.equ    AVL, 250', '.equ    AVL, 248'))
     const token = await accessToken(request, DEMO.editor)
     const ws = await workspaceId(request, token)
     const res = await request.post(`/api/workspaces/${ws}/scenarios`, {

@@ -11,13 +11,15 @@
 # to 2 and they all but vanish (8 banks of 2 ports: none at all).
 # At the default VLEN 8192, e64 and m1 give vl = 128: 16 elements a lane.
 # Output: acc = 16 * x * y = 32 i^2 for i = 0..vl-1, vl doubles on stdout.
+# AVL is the vector length asked for (vl = min(AVL, VLMAX)): sweep it on the Sweeps page.
+    .equ    AVL, 128
     .data
     .balign 8
 acc:
-    .zero   1024
+    .zero   AVL*8
 
     .text
-    li      a0, 128
+    li      a0, AVL
     vsetvli t0, a0, e64, m1, ta, ma
     vid.v   v1
     vfcvt.f.xu.v v2, v1             # x[i] = i

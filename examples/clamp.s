@@ -3,7 +3,9 @@
 # set and keeps the sample where it is clear. vcpop.m counts the samples clamped
 # from above: it has a scalar result, so the front end waits for it.
 # e32 with LMUL 8 holds all 20 samples in one register group from VLEN 128 up.
-# Output: the 20 clamped samples and the count (84 bytes) on standard output.
+# Output: the 20 samples, the first AVL of them clamped, and the count (84 bytes) on standard output.
+# AVL is how many samples to clamp (1..20; vl = min(AVL, VLMAX)).
+    .equ    AVL, 20
     .data
     .balign 8
 samples:
@@ -14,7 +16,7 @@ count:
 
     .text
     la      a1, samples
-    li      a0, 20
+    li      a0, AVL
     li      t2, 100
     vsetvli t0, a0, e32, m8, ta, ma
     vle32.v v8, (a1)

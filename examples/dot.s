@@ -4,6 +4,8 @@
 # (vfredusum.vs): lane partials, then the inter-lane phase on the ring.
 # All values are small integers, so the sum is exact in any order.
 # Output: the dot product as one double (8 bytes) on standard output.
+# AVL is how many elements to use (1..24, the data's length).
+    .equ    AVL, 24
     .data
     .balign 8
 x:  .double 1.0, 2.0, 3.0, 4.0, 5.0, 6.0, 7.0, 8.0
@@ -18,7 +20,7 @@ result:
     .text
     la      a1, x
     la      a2, y
-    li      a0, 24                  # elements left
+    li      a0, AVL                 # elements left
     fmv.d.x fa0, zero
     vsetvli t0, a0, e64, m1, ta, ma
     vfmv.s.f v1, fa0                # running sum = 0.0

@@ -5,15 +5,17 @@
 # vfmacc.vv is 32 beats a lane, and the 8 accumulators (v8..v22) never wait on
 # each other, so the FPUs should stay busy.
 # Output: the combined accumulator, vl doubles (2048 bytes at VLEN 8192).
+# AVL is the vector length asked for (vl = min(AVL, VLMAX)): sweep it on the Sweeps page.
+    .equ    AVL, 256
     .data
     .balign 8
 half:
     .double 0.5
 acc:
-    .zero   2048
+    .zero   AVL*8
 
     .text
-    li      a0, 256
+    li      a0, AVL
     vsetvli t0, a0, e64, m2, ta, ma
     vid.v   v2
     vfcvt.f.xu.v v2, v2             # x[i] = i

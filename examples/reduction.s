@@ -7,6 +7,8 @@
 # both forms sum in element order functionally (as QEMU does).
 # e32 with LMUL 8 holds all 32 elements from VLEN 128 up.
 # Output: the unordered sum, then the ordered sum (2 floats, 8 bytes).
+# AVL is how many values to sum (1..32, the data's length).
+    .equ    AVL, 32
     .data
     .balign 8
 values:
@@ -20,7 +22,7 @@ sums:
     .text
     la      a1, values
     la      a2, sums
-    li      a0, 32
+    li      a0, AVL
     vsetvli t0, a0, e32, m8, ta, ma
     vle32.v v8, (a1)
     vmv.v.i v0, 0                   # v0[0] = 0.0 (all-zero bits), the start value

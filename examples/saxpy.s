@@ -4,6 +4,8 @@
 # strip of 19 elements, and on 8 lanes lanes 0-2 get 3 elements while lanes 3-7
 # get 2: the lanes with fewer elements finish early (the ragged tail).
 # Output: the 19 results of y (76 bytes) on standard output.
+# AVL is how many elements to update (1..19, the data's length).
+    .equ    AVL, 19
     .data
     .balign 8
 a:  .float 2.5
@@ -17,7 +19,7 @@ y:  .float 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5, 0.5
     flw     fa0, 0(t2)
     la      a1, x
     la      a2, y
-    li      a0, 19                  # elements left
+    li      a0, AVL                 # elements left
 loop:
     vsetvli t0, a0, e32, m1, ta, ma # t0 = vl for this strip
     vle32.v v8, (a1)

@@ -4,6 +4,8 @@
 # element one lane over on the ring instead of loading x twice more.
 # e64 with LMUL 8 keeps all 16 elements in one register group from VLEN 128 up.
 # Output: the 16 results (128 bytes) on standard output.
+# AVL is how many elements to filter (1..16, the data's length; x[AVL] counts as 0 once vl < 16).
+    .equ    AVL, 16
     .data
     .balign 8
 coef:
@@ -19,7 +21,7 @@ y:  .zero   128
     fmv.d.x ft0, zero               # boundary value 0.0
     la      a1, x
     la      a2, y
-    li      a0, 16
+    li      a0, AVL
     vsetvli t0, a0, e64, m8, ta, ma
     vle64.v v8, (a1)                # x
     vfslide1up.vf v16, v8, ft0      # x[i-1]

@@ -3,15 +3,17 @@
 # is the kernel. With e64 and LMUL 1 at the default VLEN 8192, VLMAX is 128, so
 # each loop runs strips of 128, 128 and 44 elements; at VLEN 128 it is 150 strips
 # of 2. The last, shorter strip leaves some lanes idle.
-# Output: the 300 results of z (2400 bytes) on standard output.
+# Output: the AVL results of z (2400 bytes for AVL 300) on standard output.
+# AVL is the element count (any positive number: the arrays are sized by it).
+    .equ    AVL, 300
     .data
     .balign 8
-x:  .zero   2400
-z:  .zero   2400
+x:  .zero   AVL*8
+z:  .zero   AVL*8
 
     .text
     la      a1, x
-    li      a0, 300                 # elements left
+    li      a0, AVL                 # elements left
     li      a3, 0                   # index of the strip's first element
 fill:
     vsetvli t0, a0, e64, m1, ta, ma
@@ -26,7 +28,7 @@ fill:
 
     la      a1, x
     la      a2, z
-    li      a0, 300
+    li      a0, AVL
     li      t3, 3
 kernel:
     vsetvli t0, a0, e64, m1, ta, ma
@@ -40,9 +42,9 @@ kernel:
     sub     a0, a0, t0
     bnez    a0, kernel
 
-    li      a0, 1                   # write(1, z, 2400)
+    li      a0, 1                   # write(1, z, AVL * 8)
     la      a1, z
-    li      a2, 2400
+    li      a2, AVL*8
     li      a7, 64
     ecall
     li      a0, 0

@@ -9,6 +9,8 @@ export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAt
   declare id: CreationOptional<string>
   declare scenarioId: string
   declare versionId: string
+  /** The sweep of this scenario the link shows beside the version, if any. */
+  declare sweepId: CreationOptional<string | null>
   declare view: ScenarioView
   declare tokenHash: string
   declare accessMode: ShareAccessMode
@@ -27,6 +29,7 @@ export class ShareLink extends Model<InferAttributes<ShareLink>, InferCreationAt
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         scenarioId: { type: DataTypes.UUID, allowNull: false },
         versionId: { type: DataTypes.UUID, allowNull: false },
+        sweepId: { type: DataTypes.UUID, allowNull: true },
         view: { type: DataTypes.JSONB, allowNull: false },
         tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
         accessMode: { type: DataTypes.STRING(16), allowNull: false },

@@ -25,6 +25,7 @@ import { ApiError, errors } from '../http/errors'
 import { ScenarioVersion, type User } from '../models'
 import type { OpenCounter } from './share-links-counts'
 import { versionDto } from './scenarios'
+import { sharedSweep } from './sweeps-share'
 
 /** A link that opens: its answer, ready to send. */
 export interface OpenLink {
@@ -60,7 +61,7 @@ export const SHARE_CACHE_LIMITS: ShareCacheLimits = { entries: 1000, size: 64 * 
 
 /** A link's state with its scenario and workspace, by the token hash's unique index. */
 const LINK_SQL = `
-SELECT sl.id, sl.version_id, sl.view, sl.access_mode, sl.expires_at, sl.scenario_id, s.workspace_id, w.name AS workspace_name,
+SELECT sl.id, sl.version_id, sl.sweep_id, sl.view, sl.access_mode, sl.expires_at, sl.scenario_id, s.workspace_id, w.name AS workspace_name,
        sl.revoked_at IS NOT NULL OR s.deleted_at IS NOT NULL OR w.deleted_at IS NOT NULL AS revoked
 FROM share_links sl
 JOIN scenarios s ON s.id = sl.scenario_id
@@ -70,6 +71,7 @@ WHERE sl.token_hash = $1`
 interface LinkRow {
   id: string
   version_id: string
+  sweep_id: string | null
   view: ScenarioView
   access_mode: ShareAccessMode
   expires_at: Date | null
@@ -254,6 +256,8 @@ async function readEntry(sequelize: Sequelize, hash: string): Promise<Entry | nu
     view: row.view,
     accessMode: row.access_mode,
     expiresAt: row.expires_at?.toISOString() ?? null,
+    // Only finished sweeps are shared (sweeps-share.ts), so the cached answer does not go stale.
+    sweep: row.sweep_id ? await sharedSweep(sequelize, row.sweep_id) : null,
   }
   const body = Buffer.from(JSON.stringify({ share }))
   const etag = `"${crypto.createHash('sha256').update(body).digest('base64url').slice(0, 27)}"`

@@ -16,6 +16,7 @@ import { ShareOpens } from './share-links-open'
 import { reserveMail } from './mail-limits'
 import { shareLinkMail } from './share-link-mail'
 import { createScenario, findScenario, findVersion, versionDto } from './scenarios'
+import { shareableSweep, sweepVersion } from './sweeps-share'
 
 export function shareUrl(ctx: AppContext, token: string): string {
   return `${ctx.config.publicUrl}/s/${encodeURIComponent(token)}`
@@ -33,6 +34,7 @@ function linkDto(link: ShareLink): ShareLinkDto {
     scenarioId: link.scenarioId,
     version: (link.version as ScenarioVersion).number,
     view: link.view,
+    sweepId: link.sweepId ?? null,
     accessMode: link.accessMode,
     status: status(link),
     expiresAt: link.expiresAt?.toISOString() ?? null,
@@ -51,12 +53,14 @@ const linkIncludes = [
 
 export async function createShareLink(ctx: AppContext, user: User, workspaceId: string, scenarioId: string, body: CreateShareLinkBody) {
   const scenario = await findScenario(workspaceId, scenarioId)
-  const version = await findVersion(scenario.id, body.version ?? scenario.version)
+  const sweep = body.sweepId ? await shareableSweep(scenario.id, body.sweepId) : null
+  const version = sweep && body.version === undefined ? await sweepVersion(scenario, sweep) : await findVersion(scenario.id, body.version ?? scenario.version)
   const view: ScenarioView = body.view ?? versionDto(version).content.view
   const token = randomToken()
   const link = await ShareLink.create({
     scenarioId: scenario.id,
     versionId: version.id,
+    sweepId: sweep?.id ?? null,
     view,
     tokenHash: hashToken(token),
     accessMode: body.accessMode,

@@ -19,7 +19,15 @@ import type { AppContext } from '../context'
 import { ApiError, errors } from '../http/errors'
 import { Scenario, ScenarioVersion, Sweep, type User } from '../models'
 
-function summary(s: Sweep, done: number): SweepSummary {
+/** Scenario version numbers by version id, for the summaries (the history lists sweeps by version). */
+async function versionNumbers(ids: (string | null)[]): Promise<Map<string, number>> {
+  const wanted = [...new Set(ids.filter((id): id is string => id !== null))]
+  if (wanted.length === 0) return new Map()
+  const rows = await ScenarioVersion.findAll({ where: { id: wanted }, attributes: ['id', 'number'] })
+  return new Map(rows.map((v) => [v.id, v.number]))
+}
+
+function summary(s: Sweep, done: number, versions: Map<string, number>): SweepSummary {
   return {
     id: s.id,
     title: s.title,
@@ -30,6 +38,7 @@ function summary(s: Sweep, done: number): SweepSummary {
     message: s.message,
     scenarioId: s.scenarioId,
     versionId: s.versionId,
+    version: s.versionId ? (versions.get(s.versionId) ?? null) : null,
     parameters: s.definition.parameters,
     createdAt: s.createdAt.toISOString(),
   }
@@ -79,7 +88,7 @@ export async function createSweep(ctx: AppContext, user: User, workspaceId: stri
     })
     const s = await Sweep.create({ workspaceId, scenarioId: body.scenarioId, versionId, title: body.title, definition: body.definition, runner: 'browser', status: body.status, planned, message: body.message, createdById: user.id })
     await insertPoints(ctx, s.id, body.points)
-    return summary(s, new Set(body.points.map((p) => p.index)).size)
+    return summary(s, new Set(body.points.map((p) => p.index)).size, await versionNumbers([versionId]))
   }
 
   const active = await Sweep.count({ where: { workspaceId, runner: 'server', status: { [Op.in]: ['queued', 'running'] } } })
@@ -91,13 +100,14 @@ export async function createSweep(ctx: AppContext, user: User, workspaceId: stri
   }
   const s = await Sweep.create({ workspaceId, scenarioId: body.scenarioId, versionId, title: body.title, definition: body.definition, runner: 'server', status: 'queued', planned, message: null, createdById: user.id })
   await ctx.sweeps.enqueue(s.id, planned)
-  return summary(s, 0)
+  return summary(s, 0, await versionNumbers([versionId]))
 }
 
-export async function listSweeps(ctx: AppContext, workspaceId: string): Promise<SweepSummary[]> {
-  const rows = await Sweep.findAll({ where: { workspaceId }, order: [['createdAt', 'DESC']], limit: 200 })
-  const done = await doneCounts(ctx, rows.map((r) => r.id))
-  return rows.map((r) => summary(r, done.get(r.id) ?? 0))
+/** A workspace's newest 200 sweeps, or one scenario's (all versions). */
+export async function listSweeps(ctx: AppContext, workspaceId: string, scenarioId?: string): Promise<SweepSummary[]> {
+  const rows = await Sweep.findAll({ where: scenarioId ? { workspaceId, scenarioId } : { workspaceId }, order: [['createdAt', 'DESC']], limit: 200 })
+  const [done, versions] = await Promise.all([doneCounts(ctx, rows.map((r) => r.id)), versionNumbers(rows.map((r) => r.versionId))])
+  return rows.map((r) => summary(r, done.get(r.id) ?? 0, versions))
 }
 
 async function findSweep(workspaceId: string, id: string): Promise<Sweep> {
@@ -110,11 +120,11 @@ export async function getSweep(ctx: AppContext, workspaceId: string, id: string)
   const s = await findSweep(workspaceId, id)
   const rows = await ctx.sequelize.query<{ result: unknown }>('SELECT result FROM sweep_points WHERE sweep_id = :id ORDER BY point_index', { replacements: { id: s.id }, type: QueryTypes.SELECT })
   const points = rows.map((r) => sweepPointResultSchema.parse(r.result))
-  return { ...summary(s, points.length), definition: s.definition, points }
+  return { ...summary(s, points.length, await versionNumbers([s.versionId])), definition: s.definition, points }
 }
 
 export async function cancelSweep(ctx: AppContext, workspaceId: string, id: string): Promise<SweepSummary> {
   const s = await findSweep(workspaceId, id)
   if (s.status === 'queued' || s.status === 'running') await s.update({ status: 'cancelled', message: 'cancelled; the points done are kept' })
-  return summary(s, (await doneCounts(ctx, [s.id])).get(s.id) ?? 0)
+  return summary(s, (await doneCounts(ctx, [s.id])).get(s.id) ?? 0, await versionNumbers([s.versionId]))
 }

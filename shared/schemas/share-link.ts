@@ -4,6 +4,7 @@
  * the server keeps only its SHA-256 hash.
  */
 import { z } from 'zod'
+import { sharedSweepSchema } from './sweep'
 import { emailSchema } from './user'
 import { personSchema, scenarioContentSchema, scenarioViewSchema, runSummarySchema } from './scenario'
 
@@ -22,6 +23,8 @@ export const createShareLinkBodySchema = z
     /** The view the reader lands on; default: the version's own view. */
     view: scenarioViewSchema.optional(),
     accessMode: z.enum(SHARE_ACCESS_MODES, { error: 'accessMode is anyone or workspace' }).default('anyone'),
+    /** A finished sweep of this scenario to show beside the version (default version: the sweep's own). */
+    sweepId: z.uuid({ error: 'sweepId is a sweep id (a UUID)' }).nullish(),
     /** Absolute expiry time; null or absent: never expires. */
     expiresAt: z.iso.datetime({ error: 'expiresAt is an ISO 8601 time, e.g. 2027-01-31T12:00:00Z' }).nullable().default(null)
       .refine((v) => v === null || Date.parse(v) > Date.now(), 'expiresAt must be in the future')
@@ -38,6 +41,8 @@ export const shareLinkSchema = z.object({
   scenarioId: z.uuid(),
   version: z.number().int(),
   view: scenarioViewSchema,
+  /** The sweep the link shows beside the version, or null. */
+  sweepId: z.uuid().nullable(),
   accessMode: z.enum(SHARE_ACCESS_MODES),
   status: shareLinkStatusSchema,
   expiresAt: z.iso.datetime().nullable(),
@@ -90,6 +95,8 @@ export const sharedScenarioSchema = z.object({
   view: scenarioViewSchema,
   accessMode: z.enum(SHARE_ACCESS_MODES),
   expiresAt: z.iso.datetime().nullable(),
+  /** The sweep the link points at (its plot and table, read-only), or null. */
+  sweep: sharedSweepSchema.nullable().default(null),
 })
 export type SharedScenario = z.infer<typeof sharedScenarioSchema>
 export const sharedScenarioResponseSchema = z.object({ share: sharedScenarioSchema })

@@ -140,11 +140,34 @@ export const sweepSummarySchema = z.object({
   message: z.string().nullable(),
   scenarioId: z.uuid().nullable(),
   versionId: z.uuid().nullable(),
+  /** The number of that scenario version, if the sweep belongs to one. */
+  version: z.number().int().nullable(),
   parameters: z.array(sweepParameterSchema),
   createdAt: z.string(),
 })
 export type SweepSummary = z.output<typeof sweepSummarySchema>
 
+/** GET /api/workspaces/:id/sweeps?scenarioId=...: one scenario's sweeps (its history lists them by version). */
+export const sweepListQuerySchema = z.object({ scenarioId: z.uuid({ error: 'scenarioId is a scenario id (a UUID)' }).optional() })
+
 export const sweepListResponseSchema = z.object({ sweeps: z.array(sweepSummarySchema) })
 export const sweepResponseSchema = z.object({ sweep: sweepSummarySchema.extend({ definition: sweepDefinitionSchema, points: z.array(sweepPointResultSchema) }) })
 export const sweepCreatedResponseSchema = z.object({ sweep: sweepSummarySchema })
+
+/** Points a shared sweep may carry: the browser's limit, so that a share answer stays a few megabytes. */
+export const SHARED_SWEEP_MAX_POINTS = SWEEP_DEFAULT_MAX_POINTS
+
+/**
+ * A sweep as a share link's reader sees it, read-only, beside the shared
+ * version: no ids of people, workspaces or scenarios (share-link.ts).
+ */
+export const sharedSweepSchema = z.object({
+  title: z.string(),
+  runner: z.enum(SWEEP_RUNNERS),
+  status: z.enum(SWEEP_STATUSES),
+  message: z.string().nullable(),
+  planned: z.number().int(),
+  definition: sweepDefinitionSchema,
+  points: z.array(sweepPointResultSchema),
+})
+export type SharedSweep = z.output<typeof sharedSweepSchema>

@@ -8,10 +8,11 @@
  */
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { sharedScenarioResponseSchema } from '../../shared/schemas/share-link'
 import { sweepDefinitionSchema, type SweepPointResult } from '../../shared/schemas/sweep'
 import { resolveSweep } from '../../shared/sweep/resolve'
 import { runSweep } from '../../shared/sweep/runSweep'
-import { ScenarioVersion } from '../../server/models'
+import { ScenarioVersion, Sweep } from '../../server/models'
 import type { Runtime } from '../../server/runtime'
 import { insertPoints } from '../../server/services/sweeps'
 import { startSweepWorker, type SweepWorker } from '../../server/worker-sweeps'
@@ -79,6 +80,43 @@ describe('server sweeps', () => {
     const created = await api().post(`/api/workspaces/${ws}/sweeps`).set(editor.auth).send({ title: 'of v2', runner: 'browser', definition, scenarioId: scenario.id })
     expect(created.status).toBe(201)
     expect(created.body.sweep).toMatchObject({ scenarioId: scenario.id, versionId: v2?.id })
+  })
+
+  it("is listed with its scenario's version number, and a share link shows it read-only at that version", async () => {
+    const scenario = (await api().post(`/api/workspaces/${ws}/scenarios`).set(editor.auth).send({ content: content({ title: 'Shared sweep' }) }).expect(201)).body.scenario
+    const saved = await api().post(`/api/workspaces/${ws}/sweeps`).set(editor.auth).send({ title: 'of v1', runner: 'browser', definition, scenarioId: scenario.id, points: sequential() })
+    expect(saved.status).toBe(201)
+    const sweepId = saved.body.sweep.id as string
+    // A later version does not move the sweep: it stays with v1, and the link defaults to v1.
+    await api().post(`/api/workspaces/${ws}/scenarios/${scenario.id}/versions`).set(editor.auth).send({ baseVersion: 1, content: content({ title: 'Shared sweep v2' }) }).expect(201)
+    const listed = (await api().get(`/api/workspaces/${ws}/sweeps?scenarioId=${scenario.id}`).set(viewer.auth).expect(200)).body.sweeps
+    expect(listed).toHaveLength(1)
+    expect(listed[0]).toMatchObject({ id: sweepId, version: 1, done: 40, planned: 40 })
+    const badQuery = await api().get(`/api/workspaces/${ws}/sweeps?scenarioId=nope`).set(viewer.auth)
+    expect(badQuery.status).toBe(400)
+    expect(badQuery.body.error.fields).toEqual({ scenarioId: 'scenarioId is a scenario id (a UUID)' })
+
+    const link = await api().post(`/api/workspaces/${ws}/scenarios/${scenario.id}/share-links`).set(editor.auth).send({ sweepId })
+    expect(link.status).toBe(201)
+    expect(link.body.link).toMatchObject({ sweepId, version: 1 })
+    const opened = sharedScenarioResponseSchema.parse((await api().get(`/api/shares/${link.body.token as string}`).expect(200)).body).share
+    expect(opened.version).toBe(1)
+    expect(opened.sweep?.title).toBe('of v1')
+    expect(opened.sweep?.definition.parameters).toEqual(definition.parameters)
+    expect(opened.sweep?.points).toEqual(sequential())
+    // The reader's answer names no ids.
+    expect(JSON.stringify(opened)).not.toContain(sweepId)
+
+    // Another scenario's sweep is refused, naming the field; so is a sweep still running (409).
+    const other = (await api().post(`/api/workspaces/${ws}/scenarios`).set(editor.auth).send({ content: content({ title: 'Other' }) }).expect(201)).body.scenario
+    const foreign = await api().post(`/api/workspaces/${ws}/scenarios/${other.id}/share-links`).set(editor.auth).send({ sweepId })
+    expect(foreign.status).toBe(400)
+    expect(foreign.body.error.fields).toEqual({ sweepId: 'No sweep of this scenario has this id' })
+    // A server sweep's state as a worker leaves it mid-way (set here: the test's workers would finish a real one first).
+    const running = await api().post(`/api/workspaces/${ws}/sweeps`).set(editor.auth).send({ title: 'running', runner: 'browser', definition, scenarioId: other.id })
+    await Sweep.update({ status: 'running' }, { where: { id: running.body.sweep.id as string } })
+    const busy = await api().post(`/api/workspaces/${ws}/scenarios/${other.id}/share-links`).set(editor.auth).send({ sweepId: running.body.sweep.id })
+    expect(busy.status).toBe(409)
   })
 
   it('answers a bad definition with a 400 naming the field, the value and the range', async () => {

@@ -1,8 +1,9 @@
-import { createSweepBodySchema, type CreateSweepBody } from '../../../shared/schemas/sweep'
+import { createSweepBodySchema, sweepListQuerySchema, type CreateSweepBody } from '../../../shared/schemas/sweep'
 import { ALL_WORKSPACE_ROLES, access, currentMembership, currentUser } from '../../auth/access'
 import type { AppContext } from '../../context'
 import type { SecureRouter } from '../../http/secure-router'
 import * as sweeps from '../../services/sweeps'
+import { parseQuery } from '../scenarios/query'
 
 /** Who may do what with sweeps: members read, owners and editors run, save and cancel. */
 export const sweepPermissions = {
@@ -18,7 +19,7 @@ export function sweepRoutes(ctx: AppContext, r: SecureRouter): void {
   const ws = (req: Parameters<typeof currentMembership>[0]) => currentMembership(req).workspaceId
 
   r.get(base, read, async (req, res) => {
-    res.json({ sweeps: await sweeps.listSweeps(ctx, ws(req)) })
+    res.json({ sweeps: await sweeps.listSweeps(ctx, ws(req), parseQuery(sweepListQuerySchema, req).scenarioId) })
   })
   r.post(base, { access: write, body: createSweepBodySchema }, async (req, res) => {
     res.status(201).json({ sweep: await sweeps.createSweep(ctx, currentUser(req), ws(req), req.body as CreateSweepBody) })
