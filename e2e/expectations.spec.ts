@@ -3,7 +3,10 @@
  * claims to saxpy, sees them pass, changes the machine and sees the cycles
  * claim fail with the cycle that decides it; the button moves the cursor
  * there. Saved, the scenario comes back with its claims, and its export
- * checked by `chimeline check` in a shell gives the same verdicts. Expected values: cycles from the same pipeline in Node
+ * checked by `chimeline check` in a shell gives the same verdicts; put in a
+ * suite and run on the server's worker, the suite shows them again, its
+ * failing claim opens the Bench at the deciding cycle, and the suite's own
+ * export gives the same lines in a shell. Expected values: cycles from the same pipeline in Node
  * (shared/sim/run.ts), flops and the memory values by hand from the example
  * (y = 2.5 x + y on 19 floats: one vfmacc strip, 2 x 19 = 38 flops;
  * y[0..2] = 2.5 + 0.5, 5 + 0.5, 7.5 + 0.5 = 3, 5.5, 8, exact in binary32).
@@ -125,5 +128,42 @@ test('add three expectations, see them pass, change the machine, follow the fail
     `PASS  ${title} › flops == 38 (measured 38)`,
     `PASS  ${title} › memory at label y (f32 x 3) equals [3, 5.5, 8] (measured [3, 5.5, 8])`,
   ])
+
+  // The scenario in a suite: Run suite on the server's worker shows the same verdicts, the failing
+  // one linked to its cycle on the Bench; the suite's export gives them again in a shell.
+  await page.getByRole('link', { name: 'Suites' }).first().click()
+  await page.getByTestId('suite-new').click()
+  const suiteTitle = `Saxpy suite ${Date.now()}`
+  await page.getByTestId('suite-title').locator('input').fill(suiteTitle)
+  await page.getByTestId('suite-scenarios').click()
+  await page.keyboard.type(title.slice(0, 20))
+  await page.locator('.n-base-select-option', { hasText: title }).first().click()
+  await page.keyboard.press('Escape')
+  await page.getByTestId('suite-submit').click()
+  await expect(page.getByTestId('suite-heading')).toHaveText(suiteTitle)
+  await page.getByTestId('suite-run-button').click()
+  const suiteRun = page.getByTestId('suite-run')
+  await expect(suiteRun).toHaveAttribute('data-status', 'failed', { timeout: 120_000 })
+  const claims = suiteRun.getByTestId('suite-claim')
+  await expect(claims).toHaveCount(3)
+  await expect(claims.nth(0)).toContainText(new RegExp(`^FAIL\\s*cycles <= ${eight.trace.cycles}\\s*measured ${four.trace.cycles}`))
+  await expect(claims.nth(1)).toContainText(/^PASS\s*flops == 38/)
+  await expect(claims.nth(2)).toContainText(/^PASS\s*memory at label y/)
+  await expect(claims.nth(0).getByTestId('suite-claim-at')).toHaveText(`cycle ${at.cycle}, lane ${at.lane}, instruction ${at.instruction}`)
+  await expect(page.getByTestId('suite-run-model')).toHaveText(/^\d+$/)
+  await screenshot(page, 'suite-run')
+
+  const download = page.waitForEvent('download')
+  await page.getByTestId('suite-export').click()
+  const exported = join(mkdtempSync(join(tmpdir(), 'chimeline-e2e-')), (await download).suggestedFilename())
+  await (await download).saveAs(exported)
+  const fromSuite = spawnSync(process.execPath, ['bin/chimeline.js', 'check', exported], { encoding: 'utf8', timeout: 120_000 })
+  expect(fromSuite.status).toBe(1)
+  expect(fromSuite.stdout.split('\n').filter((l) => /^(PASS|FAIL) /.test(l))).toEqual(cli.stdout.split('\n').filter((l) => /^(PASS|FAIL) /.test(l)))
+
+  // The deciding point opens the version that ran on the Bench, at that cycle.
+  await claims.nth(0).getByTestId('suite-claim-at').click()
+  await expect(page.getByTestId('cursor-cycle')).toContainText(`cycle ${at.cycle} /`, { timeout: 60_000 })
+  await expect(page.getByTestId('scenario-title')).toHaveText(title)
   expect(problems).toEqual([])
 })

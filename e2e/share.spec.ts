@@ -60,7 +60,7 @@ test.describe('share links', () => {
     // A vertical SVG line has no width, so Playwright never calls it visible: count it instead.
     await expect(page.getByTestId('lane-chart-cursor')).toHaveCount(1)
     await expect(page.getByTestId('lane-chart')).toHaveAttribute('data-selected', '1')
-    await expect(page.getByRole('link', { name: 'Sign in to copy it to your workspace' })).toBeVisible()
+    await expect(page.getByRole('link', { name: 'Sign in to make my copy' })).toBeVisible()
     await screenshot(page, 'share-reader')
 
     // The owner revokes it; the reader's next visit gets a clear page.

@@ -19,6 +19,7 @@ import { meRoutes } from './routes/me'
 import { workspaceRoutes } from './routes/workspaces'
 import { docsRoutes } from './routes/docs'
 import { scenarioRoutes } from './routes/scenarios'
+import { suiteRoutes } from './routes/suites'
 import { sweepRoutes } from './routes/sweeps'
 import { shareLinkRoutes } from './routes/share-links'
 import { shareOpenRouter } from './routes/shares'
@@ -59,6 +60,7 @@ export function buildApp(ctx: AppContext): Express {
   workspaceTrashRoutes(api)
   scenarioRoutes(ctx, api)
   sweepRoutes(ctx, api)
+  suiteRoutes(ctx, api)
   shareLinkRoutes(ctx, api)
   uploadRoutes(ctx, api)
   docsRoutes(api)

@@ -6,6 +6,7 @@ import type { Mailer } from './services/mailer'
 import type { RunPool } from './services/run-pool'
 import type { WorkPool } from './services/work-pool'
 import type { ShareOpens } from './services/share-links-open'
+import type { SuiteQueue } from './services/suites-queue'
 import type { SweepQueue } from './services/sweeps-queue'
 
 /** What routes and services need from the running server; built once in runtime.ts. */
@@ -24,4 +25,6 @@ export interface AppContext {
   shares: ShareOpens
   /** Queues server sweeps as chunks for the worker processes (pg-boss, started on first use). */
   sweeps: SweepQueue
+  /** Queues suite runs for the worker processes (pg-boss, started on first use). */
+  suites: SuiteQueue
 }

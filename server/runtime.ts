@@ -1,5 +1,6 @@
 import http, { type RequestListener, type Server } from 'node:http'
 import { createSweepQueue } from './services/sweeps-queue'
+import { createSuiteQueue } from './services/suites-queue'
 import type { AddressInfo } from 'node:net'
 import type { Sequelize } from 'sequelize'
 import { buildApp, securityHeaders } from './app'
@@ -47,7 +48,8 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
   const shares = new ShareOpens(sequelize, createOpenCounter(sequelize, logger, config.shareCountFlushMs))
   const shareListener = await listenForShareLinkChanges(config.databaseUrl, shares, logger)
   const sweeps = createSweepQueue(config.databaseUrl)
-  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shares, sweeps }
+  const suites = createSuiteQueue(config.databaseUrl)
+  const ctx: AppContext = { config, sequelize, mailer, logger, runs, work, signInGuard: createSignInGuard(config.signInLimit), shares, sweeps, suites }
   const app = buildApp(ctx)
   return {
     ctx,
@@ -62,6 +64,7 @@ export async function createRuntime(config: ServerConfig, options: RuntimeOption
       await runs.close()
       await work.close()
       await sweeps.close()
+      await suites.close()
       await sink?.close()
       if (!options.sequelize) await sequelize.close()
     },

@@ -53,7 +53,7 @@ try {
   server = listening.server
   await Membership.create({ workspaceId: workspace.id, userId: user.id, role: 'owner' })
   const auth = { Authorization: `Bearer ${signAccessToken(user.id, (await UserSession.create({ userId: user.id })).id, runtime.ctx.config.jwtSecret)}` }
-  const base = { title: 'Bench', description: '', tags: [], machine: defaultMachine, initialData: [], view: { cursor: null, window: null, selected: null }, expectations: [] }
+  const base = { title: 'Bench', description: '', tags: [], machine: defaultMachine, initialData: [], view: { cursor: null, window: null, selected: null }, expectations: [], walkthroughs: [] }
 
   async function pair(a: string, b: string): Promise<string> {
     const s = await createScenario(runtime.ctx, user, workspace.id, { content: { ...base, program: a }, message: '' })

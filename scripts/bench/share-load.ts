@@ -131,7 +131,7 @@ try {
   workspace = await Workspace.create({ name: 'Share load bench' })
   await Membership.create({ workspaceId: workspace.id, userId: user.id, role: 'owner' })
   const program = '  li a0, 64\nloop:\n  vsetvli t0, a0, e64, m1, ta, ma\n  vfadd.vv v1, v1, v2\n  sub a0, a0, t0\n  bnez a0, loop\n'
-  const scenario = await createScenario(runtime.ctx, user, workspace.id, { content: { title: 'Bench', description: '', tags: [], program, machine: defaultMachine, initialData: [], view: { cursor: 10, window: null, selected: 0 }, expectations: [] }, message: '' })
+  const scenario = await createScenario(runtime.ctx, user, workspace.id, { content: { title: 'Bench', description: '', tags: [], program, machine: defaultMachine, initialData: [], view: { cursor: 10, window: null, selected: 0 }, expectations: [], walkthroughs: [] }, message: '' })
   const { token } = await createShareLink(runtime.ctx, user, workspace.id, scenario.id, { accessMode: 'anyone', expiresAt: null })
   const appUrl = `${listening.url}/api/shares/${token}`
 

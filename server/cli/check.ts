@@ -15,15 +15,12 @@
 import { readFileSync, writeFileSync } from 'node:fs'
 import { pathToFileURL } from 'node:url'
 import { parseArgs } from 'node:util'
-import { evaluateExpectations, type ExpectationRun } from '../../shared/expectations/evaluate'
 import { bundleSchema, type Bundle } from '../../shared/schemas/bundle'
 import type { ExpectationResult } from '../../shared/schemas/expectation'
 import { checkMachine, defaultMachine, type Machine } from '../../shared/schemas/machine'
 import type { ScenarioContent } from '../../shared/schemas/scenario'
-import { assemble } from '../../shared/sim/isa/assembler'
 import { PRESETS } from '../../shared/sim/presets'
-import { runPipeline } from '../../shared/sim/run'
-import { applyInitialData } from '../services/scenario-run'
+import { checkScenario } from '../services/suite-check'
 import { parseErrorPlace, placeOfPath } from './jsonPlace'
 import { toJunit, type CheckedScenario } from './junit'
 import { applySets, mergeMachine, oneFile, parseSets, UsageError, type SimArgs } from './simArgs'
@@ -100,21 +97,6 @@ export function machineFor(content: ScenarioContent, args: CheckArgs): Machine {
   return checked.machine
 }
 
-/** Runs one scenario's content the way the server's run summary does: assemble, write the initial data, run. */
-function runContent(content: ScenarioContent, machine: Machine, where: string): ExpectationRun {
-  const asm = assemble(content.program)
-  if (!asm.ok) {
-    const first = asm.errors[0]
-    return { ok: false, error: { stage: 'assemble', code: first?.code ?? 'assemble', message: first ? `line ${first.line}, column ${first.column}: ${first.message}` : 'the program does not assemble' } }
-  }
-  const applied = applyInitialData(asm.program, content.initialData)
-  if (!applied.ok) {
-    const p = applied.problems[0]
-    throw new UsageError(`${where}.initialData.${p?.index ?? 0}: ${p?.message ?? 'the initial data does not fit the program'}`)
-  }
-  return runPipeline({ program: applied.program, machine })
-}
-
 function line(title: string, r: ExpectationResult): string {
   const parts = [r.measured === null ? null : `measured ${r.measured}`, r.note, !r.pass && r.at ? decidingText(r.at) : null].filter((p) => p !== null)
   return `${r.pass ? 'PASS' : 'FAIL'}  ${title} › ${r.text}${parts.length ? ` (${parts.join('; ')})` : ''}`
@@ -124,8 +106,11 @@ export function decidingText(at: NonNullable<ExpectationResult['at']>): string {
   return [`cycle ${at.cycle}`, at.lane === null ? null : `lane ${at.lane}`, at.instruction === null ? null : `instruction ${at.instruction}`].filter((p) => p !== null).join(', ')
 }
 
-export function check(args: CheckArgs, out: (line: string) => void): { scenarios: CheckedScenario[]; failed: number; total: number } {
+export function check(args: CheckArgs, out: (line: string) => void): { scenarios: CheckedScenario[]; failed: number; total: number; preset: string | undefined } {
   const bundle = readBundle(args.file)
+  // An exported suite runs on its preset, as its runs in the app do, unless --preset says otherwise.
+  const preset = args.preset ?? bundle.suite?.presetId ?? undefined
+  if (bundle.suite) out(`SUITE ${bundle.suite.title}${preset ? ` on preset ${preset}` : ''}`)
   const scenarios: CheckedScenario[] = []
   bundle.scenarios.forEach((s, i) => {
     const last = s.versions.length - 1
@@ -133,14 +118,23 @@ export function check(args: CheckArgs, out: (line: string) => void): { scenarios
     if (!version) return
     const where = `${args.file}: scenarios.${i}.versions.${last}.content`
     const content = version.content
-    const machine = machineFor(content, args)
-    const results = content.expectations.length ? evaluateExpectations(content.expectations, runContent(content, machine, where)) : []
+    const machine = machineFor(content, { ...args, preset })
+    let results: ExpectationResult[] = []
+    if (content.expectations.length) {
+      // The suite workers' own check (server/services/suite-check.ts): one verdict for one bundle.
+      const checked = checkScenario(content, machine)
+      if (!checked.ok) {
+        const p = checked.problems[0]
+        throw new UsageError(`${where}.initialData.${p?.index ?? 0}: ${p?.message ?? 'the initial data does not fit the program'}`)
+      }
+      results = checked.check.results
+    }
     scenarios.push({ title: content.title, version: version.number, results })
     if (!results.length) out(`NONE  ${content.title} (version ${version.number} has no expectations)`)
     for (const r of results) out(line(content.title, r))
   })
   const all = scenarios.flatMap((s) => s.results)
-  return { scenarios, failed: all.filter((r) => !r.pass).length, total: all.length }
+  return { scenarios, failed: all.filter((r) => !r.pass).length, total: all.length, preset }
 }
 
 export function main(argv: string[]): number {
@@ -154,7 +148,7 @@ export function main(argv: string[]): number {
         throw new UsageError(`cannot write --junit ${args.junit}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`)
       }
     }
-    const machineNote = args.preset || args.sets.length ? ` on ${[args.preset ? `preset ${args.preset}` : null, ...args.sets.map((s) => s.text)].filter(Boolean).join(', ')}` : ''
+    const machineNote = result.preset || args.sets.length ? ` on ${[result.preset ? `preset ${result.preset}` : null, ...args.sets.map((s) => s.text)].filter(Boolean).join(', ')}` : ''
     process.stdout.write(`${result.total} expectations in ${result.scenarios.length} scenarios${machineNote}: ${result.total - result.failed} passed, ${result.failed} failed (model estimates, not sign-off for silicon)\n`)
     return result.failed > 0 ? 1 : 0
   } catch (e) {

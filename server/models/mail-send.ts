@@ -4,7 +4,7 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 export class MailSend extends Model<InferAttributes<MailSend>, InferCreationAttributes<MailSend>> {
   declare id: CreationOptional<string>
   declare userId: string
-  declare kind: 'share' | 'invitation'
+  declare kind: 'share' | 'invitation' | 'suite-run'
   declare recipients: number
   declare createdAt: CreationOptional<Date>
 

@@ -2,6 +2,7 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import type { Expectation } from '../../shared/schemas/expectation'
 import type { Machine } from '../../shared/schemas/machine'
 import type { InitialDataEntry, RunSummary, ScenarioView } from '../../shared/schemas/scenario'
+import type { Walkthrough } from '../../shared/schemas/walkthrough'
 import type { User } from './user'
 
 /**
@@ -20,6 +21,7 @@ export class Scenario extends Model<InferAttributes<Scenario>, InferCreationAttr
   declare initialData: InitialDataEntry[]
   declare view: ScenarioView
   declare expectations: CreationOptional<Expectation[]>
+  declare walkthroughs: CreationOptional<Walkthrough[]>
   declare run: RunSummary
   declare authorId: string | null
   declare version: number
@@ -42,6 +44,7 @@ export class Scenario extends Model<InferAttributes<Scenario>, InferCreationAttr
         initialData: { type: DataTypes.JSONB, allowNull: false },
         view: { type: DataTypes.JSONB, allowNull: false },
         expectations: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+        walkthroughs: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         run: { type: DataTypes.JSONB, allowNull: false },
         authorId: { type: DataTypes.UUID, allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false },

@@ -4,6 +4,7 @@ import type { WorkspaceRole } from '../../shared/schemas/workspace'
 import { hashPassword } from '../auth/passwords'
 import type { AppContext } from '../context'
 import { Membership, User, Workspace } from '../models'
+import { seedKernelSuite } from './demo-kernels'
 import { seedDemoScenarios, type DemoScenariosResult } from './demo-scenarios'
 
 /** Our own demo: one workspace, one user per workspace role, and a site admin. */
@@ -56,10 +57,12 @@ export async function seedDemo(sequelize: Sequelize): Promise<{ workspace: Works
 }
 
 /**
- * The whole demo: users, workspace and the example scenarios with their share
- * link. Returns that link's URL for `npm start` to print.
+ * The whole demo: users, workspace, the example scenarios with their share
+ * link, and the kernel suite (demo-kernels.ts). Returns that link's URL for `npm start` to print.
  */
 export async function seedDemoWithScenarios(ctx: AppContext): Promise<DemoScenariosResult> {
   const { workspace, owner } = await seedDemo(ctx.sequelize)
-  return seedDemoScenarios(ctx, workspace, owner)
+  const result = await seedDemoScenarios(ctx, workspace, owner)
+  await seedKernelSuite(ctx, workspace, owner)
+  return result
 }

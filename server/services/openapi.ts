@@ -5,9 +5,11 @@
  * checks that every route the app answers is described.
  */
 import * as sw from '../../shared/schemas/sweep'
+import * as su from '../../shared/schemas/suite'
 import { OpenAPIRegistry, OpenApiGeneratorV31 } from '@asteasolutions/zod-to-openapi'
 import { z } from 'zod'
 import * as auth from '../../shared/schemas/auth'
+import * as classroom from '../../shared/schemas/classroom'
 import { bundleSchema, exportBodySchema } from '../../shared/schemas/bundle'
 import { errorBodySchema } from '../../shared/schemas/errors'
 import { healthResponseSchema } from '../../shared/schemas/health'
@@ -56,6 +58,7 @@ export const DOCUMENTED_ROUTES: DocumentedRoute[] = [
   { method: 'post', path: '/api/workspaces/:id/undo-delete', summary: 'Bring a deleted workspace back within 30 days (410 undo_expired after)', access: 'owner', ok: 200, response: ws.workspaceResponseSchema },
   { method: 'get', path: '/api/workspaces/:id/members', summary: 'Members and pending invitations', access: 'member', ok: 200, response: ws.membersResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/invitations', summary: 'Invite by e-mail', access: 'owner', body: ws.invitationBodySchema, ok: 201, response: ws.invitationResponseSchema },
+  { method: 'post', path: '/api/workspaces/:id/invitations/bulk', summary: 'Invite a class from a pasted list of addresses', access: 'owner', body: classroom.bulkInvitationBodySchema, ok: 201, response: classroom.bulkInvitationResultSchema },
   { method: 'patch', path: '/api/workspaces/:id/members/:userId', summary: 'Change a role', access: 'owner', body: ws.memberRoleBodySchema, ok: 200, response: ws.memberResponseSchema },
   { method: 'delete', path: '/api/workspaces/:id/members/:userId', summary: 'Remove a member, or leave', access: 'owner, or the member themselves', ok: 204 },
   { method: 'post', path: '/api/invitations/accept', summary: 'Accept an invitation token', access: 'signed in', body: ws.acceptInvitationBodySchema, ok: 200, response: ws.workspaceResponseSchema },
@@ -65,6 +68,15 @@ export const DOCUMENTED_ROUTES: DocumentedRoute[] = [
   { method: 'post', path: '/api/workspaces/:id/sweeps', summary: 'Save a browser sweep with its points, or queue a server sweep for the workers (429 past the workspace limits)', access: 'owner, editor', body: sw.createSweepBodySchema, ok: 201, response: sw.sweepCreatedResponseSchema },
   { method: 'get', path: '/api/workspaces/:id/sweeps/:sweepId', summary: 'One sweep: definition, progress and the points done (poll while it runs)', access: 'member', ok: 200, response: sw.sweepResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/sweeps/:sweepId/cancel', summary: 'Cancel a queued or running server sweep; the points done are kept', access: 'owner, editor', ok: 200, response: sw.sweepCreatedResponseSchema },
+  { method: 'get', path: '/api/workspaces/:id/suites', summary: "The workspace's suites with their scenarios, watchers and last run", access: 'member', ok: 200, response: su.suiteListResponseSchema },
+  { method: 'post', path: '/api/workspaces/:id/suites', summary: 'Create a suite: scenarios of the workspace, an optional preset, watchers among its members', access: 'owner, editor', body: su.suiteBodySchema, ok: 201, response: su.suiteResponseSchema },
+  { method: 'get', path: '/api/workspaces/:id/suites/:suiteId', summary: 'One suite', access: 'member', ok: 200, response: su.suiteResponseSchema },
+  { method: 'patch', path: '/api/workspaces/:id/suites/:suiteId', summary: "Replace a suite's title, scenarios, preset and watchers (the whole body)", access: 'owner, editor', body: su.suiteBodySchema, ok: 200, response: su.suiteResponseSchema },
+  { method: 'delete', path: '/api/workspaces/:id/suites/:suiteId', summary: 'Delete a suite and its run history (its scenarios stay)', access: 'owner, editor', ok: 204 },
+  { method: 'get', path: '/api/workspaces/:id/suites/:suiteId/export', summary: "The suite's scenarios as a bundle with the suite's title and preset, for `chimeline check`", access: 'member', ok: 200, response: bundleSchema },
+  { method: 'post', path: '/api/workspaces/:id/suites/:suiteId/runs', summary: 'Queue a run of the suite for the workers, optionally on another preset (429 past the workspace limits)', access: 'owner, editor', body: su.suiteRunBodySchema, ok: 201, response: su.suiteRunCreatedResponseSchema },
+  { method: 'get', path: '/api/workspaces/:id/suites/:suiteId/runs', summary: "The suite's run history, newest first, with each run's model version", access: 'member', ok: 200, response: su.suiteRunListResponseSchema },
+  { method: 'get', path: '/api/workspaces/:id/suites/:suiteId/runs/:runId', summary: 'One run: per scenario the version that ran, each expectation\'s verdict and the characterisation figures', access: 'member', ok: 200, response: su.suiteRunResponseSchema },
   { method: 'get', path: '/api/workspaces/:id/scenarios', summary: 'List scenarios: pagination, sorting, filters by tag, author and text; trash=true lists deleted ones', access: 'member', query: sc.scenarioListQuerySchema, ok: 200, response: sc.scenarioListResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/scenarios', summary: 'Create a scenario (version 1)', access: 'owner, editor', body: sc.createScenarioBodySchema, ok: 201, response: sc.scenarioResponseSchema },
   { method: 'post', path: '/api/workspaces/:id/scenarios/export', summary: 'Export scenarios with their history as one bundle', access: 'member', body: exportBodySchema, ok: 200, response: bundleSchema },

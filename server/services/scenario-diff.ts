@@ -28,15 +28,21 @@ function missingFrom(a: Expectation[], b: Expectation[]): string[] {
   }).map(describeExpectation)
 }
 
+const walkthroughTitles = (v: ScenarioVersion) => v.content.walkthroughs.map((w) => `${w.title} (${w.steps.length} steps)`)
+
 export function diffVersions(from: ScenarioVersion, to: ScenarioVersion): VersionDiff {
   const a = flatten(from.content.machine)
   const b = flatten(to.content.machine)
   const machine = [...new Set([...Object.keys(a), ...Object.keys(b)])]
     .filter((field) => JSON.stringify(a[field]) !== JSON.stringify(b[field]))
     .map((field) => ({ field, before: a[field] ?? null, after: b[field] ?? null }))
-  const fields = (['title', 'description', 'tags', 'initialData', 'view'] as const)
+  const fields: VersionDiff['fields'] = (['title', 'description', 'tags', 'initialData', 'view'] as const)
     .filter((f) => JSON.stringify(from.content[f]) !== JSON.stringify(to.content[f]))
     .map((field) => ({ field, before: from.content[field], after: to.content[field] }))
+  // Walkthroughs are long; the diff names them by title and step count (the history shows the rest).
+  if (JSON.stringify(from.content.walkthroughs) !== JSON.stringify(to.content.walkthroughs)) {
+    fields.push({ field: 'walkthroughs', before: walkthroughTitles(from), after: walkthroughTitles(to) })
+  }
   return {
     from: from.number,
     to: to.number,

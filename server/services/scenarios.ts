@@ -4,7 +4,7 @@
  * Every save writes a new immutable ScenarioVersion and moves the scenario's
  * head (its content and version counter) in one transaction.
  */
-import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize'
+import { Op, literal, type Order, type Transaction, type WhereOptions } from 'sequelize'
 import { UNDO_DAYS, scenarioContentSchema, type CreateScenarioBody, type RunSummary, type SaveScenarioBody, type Scenario as ScenarioDto, type ScenarioContent, type ScenarioListQuery, type ScenarioListResponse, type ScenarioSummary, type ScenarioVersion as VersionDto, type ScenarioVersionSummary } from '../../shared/schemas/scenario'
 import type { AppContext } from '../context'
 import { DetailedApiError } from '../http/detailed-error'
@@ -31,6 +31,7 @@ export function contentOf(s: Scenario): ScenarioContent {
     initialData: s.initialData,
     view: s.view,
     expectations: s.expectations,
+    walkthroughs: s.walkthroughs,
   })
 }
 
@@ -79,8 +80,15 @@ export function versionDto(v: ScenarioVersion): VersionDto {
 }
 
 function versionSummaryDto(v: ScenarioVersion): ScenarioVersionSummary {
-  return { number: v.number, message: v.message, author: { id: v.authorId, name: v.authorName }, createdAt: v.createdAt.toISOString(), run: v.run, originally: originally(v) }
+  const walkthroughs = (v.get('walkthroughList') as ScenarioVersionSummary['walkthroughs'] | null) ?? []
+  return { number: v.number, message: v.message, author: { id: v.authorId, name: v.authorName }, createdAt: v.createdAt.toISOString(), run: v.run, originally: originally(v), walkthroughs }
 }
+
+/** Each version's walkthroughs as {title, steps}, read inside PostgreSQL: a history list never loads whole contents. */
+const WALKTHROUGH_LIST = literal(
+  `(SELECT coalesce(jsonb_agg(jsonb_build_object('title', w->'title', 'steps', jsonb_array_length(w->'steps')) ORDER BY i), '[]'::jsonb)
+    FROM jsonb_array_elements(coalesce("ScenarioVersion"."content"->'walkthroughs', '[]'::jsonb)) WITH ORDINALITY AS t(w, i))`,
+)
 
 /** `%`, `_` and `\` are ILIKE wildcards; a search for them means the characters. */
 const likePattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`
@@ -253,7 +261,11 @@ export async function undoDeleteWorkspace(workspaceId: string): Promise<Workspac
 
 export async function listVersions(workspaceId: string, scenarioId: string): Promise<ScenarioVersionSummary[]> {
   const scenario = await findScenario(workspaceId, scenarioId)
-  const rows = await ScenarioVersion.findAll({ where: { scenarioId: scenario.id }, order: [['number', 'DESC']], attributes: { exclude: ['content'] } })
+  const rows = await ScenarioVersion.findAll({
+    where: { scenarioId: scenario.id },
+    order: [['number', 'DESC']],
+    attributes: { exclude: ['content'], include: [[WALKTHROUGH_LIST, 'walkthroughList']] },
+  })
   return rows.map(versionSummaryDto)
 }
 

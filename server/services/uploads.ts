@@ -24,6 +24,7 @@ import { issuesToFields } from '../http/validate'
 import { Scenario, Upload, Workspace, type User } from '../models'
 import { ElfError, readElf } from './elf/reader'
 import { decodeFunction, listFunctions } from './elf/import'
+import { executableToAssembly, WHOLE_EXECUTABLE, wholeExecutableChoice } from './elf/program'
 import { importBundle, summarizeBundle } from './scenario-bundles'
 import { createScenario } from './scenarios'
 import { instructionsToAssembly } from './uploads-asm'
@@ -141,11 +142,20 @@ function readUpload(file: ReceivedFile, kind: UploadKind, fields: UploadFields):
     case 'elf': {
       let functions
       try {
-        functions = listFunctions(readElf(file.buffer))
+        functions = elfChoices(file.buffer)
       } catch (err) {
         elfProblem(file, err)
       }
       if (!fields.function) throw invalid(`${file.originalname} is an ELF file: choose one of its ${functions.length} function(s) to import`, [], { functions })
+      if (fields.function === WHOLE_EXECUTABLE) {
+        let text
+        try {
+          text = executableToAssembly(readElf(file.buffer), path.basename(file.originalname), IMPORT_MAX_INSTRUCTIONS)
+        } catch (err) {
+          elfProblem(file, err)
+        }
+        return { content: contentFor(file, title, text) }
+      }
       let decoded
       try {
         decoded = decodeFunction(file.buffer, fields.function, IMPORT_MAX_INSTRUCTIONS)
@@ -161,6 +171,17 @@ function readUpload(file: ReceivedFile, kind: UploadKind, fields: UploadFields):
   }
 }
 
+/**
+ * What an ELF file offers to import: an executable's whole program first
+ * (code, data and symbols, entered at its entry point), then each function
+ * of the symbol table.
+ */
+function elfChoices(bytes: Uint8Array) {
+  const elf = readElf(bytes)
+  const whole = wholeExecutableChoice(elf)
+  return whole ? [whole, ...listFunctions(elf)] : listFunctions(elf)
+}
+
 /** The machine an imported program starts on: the preset the upload names, else the workspace's default preset. */
 async function importMachine(workspaceId: string, presetId: string | undefined): Promise<Machine> {
   const id = presetId ?? (await Workspace.findByPk(workspaceId))?.defaultPreset ?? DEFAULT_PRESET_ID
@@ -173,7 +194,7 @@ export function inspectUpload(file: ReceivedFile, fields: UploadFields): UploadI
   const base = { kind, fileName: file.originalname, size: file.size }
   if (kind === 'elf') {
     try {
-      return { ...base, functions: listFunctions(readElf(file.buffer)) }
+      return { ...base, functions: elfChoices(file.buffer) }
     } catch (err) {
       elfProblem(file, err)
     }

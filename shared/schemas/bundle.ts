@@ -9,14 +9,19 @@
  * - versions are in order, numbered 1, 2, 3 ... without gaps; the last is the
  *   scenario's current content;
  * - `content` is a ScenarioContent (title, description, tags, program,
- *   machine, initialData, view, expectations) with every default filled in;
- *   bundles written before expectations existed have none, and read as [];
+ *   machine, initialData, view, expectations, walkthroughs) with every
+ *   default filled in; bundles written before expectations or walkthroughs
+ *   existed have none, and read as [];
  * - `author` is the author's display name as it was;
  * - `run` is the summary recorded when the version was saved.
+ * - `suite` (optional) is present when a suite was exported: its title and
+ *   the preset its runs use (null: each scenario's own machine), which
+ *   `chimeline check` uses unless given --preset.
  * A later formatVersion will come with a reader for this one.
  */
 import { z } from 'zod'
 import { runSummarySchema, scenarioContentSchema } from './scenario'
+import { PRESET_IDS } from '../sim/presets'
 
 export const BUNDLE_FORMAT = 'chimeline-scenario-bundle'
 export const BUNDLE_FORMAT_VERSION = 1
@@ -56,6 +61,13 @@ export const bundleSchema = z
     formatVersion: z.literal(BUNDLE_FORMAT_VERSION, { error: `formatVersion ${BUNDLE_FORMAT_VERSION} is the only one this Chimeline reads` }),
     exportedAt: z.iso.datetime(),
     scenarios: z.array(bundleScenarioSchema).min(1, 'A bundle holds at least one scenario').max(BUNDLE_MAX_SCENARIOS, `At most ${BUNDLE_MAX_SCENARIOS} scenarios per bundle`),
+    suite: z
+      .object({
+        title: z.string().max(200),
+        presetId: z.enum(PRESET_IDS, { error: `The preset is one of ${PRESET_IDS.join(', ')}` }).nullable(),
+      })
+      .strict()
+      .optional(),
   })
   .strict()
 export type Bundle = z.output<typeof bundleSchema>

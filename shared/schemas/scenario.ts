@@ -7,6 +7,7 @@ import { z } from 'zod'
 import { expectationListSchema } from './expectation'
 import { machineSchema } from './machine'
 import { textFieldError } from './text'
+import { walkthroughListSchema } from './walkthrough'
 import { STALL_REASONS } from '../sim/trace/types'
 
 export const SCENARIO_TITLE_MAX_LENGTH = 200
@@ -98,6 +99,11 @@ export const scenarioContentSchema = z
     view: scenarioViewSchema.prefault({}),
     /** Claims each run is checked against (shared/schemas/expectation.ts); versions and bundles from before them have none. */
     expectations: expectationListSchema.default([]),
+    /**
+     * Step-by-step explanations of this version's run (shared/schemas/walkthrough.ts). They belong to
+     * the version: its cycles are the cycles they point at. Versions and bundles from before them have none.
+     */
+    walkthroughs: walkthroughListSchema.default([]),
   })
   .strict()
 /** Validated content: every default filled in, so two equal scenarios compare equal. */
@@ -150,8 +156,10 @@ export const scenarioVersionSchema = z.object({
 })
 export type ScenarioVersion = z.infer<typeof scenarioVersionSchema>
 
-/** A version without its content, for history lists. */
-export const scenarioVersionSummarySchema = scenarioVersionSchema.omit({ content: true })
+/** A version without its content, for history lists: its walkthroughs by title and length only. */
+export const scenarioVersionSummarySchema = scenarioVersionSchema.omit({ content: true }).extend({
+  walkthroughs: z.array(z.object({ title: z.string(), steps: z.number().int() })).default([]),
+})
 export type ScenarioVersionSummary = z.infer<typeof scenarioVersionSummarySchema>
 
 /** A scenario as the API shows it: its newest content and version number. */

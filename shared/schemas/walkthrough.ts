@@ -20,6 +20,8 @@ import { STALL_REASONS } from '../sim/trace/types'
 import { textFieldError } from './text'
 
 export const WALKTHROUGH_TITLE_MAX_LENGTH = 200
+/** Walkthroughs one scenario version may carry (a lecture's few stories, each on the same run). */
+export const WALKTHROUGHS_MAX = 10
 /** A lecture's worth of steps; a longer story is two walkthroughs. */
 export const WALKTHROUGH_STEPS_MAX = 50
 /** A note is a caption beside the chart, not an essay. */
@@ -159,3 +161,6 @@ export const walkthroughSchema = z
   .strict()
 export type Walkthrough = z.output<typeof walkthroughSchema>
 export type WalkthroughInput = z.input<typeof walkthroughSchema>
+
+/** The walkthroughs of one scenario version, in the order the teacher keeps them. */
+export const walkthroughListSchema = z.array(walkthroughSchema).max(WALKTHROUGHS_MAX, `At most ${WALKTHROUGHS_MAX} walkthroughs per scenario version`)

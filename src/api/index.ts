@@ -4,6 +4,7 @@ import { createHttp, type HttpOptions } from './http'
 import { createMembersApi } from './members'
 import { createScenarioApi } from './scenarios'
 import { createShareApi } from './shares'
+import { createSuiteApi } from './suites'
 import { createSweepApi } from './sweeps'
 import { createUploadApi } from './uploads'
 import { createWorkspaceApi } from './workspaces'
@@ -23,6 +24,7 @@ export function createApi(options: HttpOptions = {}) {
     shares: createShareApi(http),
     uploads: createUploadApi(http),
     sweeps: createSweepApi(http),
+    suites: createSuiteApi(http),
   }
 }
 

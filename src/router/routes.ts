@@ -64,10 +64,37 @@ export const routes: RouteRecordRaw[] = [
     meta: { title: 'Side by side', requiresAuth: true },
   },
   {
+    path: '/suites',
+    name: 'suites',
+    component: () => import('@/views/SuitesView.vue'),
+    meta: { title: 'Suites', requiresAuth: true },
+  },
+  {
+    path: '/suites/:id',
+    name: 'suite',
+    component: () => import('@/views/SuiteView.vue'),
+    props: true,
+    meta: { title: 'Suite', requiresAuth: true },
+  },
+  {
+    path: '/suites/:id/report',
+    name: 'suite-report',
+    component: () => import('@/views/ReportView.vue'),
+    props: true,
+    meta: { title: 'Characterisation report', requiresAuth: true },
+  },
+  {
     path: '/learn',
     name: 'learn',
     component: () => import('@/views/LearnView.vue'),
     meta: { title: 'Learn', requiresAuth: true },
+  },
+  {
+    path: '/learn/:lessonId',
+    name: 'learn-lesson',
+    component: () => import('@/views/LearnLessonView.vue'),
+    props: true,
+    meta: { title: 'Lesson', requiresAuth: true },
   },
   {
     path: '/admin/outbox',

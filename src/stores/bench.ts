@@ -10,7 +10,7 @@ import { assemble } from '@shared/sim/isa'
 import { checkMachine, defaultMachine, parseMachine, type Machine } from '@shared/schemas/machine'
 import { DEFAULT_PRESET_ID, findPreset, PRESETS } from '@shared/sim/presets'
 import type { FpReductionOrder } from '@shared/sim/run'
-import { useSimulator, type UseSimulatorOptions } from '@/composables/useSimulator'
+import { useSimulator } from '@/composables/useSimulator'
 import { clampCycle, nextEvent, previousEvent, scrubberEvents } from '@/lib/bench/events'
 import { exampleList, type Example } from '@shared/examples'
 import { indexTrace, inspectCycle } from '@/lib/bench/inspector'
@@ -35,16 +35,6 @@ export const RUN_MARK = 'chimeline:run'
 export const DRAWN_MARK = 'chimeline:chart-drawn'
 export const RUN_TO_CHART = 'chimeline:run-to-chart'
 
-export interface BenchStoreOptions {
-  simulator?: UseSimulatorOptions
-}
-
-let storeOptions: BenchStoreOptions = {}
-/** Lets tests give the store a Worker of their own before its first use. */
-export function configureBenchStore(options: BenchStoreOptions): void {
-  storeOptions = options
-}
-
 export const useBenchStore = defineStore('bench', () => {
   const firstExample = EXAMPLES[0]
   const exampleId = ref<string | null>(firstExample?.id ?? null)
@@ -57,10 +47,11 @@ export const useBenchStore = defineStore('bench', () => {
   const autoRun = ref(true)
   /** The order vfredusum sums in: element order (as QEMU) or this machine's; only the rounding differs. */
   const fpOrder = ref<FpReductionOrder>('element')
-  const sim = useSimulator(storeOptions.simulator)
+  const sim = useSimulator()
 
   const cursor = ref<number | null>(null)
-  const window = ref<CycleWindow | null>(null)
+  /** The Lane chart's zoom window (not named `window`: that is the DOM's global). */
+  const cycleWindow = ref<CycleWindow | null>(null)
   const selected = ref<number | null>(null)
   const selectedRegister = ref<number | null>(null)
   const subRows = ref(false)
@@ -134,7 +125,7 @@ export const useBenchStore = defineStore('bench', () => {
     // Keep the view when it still fits the new run (a changed machine), else start at cycle 0.
     if (cursor.value === null || cursor.value >= t.cycles) cursor.value = 0
     if (selected.value !== null && !t.instructions.some((i) => i.index === selected.value)) selected.value = null
-    if (window.value && window.value.start >= t.cycles) window.value = null
+    if (cycleWindow.value && cycleWindow.value.start >= t.cycles) cycleWindow.value = null
   }
 
   async function measureNeighbours(text: string, m: Machine | null): Promise<void> {
@@ -167,7 +158,7 @@ export const useBenchStore = defineStore('bench', () => {
     source.value = ex.source
     cursor.value = null
     selected.value = null
-    window.value = null
+    cycleWindow.value = null
   }
 
   function setSource(text: string): void {
@@ -236,7 +227,7 @@ export const useBenchStore = defineStore('bench', () => {
   // The view as it is saved, shared and put in the URL: whole cycles (the chart zooms through fractions).
   const view = computed<BenchView>(() => ({
     cursor: wholeCycle(cursor.value),
-    window: wholeWindow(window.value),
+    window: wholeWindow(cycleWindow.value),
     selected: selected.value,
     subRows: subRows.value,
     dependencies: showDependencies.value,
@@ -246,7 +237,7 @@ export const useBenchStore = defineStore('bench', () => {
   function setView(input: Parameters<typeof benchViewOf>[0]): void {
     const v = benchViewOf(input)
     cursor.value = v.cursor
-    window.value = v.window
+    cycleWindow.value = v.window
     selected.value = v.selected
     subRows.value = v.subRows
     showDependencies.value = v.dependencies
@@ -265,7 +256,7 @@ export const useBenchStore = defineStore('bench', () => {
   }
 
   return {
-    exampleId, title, source, presetId, machineDraft, autoRun, fpOrder, cursor, window, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
+    exampleId, title, source, presetId, machineDraft, autoRun, fpOrder, cursor, cycleWindow, selected, selectedRegister, subRows, showDependencies, playing, speed, runStartedAt, runs,
     assembled, program, machine, fieldErrors, stale, reveal, revealInEditor, summary, preset, currentPreset, trace, traceIndex, events, explanation, rows, ragged, raggedText, registerGroups, registers, dependencies, cycleState, cycles, view,
     functional: sim.functional, error: sim.error, progress: sim.progress, running: sim.running,
     run, cancel: sim.cancel, scheduleRun, loadExample, setSource, applyPreset, resetMachine, setMachineField,

@@ -1,5 +1,6 @@
 import { computed, ref, shallowRef } from 'vue'
 import { defineStore } from 'pinia'
+import type { BulkInvitationBody, BulkInvitationResult } from '@shared/schemas/classroom'
 import type { InvitationBody, MembersResponse, WorkspaceRole } from '@shared/schemas/workspace'
 import { ApiError } from '@/api'
 import { leaveBlocker, memberActions, type Viewer } from '@/lib/workspace/memberRules'
@@ -57,6 +58,12 @@ export const useMembersStore = defineStore('members', () => {
     await load()
   }
 
+  async function inviteClass(body: BulkInvitationBody): Promise<BulkInvitationResult> {
+    const result = await auth.api.members.inviteClass(requireWorkspace(), body)
+    await load()
+    return result
+  }
+
   async function changeRole(userId: string, role: WorkspaceRole) {
     await auth.api.members.changeRole(requireWorkspace(), userId, role)
     await load()
@@ -95,5 +102,5 @@ export const useMembersStore = defineStore('members', () => {
     await workspace.load()
   }
 
-  return { data, loadedFor, loading, error, viewer, rows, cannotLeave, load, invite, changeRole, remove, transferOwnership, leave }
+  return { data, loadedFor, loading, error, viewer, rows, cannotLeave, load, invite, inviteClass, changeRole, remove, transferOwnership, leave }
 })

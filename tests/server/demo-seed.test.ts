@@ -6,10 +6,11 @@
 import fs from 'node:fs'
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { Scenario, ScenarioVersion, ShareLink, Workspace } from '../../server/models'
+import { Scenario, ScenarioVersion, ShareLink, Suite, Workspace } from '../../server/models'
 import type { Runtime } from '../../server/runtime'
 import { demoShareToken } from '../../server/services/demo-scenarios'
 import { DEMO_WORKSPACE, seedDemoWithScenarios } from '../../server/services/demo-seed'
+import { KERNELS, KERNEL_SUITE_TITLE } from '../../server/services/demo-kernels'
 import { hashToken } from '../../server/auth/tokens'
 import { startTestServer } from './helpers'
 
@@ -45,6 +46,11 @@ describe('the demo seed', () => {
     expect(again.created).toBe(0)
     expect(again.shareUrl).toBe(first.shareUrl)
     expect(await Scenario.count({ where: { workspaceId: workspace!.id }, paranoid: false })).toBe(scenarios.length)
+    // The kernel suite (server/services/demo-kernels.ts): one scenario per kernel, made once.
+    const suites = await Suite.findAll({ where: { workspaceId: workspace!.id, title: KERNEL_SUITE_TITLE } })
+    expect(suites).toHaveLength(1)
+    expect(suites[0]?.scenarioIds).toHaveLength(KERNELS.length)
+    expect(scenarios.filter((s) => s.tags.includes('kernel')).map((s) => s.title).sort()).toEqual(KERNELS.map((k) => k.title).sort())
   })
 
   it('keeps one anyone share link whose printed URL opens without signing in', async () => {

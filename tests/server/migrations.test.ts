@@ -36,7 +36,7 @@ describe('migrations', () => {
       expect(applied.map((m) => m.name)).toEqual([...applied.map((m) => m.name)].sort())
       const tables = async () =>
         (await sequelize.getQueryInterface().showAllTables()).filter((t) => t !== 'schema_migrations').sort()
-      expect(await tables()).toEqual(['invitations', 'mail_sends', 'memberships', 'outbox_messages', 'password_resets', 'refresh_tokens', 'scenario_versions', 'scenarios', 'sessions', 'share_links', 'sweep_points', 'sweeps', 'uploads', 'users', 'workspaces'])
+      expect(await tables()).toEqual(['invitations', 'mail_sends', 'memberships', 'outbox_messages', 'password_resets', 'refresh_tokens', 'scenario_versions', 'scenarios', 'sessions', 'share_links', 'suite_runs', 'suites', 'sweep_points', 'sweeps', 'uploads', 'users', 'workspaces'])
       for (let i = applied.length; i > 0; i--) await migrator.down()
       expect(await tables()).toEqual([])
       expect(await migrator.pending()).toHaveLength(applied.length)

@@ -53,6 +53,14 @@ const ACTIONS: Action[] = [
     allowed: ['owner'],
   },
   {
+    name: 'invite a class (bulk)',
+    method: 'post',
+    path: (w) => `/api/workspaces/${w.workspace.id}/invitations/bulk`,
+    body: () => ({ addresses: `${uniqueEmail('student')}\n${uniqueEmail('student')}` }),
+    ok: 201,
+    allowed: ['owner'],
+  },
+  {
     name: "change another member's role",
     method: 'patch',
     path: (w) => `/api/workspaces/${w.workspace.id}/members/${w.target.id}`,

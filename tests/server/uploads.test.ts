@@ -10,6 +10,9 @@ import type { Runtime } from '../../server/runtime'
 import { IMPORT_MAX_INSTRUCTIONS, UPLOAD_MAX_BYTES, uploadErrorBodySchema, uploadInspectionSchema, uploadResponseSchema } from '../../shared/schemas/upload'
 import { scenarioResponseSchema } from '../../shared/schemas/scenario'
 import { startTestServer } from './helpers'
+import { WHOLE_EXECUTABLE } from '../../server/services/elf/program'
+import { readElf } from '../../server/services/elf/reader'
+import { assemble } from '../../shared/sim/isa/assembler'
 import { defaultMachine, parseMachine } from '../../shared/schemas/machine'
 import { findPreset } from '../../shared/sim/presets'
 import { SAXPY, buildTeam, type Team } from './scenario-helpers'
@@ -126,7 +129,7 @@ describe.skipIf(!haveBinutils)('uploads of RISC-V ELF files built with GNU binut
     const before = await counts()
     const insp = uploadInspectionSchema.parse((await upload('kernels', exe, {}, 'uploads/inspect').expect(200)).body)
     expect(insp.kind).toBe('elf')
-    expect(insp.functions?.map((f) => f.name)).toEqual(['saxpy', 'dot', 'scale_table'])
+    expect(insp.functions?.map((f) => f.name)).toEqual([WHOLE_EXECUTABLE, 'saxpy', 'dot', 'scale_table'])
     expect(await counts()).toEqual(before)
     const res = await upload('kernels', exe, { function: 'dot' })
     expect(res.status).toBe(201)
@@ -141,8 +144,21 @@ describe.skipIf(!haveBinutils)('uploads of RISC-V ELF files built with GNU binut
     const res = await refused('kernels', exe)
     expect(res.status).toBe(400)
     const body = uploadErrorBodySchema.parse(res.body)
-    expect(body.error.message).toBe('kernels is an ELF file: choose one of its 3 function(s) to import')
-    expect(body.functions?.map((f) => f.name)).toEqual(['saxpy', 'dot', 'scale_table'])
+    expect(body.error.message).toBe('kernels is an ELF file: choose one of its 4 function(s) to import')
+    expect(body.functions?.map((f) => f.name)).toEqual([WHOLE_EXECUTABLE, 'saxpy', 'dot', 'scale_table'])
+  })
+
+  it('the whole executable imports with its data at the addresses of the file, entered at its entry point', async () => {
+    const res = await upload('kernels', exe, { function: WHOLE_EXECUTABLE })
+    expect(res.status).toBe(201)
+    const { scenarios } = uploadResponseSchema.parse(res.body)
+    const s = (await request(runtime.app).get(`/api/workspaces/${team.workspace.id}/scenarios/${scenarios[0]?.id}`).set(team.viewer.auth)).body.scenario
+    const text: string = s.content.program
+    expect(text).toMatch(/^ {2}\.origin 0x[0-9a-f]+$/m)
+    expect(text).toMatch(/^_start:\nsaxpy:$/m) // -e saxpy: the entry point gets _start
+    expect(text).toMatch(/^table:$/m) // the data symbol scale_table reads
+    const program = assemble(text)
+    expect(program.ok && program.program.entry).toBe(readElf(exe).entry)
   })
 
   it.each([

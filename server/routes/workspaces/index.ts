@@ -7,10 +7,13 @@ import {
   type MemberRoleBody,
   type WorkspaceBody,
   type WorkspacePatch,
+  type WorkspaceRole,
 } from '../../../shared/schemas/workspace'
+import { bulkInvitationBodySchema } from '../../../shared/schemas/classroom'
 import { ALL_WORKSPACE_ROLES, access, currentMembership, currentUser } from '../../auth/access'
 import type { AppContext } from '../../context'
 import type { SecureRouter } from '../../http/secure-router'
+import { inviteClass } from '../../services/classroom'
 import * as workspaces from '../../services/workspaces'
 
 /** Who may do what in a workspace; the role-matrix test reads the same table. */
@@ -20,6 +23,7 @@ export const workspacePermissions = {
   delete: ['owner'],
   listMembers: ALL_WORKSPACE_ROLES,
   invite: ['owner'],
+  inviteClass: ['owner'],
   changeRole: ['owner'],
   removeMember: ['owner'],
 } as const
@@ -57,6 +61,16 @@ export function workspaceRoutes(ctx: AppContext, r: SecureRouter): void {
     async (req, res) => {
       const invitation = await workspaces.invite(ctx, currentUser(req), currentMembership(req).workspaceId, req.body as InvitationBody)
       res.status(201).json({ invitation })
+    },
+  )
+
+  // A class at once: a pasted list of addresses (services/classroom.ts says what happens to each).
+  r.post(
+    '/workspaces/:id/invitations/bulk',
+    { access: access.workspace(workspacePermissions.inviteClass), body: bulkInvitationBodySchema },
+    async (req, res) => {
+      const body = req.body as { addresses: string; role: WorkspaceRole }
+      res.status(201).json(await inviteClass(ctx, currentUser(req), currentMembership(req).workspaceId, body.addresses, body.role))
     },
   )
 

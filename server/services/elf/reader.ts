@@ -22,12 +22,14 @@ const ET_NAMES: Record<number, string> = { 1: 'relocatable object', 2: 'executab
 /** Branch and jump relocations whose target is already encoded when it lies in the same section. */
 const R_RISCV_BRANCH = 16
 const R_RISCV_JAL = 17
+const R_RISCV_RVC_BRANCH = 44
+const R_RISCV_RVC_JUMP = 45
 const R_RISCV_ALIGN = 43
 const R_RISCV_RELAX = 51
 
 export class ElfError extends Error {
   constructor(
-    readonly code: 'not-elf' | 'elf-class' | 'elf-endian' | 'elf-machine' | 'truncated' | 'bad-table' | 'no-symtab' | 'no-function' | 'relocation',
+    readonly code: 'not-elf' | 'elf-class' | 'elf-endian' | 'elf-machine' | 'truncated' | 'bad-table' | 'no-symtab' | 'no-function' | 'relocation' | 'layout',
     message: string,
     readonly offset: number,
   ) {
@@ -234,7 +236,7 @@ export function functionBytes(elf: ElfFile, fn: ElfFunctionInfo): Uint8Array {
         const symIndex = Math.floor(info / 2 ** 32)
         if (kind === R_RISCV_RELAX || kind === R_RISCV_ALIGN) continue
         const sym = symtab?.type === SHT_SYMTAB ? elf.symbols[symIndex] : undefined
-        const local = (kind === R_RISCV_BRANCH || kind === R_RISCV_JAL) && sym !== undefined && sym.shndx === fn.section.index
+        const local = (kind === R_RISCV_BRANCH || kind === R_RISCV_JAL || kind === R_RISCV_RVC_BRANCH || kind === R_RISCV_RVC_JUMP) && sym !== undefined && sym.shndx === fn.section.index
         if (!local) {
           throw new ElfError('relocation', `${fn.name}+0x${(at - fn.address).toString(16)} needs the linker (relocation type ${kind}${sym?.name ? ` against ${sym.name}` : ''}); link it first (riscv64-linux-gnu-ld) and import the executable`, rela.offset)
         }

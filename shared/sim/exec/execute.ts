@@ -1,6 +1,6 @@
 /**
  * Functional execution of an assembled Program: runs it instruction by
- * instruction on a Machine and returns the final architectural state, what it
+ * instruction on an ArchState (the hart's architectural state) and returns the final architectural state, what it
  * printed and the dynamic instruction stream for the timing model. It never
  * throws: problems come back as a diagnostic at the instruction's line and
  * column.
@@ -13,11 +13,11 @@
  *   }
  */
 import { opInfo, type OpInfo } from '../isa/table'
-import type { Instruction, Program, SimDiagnostic, SourceLoc } from '../isa/types'
-import type { Handler, Recorder, VectorEvent } from './handler'
+import { instructionSize, type Instruction, type Program, type SimDiagnostic, type SourceLoc } from '../isa/types'
+import type { Handler, StreamSink, VectorEvent } from './handler'
 import { handlerTable } from './handlers'
-import { RETURNED_TO_CALLER } from './scalar'
-import { ExecFault, Machine, type UnorderedSum } from './machine'
+import { OUTSIDE_TEXT, RETURNED_TO_CALLER } from './scalar'
+import { ExecFault, ArchState, type UnorderedSum } from './machine'
 import type { DynamicStream, VectorOp } from './stream'
 import type { Vtype } from './vtype'
 import { isValidVlen } from './vtype'
@@ -106,9 +106,9 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   if (program.data.length + stackBytes > memoryLimit) {
     return failure('memory-limit', `memory limit exceeded: the data segment (${program.data.length} bytes) and the stack (${stackBytes} bytes) need more than the limit of ${memoryLimit}`)
   }
-  const m = new Machine(options.vlen, program.data, program.dataBase, stackBytes)
+  const m = new ArchState(options.vlen, program.data, program.dataBase, stackBytes)
   m.unorderedSum = options.fpReductionOrder
-  const code = program.instructions
+  m.readsFpFlags = program.instructions.some((ins) => ins.op.startsWith('csrr') && (ins.operands.csr === 1 || ins.operands.csr === 3))
   const metas: OpInfo[] = []
   const handlers: Handler[] = []
   const vlHistory: number[] = []
@@ -120,7 +120,13 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
     used += bytes
     if (used > memoryLimit) throw new ExecFault('memory-limit', `memory limit exceeded (${memoryLimit} bytes) by ${what}`)
   }
-  const table = handlerTable(program.textBase, {
+  const code = program.instructions
+  // Instructions are 4 or 2 (compressed) bytes: an address's index comes from a table, not a division.
+  const textEnd = code.length ? code[code.length - 1]!.address + instructionSize(code[code.length - 1]!) : program.textBase
+  const indexAt = new Map<number, number>(code.map((ins, i) => [ins.address, i]))
+  indexAt.set(textEnd, code.length)
+  const indexOf = (address: number): number => indexAt.get(address) ?? (address >= program.textBase && address < textEnd ? -1 : OUTSIDE_TEXT)
+  const table = handlerTable(indexOf, {
     write: (bytes) => {
       charge(bytes.length, 'the program output')
       outputChunks.push(bytes.slice())
@@ -142,7 +148,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   const ops: VectorOp[] = []
   let scalarSince = 0
   let index = 0
-  const recorder: Recorder = {
+  const sink: StreamSink = {
     on: options.recordStream !== false,
     vector(ins: Instruction, ev: VectorEvent) {
       const info = metas[index]!
@@ -187,8 +193,8 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   let steps = 0
   let ended: ExecuteSuccess['ended'] = 'end-of-text'
   // _start when the program defines it, else its first instruction.
-  index = program.entry === undefined ? 0 : (program.entry - program.textBase) / 4
-  if (!(Number.isInteger(index) && index >= 0 && index <= code.length)) return failure('jump-range', `the entry point 0x${(program.entry ?? 0).toString(16)} is not an instruction of the program`)
+  index = program.entry === undefined ? 0 : indexOf(program.entry)
+  if (index < 0) return failure('jump-range', `the entry point 0x${(program.entry ?? 0).toString(16)} is not an instruction of the program`)
   try {
     while (index < code.length) {
       if (steps === stepLimit) {
@@ -199,7 +205,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
       steps++
       m.retired = steps - 1
       m.next = index + 1
-      handlers[index]!(m, ins, recorder)
+      handlers[index]!(m, ins, sink)
       if (!metas[index]!.vector) scalarSince++
       if (m.exitCode !== null) {
         ended = 'exit'
@@ -209,10 +215,8 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
         ended = 'return'
         break
       }
-      if (m.next < 0 || m.next > code.length) {
-        const target = program.textBase + 4 * m.next
-        const end = program.textBase + 4 * code.length
-        return failure('jump-range', `${ins.op} jumps outside the program, to address 0x${target.toString(16)} (the text is 0x${program.textBase.toString(16)}..0x${(end - 1).toString(16)})`, ins.loc, index)
+      if (m.next === OUTSIDE_TEXT) {
+        return failure('jump-range', `${ins.op} jumps outside the program, to address 0x${m.jumpTarget.toString(16)} (the text is 0x${program.textBase.toString(16)}..0x${(textEnd - 1).toString(16)})`, ins.loc, index)
       }
       index = m.next
     }

@@ -12,7 +12,36 @@
  *   innocuous?", 1995).
  * - Fused multiply-add is computed exactly on BigInt significands and rounded
  *   once (IEEE 754-2008 fusedMultiplyAdd), for both formats.
+ * - IEEE 754 exception flags (section 7) are raised into an accumulator that
+ *   the scalar F/D handlers take after each instruction into fflags: rounding
+ *   on the exact path raises inexact, overflow and underflow (tininess
+ *   detected after rounding, as RISC-V specifies), the operations raise
+ *   invalid and divide-by-zero. `exact = true` sends RNE through the exact
+ *   path too, so that its flags are known.
  */
+
+/** fflags bits (F extension, "Floating-Point Control and Status Register"): invalid, divide by zero, overflow, underflow, inexact. */
+export const NV = 0x10
+export const DZ = 0x08
+export const OF = 0x04
+export const UF = 0x02
+export const NX = 0x01
+
+// The flags raised since the last takeFlags(). Module state is safe here:
+// execution is synchronous and a handler takes the flags it caused before
+// the next instruction runs.
+let accrued = 0
+
+export function raiseFlags(flags: number): void {
+  accrued |= flags
+}
+
+/** The flags raised since the last call, cleared. */
+export function takeFlags(): number {
+  const f = accrued
+  accrued = 0
+  return f
+}
 
 export interface FloatFormat {
   /** Significand precision in bits, hidden bit included. */
@@ -107,6 +136,8 @@ function maxFinite(fmt: FloatFormat): number {
 export function roundExact(negative: boolean, magnitude: bigint, exponent: number, fmt: FloatFormat, mode: RoundingMode = RNE, sticky = false): number {
   const msb = exponent + bitLength(magnitude) - 1
   if (msb > fmt.emax) return overflow(negative, fmt, mode)
+  // Tininess after rounding (RISC-V): only a value below 2^emin can be tiny.
+  const tiny = msb < fmt.emin && tinyAfterRounding(negative, magnitude, exponent, msb - (fmt.precision - 1), fmt, mode, sticky)
   // Exponent of the last significand bit kept: normal numbers keep `precision`
   // bits, subnormals stop at emin - (precision - 1).
   const lsb = Math.max(msb - (fmt.precision - 1), fmt.emin - (fmt.precision - 1))
@@ -120,9 +151,11 @@ export function roundExact(negative: boolean, magnitude: bigint, exponent: numbe
     const half = 1n << (big - 1n)
     if (roundsUp(mode, negative, rest, half, (kept & 1n) === 1n, sticky)) kept += 1n
     keptExponent = lsb
-  } else if (sticky && roundsUp(mode, negative, 0n, 1n, (kept & 1n) === 1n, true)) {
+    if (rest !== 0n || sticky) accrued |= tiny ? NX | UF : NX
+  } else if (sticky) {
+    accrued |= tiny ? NX | UF : NX
     // Everything kept is exact except the sticky tail, below half an ulp.
-    kept += 1n
+    if (roundsUp(mode, negative, 0n, 1n, (kept & 1n) === 1n, true)) kept += 1n
   }
   // kept < 2^(precision + 1) and the result is representable (or overflows to
   // infinity exactly when rounding carried past emax), so this product is exact.
@@ -132,8 +165,28 @@ export function roundExact(negative: boolean, magnitude: bigint, exponent: numbe
   return negative ? -value : value
 }
 
+/**
+ * Whether (-1)^negative x (magnitude + sticky) x 2^exponent, rounded to
+ * `precision` bits at an unbounded exponent (bits below 2^lsb cut), lies
+ * below 2^emin: RISC-V detects tininess after rounding; underflow is a tiny
+ * result that is also inexact.
+ */
+function tinyAfterRounding(negative: boolean, magnitude: bigint, exponent: number, lsb: number, fmt: FloatFormat, mode: RoundingMode, sticky: boolean): boolean {
+  let rounded = magnitude
+  let roundedExp = exponent
+  if (lsb > exponent) {
+    const big = BigInt(lsb - exponent)
+    rounded = magnitude >> big
+    const rest = magnitude - (rounded << big)
+    if (roundsUp(mode, negative, rest, 1n << (big - 1n), (rounded & 1n) === 1n, sticky)) rounded += 1n
+    roundedExp = lsb
+  } else if (sticky && roundsUp(mode, negative, 0n, 1n, (rounded & 1n) === 1n, true)) rounded += 1n
+  return roundedExp + bitLength(rounded) - 1 < fmt.emin
+}
+
 /** IEEE 754 section 7.4: overflow gives infinity or the largest finite value, by mode and sign. */
 function overflow(negative: boolean, fmt: FloatFormat, mode: RoundingMode): number {
+  accrued |= OF | NX
   const toInf = mode === RNE || mode === RMM || (mode === RUP && !negative) || (mode === RDN && negative)
   const v = toInf ? Infinity : maxFinite(fmt)
   return negative ? -v : v
@@ -145,11 +198,16 @@ function overflow(negative: boolean, fmt: FloatFormat, mode: RoundingMode): numb
  * caller stores the canonical NaN.
  */
 export function fusedMultiplyAdd(a: number, b: number, c: number, fmt: FloatFormat = BINARY64, mode: RoundingMode = RNE): number {
+  // inf x 0 is invalid even when the addend is a quiet NaN (F extension, fused multiply-add).
+  if ((a === 0 && (b === Infinity || b === -Infinity)) || (b === 0 && (a === Infinity || a === -Infinity))) accrued |= NV
   if (Number.isNaN(a) || Number.isNaN(b) || Number.isNaN(c)) return NaN
   const productNegative = (a < 0 || Object.is(a, -0)) !== (b < 0 || Object.is(b, -0))
   if (!Number.isFinite(a) || !Number.isFinite(b)) {
     if (a === 0 || b === 0) return NaN // inf x 0
-    if (!Number.isFinite(c) && (c < 0) !== productNegative) return NaN // inf - inf
+    if (!Number.isFinite(c) && (c < 0) !== productNegative) {
+      accrued |= NV // inf - inf
+      return NaN
+    }
     return productNegative ? -Infinity : Infinity
   }
   if (!Number.isFinite(c)) return c
@@ -180,11 +238,14 @@ const isNeg = (x: number): boolean => x < 0 || Object.is(x, -0)
  * platform's binary64 arithmetic (and Math.fround for binary32, innocuous as
  * noted above); the other modes compute on exact significands.
  */
-export function arith(op: 'add' | 'sub' | 'mul' | 'div' | 'sqrt', a: number, b: number, fmt: FloatFormat, mode: RoundingMode): number {
+export function arith(op: 'add' | 'sub' | 'mul' | 'div' | 'sqrt', a: number, b: number, fmt: FloatFormat, mode: RoundingMode, exact = false): number {
   const fast = op === 'add' ? a + b : op === 'sub' ? a - b : op === 'mul' ? a * b : op === 'div' ? a / b : Math.sqrt(a)
   const r = fmt === BINARY32 ? Math.fround(fast) : fast
+  // A NaN made from numbers is an invalid operation (inf - inf, 0 x inf, 0/0, inf/inf, sqrt of a negative).
+  if (Number.isNaN(r) && !Number.isNaN(a) && (op === 'sqrt' || !Number.isNaN(b))) accrued |= NV
+  if (op === 'div' && b === 0 && a !== 0 && Number.isFinite(a)) accrued |= DZ
   // NaN results and infinite operands give exact special results in every mode.
-  if (mode === RNE || Number.isNaN(r) || !Number.isFinite(a) || (op !== 'sqrt' && !Number.isFinite(b))) return r
+  if ((mode === RNE && !exact) || Number.isNaN(r) || !Number.isFinite(a) || (op !== 'sqrt' && !Number.isFinite(b))) return r
   if (op === 'sqrt') {
     if (a === 0 || a < 0 || !Number.isFinite(a)) return r
     const da = decompose(a)
@@ -245,8 +306,8 @@ function isqrt(n: bigint): bigint {
 }
 
 /** A binary64 value converted to binary32 in `mode` (fcvt.s.d, vfncvt.f.f.w). */
-export function toBinary32(x: number, mode: RoundingMode): number {
-  if (mode === RNE || !Number.isFinite(x) || x === 0) return Math.fround(x)
+export function toBinary32(x: number, mode: RoundingMode, exact = false): number {
+  if ((mode === RNE && !exact) || !Number.isFinite(x) || x === 0) return Math.fround(x)
   const d = decompose(x)
   return roundExact(d.negative, d.significand, d.exponent, BINARY32, mode)
 }
@@ -298,12 +359,20 @@ export function roundToInteger(x: number, mode: RoundingMode): number {
 export function floatToInt(x: number, bits: number, signed: boolean, truncate: boolean, mode: RoundingMode = RNE): bigint {
   const max = signed ? (1n << BigInt(bits - 1)) - 1n : (1n << BigInt(bits)) - 1n
   const min = signed ? -(1n << BigInt(bits - 1)) : 0n
-  if (Number.isNaN(x)) return max
+  if (Number.isNaN(x)) {
+    accrued |= NV
+    return max
+  }
   const r = roundToInteger(x, truncate ? RTZ : mode)
-  if (r === Infinity) return max
-  if (r === -Infinity) return min
+  if (r === Infinity || r === -Infinity) {
+    accrued |= NV
+    return r > 0 ? max : min
+  }
   const v = BigInt(r)
-  if (v > max) return max
-  if (v < min) return min
+  if (v > max || v < min) {
+    accrued |= NV // out of range: invalid, not inexact (unprivileged spec, float-to-integer conversions)
+    return v > max ? max : min
+  }
+  if (r !== x) accrued |= NX
   return v
 }

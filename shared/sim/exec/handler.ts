@@ -1,11 +1,11 @@
 /**
  * What every instruction handler gets: the machine, the static instruction and
- * a recorder for the dynamic stream. Shared checks of vector instructions live
+ * a StreamSink for the dynamic stream. Shared checks of vector instructions live
  * here too.
  */
 import type { Instruction, Sew } from '../isa/types'
 import type { MemoryPattern } from './stream'
-import { ExecFault, type Machine } from './machine'
+import { ExecFault, type ArchState } from './machine'
 
 export interface VectorEvent {
   /** Element width of the data moved; defaults to SEW. */
@@ -26,16 +26,16 @@ export interface VectorEvent {
   wholeRegisters?: number
 }
 
-export interface Recorder {
+export interface StreamSink {
   /** false when no stream is recorded: handlers then skip building addresses and indices. */
   readonly on: boolean
   vector(ins: Instruction, event: VectorEvent): void
 }
 
-export type Handler = (m: Machine, ins: Instruction, rec: Recorder) => void
+export type Handler = (m: ArchState, ins: Instruction, rec: StreamSink) => void
 
 /** A vector instruction needs a legal vtype (V 1.0 section 3.4.4: vill makes them illegal). */
-export function requireVtype(m: Machine, ins: Instruction): void {
+export function requireVtype(m: ArchState, ins: Instruction): void {
   if (m.vtype.vill) {
     throw new ExecFault(
       'illegal-vtype',
@@ -45,7 +45,7 @@ export function requireVtype(m: Machine, ins: Instruction): void {
 }
 
 /** FP vector instructions need SEW 32 or 64 (no half precision). */
-export function requireFpSew(m: Machine, ins: Instruction): 32 | 64 {
+export function requireFpSew(m: ArchState, ins: Instruction): 32 | 64 {
   requireVtype(m, ins)
   const sew = m.vtype.sew
   if (sew !== 32 && sew !== 64) {

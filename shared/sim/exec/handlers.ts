@@ -1,6 +1,6 @@
 /** Every executable mnemonic and its handler. */
 import type { Handler } from './handler'
-import type { Syscalls } from './scalar'
+import type { IndexOf, Syscalls } from './scalar'
 import { scalarHandlers } from './scalar'
 import { configHandlers, type ConfigListener } from './vconfig'
 import { fpHandlers } from './vfp'
@@ -14,9 +14,9 @@ import { fpExtHandlers } from './vfext'
 import { miscHandlers } from './vmisc'
 import { estimateHandlers } from './vestimate'
 
-export function handlerTable(textBase: number, sys: Syscalls, onConfig: ConfigListener): Record<string, Handler> {
+export function handlerTable(indexOf: IndexOf, sys: Syscalls, onConfig: ConfigListener): Record<string, Handler> {
   return {
-    ...scalarHandlers(textBase, sys),
+    ...scalarHandlers(indexOf, sys),
     ...configHandlers(onConfig),
     ...memoryHandlers,
     ...intHandlers,

@@ -41,7 +41,8 @@ export type IntView = Int8Array | Int16Array | Int32Array | Uint8Array | Uint16A
 // defined little-endian, which every platform this runs on is.
 if (new Uint8Array(new Uint16Array([1]).buffer)[0] !== 1) throw new Error('Chimeline needs a little-endian platform')
 
-export class Machine {
+/** The hart's architectural state (not the machine configuration of shared/schemas/machine.ts, which the timing model reads). */
+export class ArchState {
   readonly vlenb: number
   readonly x = new BigInt64Array(32)
   readonly xu = new BigUint64Array(this.x.buffer)
@@ -70,12 +71,20 @@ export class Machine {
 
   /** Index of the next static instruction; handlers of jumps and branches set it. */
   next = 0
+  /** The address of the last jump or taken branch (named when it leaves the text). */
+  jumpTarget = 0
   /** Set by the exit system call. */
   exitCode: number | null = null
   /** Summation order of vfredusum; undefined means element order (as QEMU). */
   unorderedSum: UnorderedSum | undefined
 
-  /** Floating-point CSR fields: frm (dynamic rounding mode) and fflags (accrued exceptions, written by csr* only). */
+  /**
+   * Whether the program can read fflags (a Zicsr instruction names fflags or
+   * fcsr): vector FP instructions work out their exception flags only then,
+   * as that takes an exact computation per element.
+   */
+  readsFpFlags = false
+  /** Floating-point CSR fields: frm (dynamic rounding mode) and fflags (accrued exceptions). */
   frm = 0
   fflags = 0
   /** Fixed-point CSR fields (V 1.0 section 3.8, 3.9): rounding mode and saturation flag. */

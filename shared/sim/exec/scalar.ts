@@ -5,14 +5,14 @@
  * sign-extend (unprivileged ISA, "RV64I Base Integer Instruction Set").
  * F and D are in scalarfp.ts.
  */
-import type { Instruction } from '../isa/types'
+import { instructionSize, type Instruction } from '../isa/types'
 import type { Handler } from './handler'
 import { operand } from './handler'
-import { ExecFault, Machine } from './machine'
+import { ExecFault, ArchState } from './machine'
 import { scalarFpHandlers } from './scalarfp'
 
-const rs1 = (m: Machine, ins: Instruction): bigint => m.x[operand(ins, 'rs1')]!
-const rs2 = (m: Machine, ins: Instruction): bigint => m.x[operand(ins, 'rs2')]!
+const rs1 = (m: ArchState, ins: Instruction): bigint => m.x[operand(ins, 'rs1')]!
+const rs2 = (m: ArchState, ins: Instruction): bigint => m.x[operand(ins, 'rs2')]!
 const imm = (ins: Instruction): bigint => BigInt(operand(ins, 'imm'))
 const shamt = (b: bigint): bigint => BigInt.asUintN(64, b) & 63n
 const u64 = (v: bigint): bigint => BigInt.asUintN(64, v)
@@ -34,22 +34,32 @@ function regImm(fn: Binary): Handler {
  */
 export const RETURNED_TO_CALLER = -1
 
-function jumpTo(m: Machine, textBase: number, target: number): void {
-  if ((target - textBase) % 4 !== 0) throw new ExecFault('misaligned', `jump target 0x${target.toString(16)} is not 4-byte aligned`)
-  m.next = (target - textBase) / 4
+/**
+ * Index of the instruction at an address: -1 inside the text but not at an
+ * instruction's first byte, OUTSIDE_TEXT beyond it. Instructions are 4 or 2
+ * (compressed) bytes long, so targets are looked up, not divided.
+ */
+export type IndexOf = (address: number) => number
+export const OUTSIDE_TEXT = -2
+
+function jumpTo(m: ArchState, indexOf: IndexOf, target: number): void {
+  const i = indexOf(target)
+  if (i === -1) throw new ExecFault('misaligned', `jump target 0x${target.toString(16)} is not the first byte of an instruction`)
+  m.next = i
+  m.jumpTarget = target
 }
 
 type Cond = (a: bigint, b: bigint) => boolean
-function branch(cond: Cond, textBase: number): Handler {
+function branch(cond: Cond, indexOf: IndexOf): Handler {
   return (m, ins) => {
-    if (cond(rs1(m, ins), rs2(m, ins))) jumpTo(m, textBase, ins.address + operand(ins, 'imm'))
+    if (cond(rs1(m, ins), rs2(m, ins))) jumpTo(m, indexOf, ins.address + operand(ins, 'imm'))
   }
 }
 
 /** Loads of 1, 2, 4 or 8 bytes, sign- or zero-extended. */
 function load(width: 1 | 2 | 4 | 8, signed: boolean): Handler {
   return (m, ins) => {
-    const off = m.offset(Machine.address(rs1(m, ins), imm(ins)), width)
+    const off = m.offset(ArchState.address(rs1(m, ins), imm(ins)), width)
     const v = m.mem
     const value = width === 8 ? v.getBigInt64(off, true)
       : width === 4 ? BigInt(signed ? v.getInt32(off, true) : v.getUint32(off, true))
@@ -61,7 +71,7 @@ function load(width: 1 | 2 | 4 | 8, signed: boolean): Handler {
 
 function store(width: 1 | 2 | 4 | 8): Handler {
   return (m, ins) => {
-    const off = m.offset(Machine.address(rs1(m, ins), imm(ins)), width)
+    const off = m.offset(ArchState.address(rs1(m, ins), imm(ins)), width)
     const value = rs2(m, ins)
     if (width === 8) m.mem.setBigInt64(off, value, true)
     else if (width === 4) m.mem.setInt32(off, Number(BigInt.asIntN(32, value)), true)
@@ -113,7 +123,7 @@ const AMOS: Record<string, (o: bigint, v: bigint, w: 4 | 8) => bigint> = {
 }
 
 /** Reads a CSR (privileged spec CSR listing; V 1.0 section 3 for vcsr = vxrm << 1 | vxsat). */
-function readCsr(m: Machine, csr: number): bigint {
+function readCsr(m: ArchState, csr: number): bigint {
   switch (csr) {
     case 0x001: return BigInt(m.fflags)
     case 0x002: return BigInt(m.frm)
@@ -130,7 +140,7 @@ function readCsr(m: Machine, csr: number): bigint {
   }
 }
 
-function writeCsr(m: Machine, csr: number, v: bigint): void {
+function writeCsr(m: ArchState, csr: number, v: bigint): void {
   const n = Number(BigInt.asUintN(32, v))
   switch (csr) {
     case 0x001: m.fflags = n & 0x1f; return
@@ -188,7 +198,7 @@ function ecall(sys: Syscalls): Handler {
   }
 }
 
-export function scalarHandlers(textBase: number, sys: Syscalls): Record<string, Handler> {
+export function scalarHandlers(indexOf: IndexOf, sys: Syscalls): Record<string, Handler> {
   return {
     // lui/auipc: imm is the 20-bit field; the shifted value is sign-extended from 32 bits (RV64I).
     lui: (m, ins) => m.setX(ins.operands.rd, BigInt.asIntN(32, imm(ins) << 12n)),
@@ -234,21 +244,21 @@ export function scalarHandlers(textBase: number, sys: Syscalls): Record<string, 
     divuw: regReg(word(div, false)),
     remw: regReg(word(rem)),
     remuw: regReg(word(rem, false)),
-    beq: branch((a, b) => a === b, textBase),
-    bne: branch((a, b) => a !== b, textBase),
-    blt: branch((a, b) => a < b, textBase),
-    bge: branch((a, b) => a >= b, textBase),
-    bltu: branch((a, b) => u64(a) < u64(b), textBase),
-    bgeu: branch((a, b) => u64(a) >= u64(b), textBase),
+    beq: branch((a, b) => a === b, indexOf),
+    bne: branch((a, b) => a !== b, indexOf),
+    blt: branch((a, b) => a < b, indexOf),
+    bge: branch((a, b) => a >= b, indexOf),
+    bltu: branch((a, b) => u64(a) < u64(b), indexOf),
+    bgeu: branch((a, b) => u64(a) >= u64(b), indexOf),
     jal: (m, ins) => {
-      m.setX(ins.operands.rd, BigInt(ins.address + 4))
-      jumpTo(m, textBase, ins.address + operand(ins, 'imm'))
+      m.setX(ins.operands.rd, BigInt(ins.address + instructionSize(ins)))
+      jumpTo(m, indexOf, ins.address + operand(ins, 'imm'))
     },
     jalr: (m, ins) => {
       const target = Number(BigInt.asUintN(64, rs1(m, ins) + imm(ins)) & ~1n)
-      m.setX(ins.operands.rd, BigInt(ins.address + 4))
+      m.setX(ins.operands.rd, BigInt(ins.address + instructionSize(ins)))
       if (target === 0) m.next = RETURNED_TO_CALLER
-      else jumpTo(m, textBase, target)
+      else jumpTo(m, indexOf, target)
     },
     lb: load(1, true),
     lh: load(2, true),

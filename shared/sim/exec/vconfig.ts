@@ -5,18 +5,18 @@
 import { vlmax } from '../isa/vtype'
 import type { Handler } from './handler'
 import { operand } from './handler'
-import type { Machine } from './machine'
+import type { ArchState } from './machine'
 import { computeVl, decodeVtype } from './vtype'
 
 /** Observes every configuration change (the vl/vtype history of the result). */
-export type ConfigListener = (m: Machine) => void
+export type ConfigListener = (m: ArchState) => void
 
 /**
  * AVL (section 6.2): rs1 != x0 gives x[rs1] (unsigned); rs1 = x0 with rd != x0
  * asks for VLMAX; rs1 = rd = x0 keeps the current vl, limited to the new VLMAX
  * (the specification reserves a VLMAX change there; QEMU limits it the same way).
  */
-function configure(m: Machine, rd: number | undefined, avl: bigint | 'max' | 'keep', vtype: bigint, listen: ConfigListener): void {
+function configure(m: ArchState, rd: number | undefined, avl: bigint | 'max' | 'keep', vtype: bigint, listen: ConfigListener): void {
   const vt = decodeVtype(vtype)
   m.vtype = vt
   if (vt.vill) m.vl = 0
@@ -28,7 +28,7 @@ function configure(m: Machine, rd: number | undefined, avl: bigint | 'max' | 'ke
   listen(m)
 }
 
-function avlOf(m: Machine, rs1: number, rd: number | undefined): bigint | 'max' | 'keep' {
+function avlOf(m: ArchState, rs1: number, rd: number | undefined): bigint | 'max' | 'keep' {
   if (rs1 !== 0) return m.xu[rs1]!
   return rd ? 'max' : 'keep'
 }

@@ -4,10 +4,10 @@
  * the typed-array loops of vint.ts, but one code path for every EEW pair.
  */
 import type { Sew } from '../isa/types'
-import type { Machine } from './machine'
+import type { ArchState } from './machine'
 
 /** Element i of the register group starting at `reg`, read as an EEW-bit signed or unsigned integer. */
-export function readElem(m: Machine, reg: number, eew: Sew, i: number, signed: boolean): bigint {
+export function readElem(m: ArchState, reg: number, eew: Sew, i: number, signed: boolean): bigint {
   const at = m.base(reg, eew) + i
   switch (eew) {
     case 8: return BigInt(signed ? m.i8[at]! : m.u8[at]!)
@@ -18,7 +18,7 @@ export function readElem(m: Machine, reg: number, eew: Sew, i: number, signed: b
 }
 
 /** Writes the low EEW bits of `value` to element i of the group at `reg`. */
-export function writeElem(m: Machine, reg: number, eew: Sew, i: number, value: bigint): void {
+export function writeElem(m: ArchState, reg: number, eew: Sew, i: number, value: bigint): void {
   const at = m.base(reg, eew) + i
   switch (eew) {
     case 8: m.u8[at] = Number(BigInt.asUintN(8, value)); return

@@ -12,7 +12,7 @@
 import { RDN, RTZ, RUP, type RoundingMode } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, requireFpSew } from './handler'
-import { checkGroup, ExecFault, type Machine, regGroup } from './machine'
+import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
 import { readElem, writeElem } from './velem'
 
 const REC7 = Array.from({ length: 128 }, (_, i) => Math.min(127, Math.floor((2 / (1 + (i + 0.5) / 128) - 1) * 128 + 0.5)))
@@ -93,7 +93,7 @@ export function rsqrt7(bits: bigint, f: Format): bigint {
 }
 
 function estimate(kind: 'rec' | 'rsqrt'): Handler {
-  return (m: Machine, ins, rec) => {
+  return (m: ArchState, ins, rec) => {
     const sew = requireFpSew(m, ins)
     const lmul = m.vtype.lmul
     const vd = checkGroup(ins.operands.vd, lmul, 'vd', ins)

@@ -10,7 +10,7 @@
 import type { Instruction, Sew } from '../isa/types'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireVtype } from './handler'
-import { checkGroup, ExecFault, type Machine, regGroup } from './machine'
+import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
 import { readElem, roundoff, writeElem } from './velem'
 
 /** Where the second operand comes from: vs1, x[rs1], or the 5-bit immediate. */
@@ -39,7 +39,7 @@ interface ExtDef {
 const U = (width = 1): Source => ({ width, signed: false })
 const S = (width = 1): Source => ({ width, signed: true })
 
-function scalarOperand(m: Machine, ins: Instruction, form: Form, sew: number, src: Source): bigint {
+function scalarOperand(m: ArchState, ins: Instruction, form: Form, sew: number, src: Source): bigint {
   const raw = form === 'x' ? m.x[operand(ins, 'rs1')]! : BigInt(operand(ins, 'imm'))
   const bits = sew * src.width
   return src.signed ? BigInt.asIntN(bits, raw) : BigInt.asUintN(bits, raw)

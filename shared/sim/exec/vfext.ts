@@ -11,25 +11,25 @@ import type { Instruction, Sew } from '../isa/types'
 import { BINARY64, floatToInt, fusedMultiplyAdd, intToFloat, RTZ, type RoundingMode, toBinary32, BINARY32 } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireVtype } from './handler'
-import { checkGroup, ExecFault, type Machine, regGroup } from './machine'
+import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
 import { readElem, writeElem } from './velem'
 
-function frm(m: Machine, ins: Instruction): RoundingMode {
+function frm(m: ArchState, ins: Instruction): RoundingMode {
   if (m.frm > 4) throw new ExecFault('rounding-mode', `${ins.op}: frm = ${m.frm} is a reserved rounding mode`)
   return m.frm as RoundingMode
 }
 
-function readF(m: Machine, reg: number, eew: 32 | 64, i: number): number {
+function readF(m: ArchState, reg: number, eew: 32 | 64, i: number): number {
   return eew === 64 ? m.f64[m.base(reg, 64) + i]! : m.f32[m.base(reg, 32) + i]!
 }
 
-function writeF(m: Machine, reg: number, eew: 32 | 64, i: number, v: number): void {
+function writeF(m: ArchState, reg: number, eew: 32 | 64, i: number, v: number): void {
   if (eew === 64) m.storeF64(m.base(reg, 64) + i, v)
   else m.storeF32(m.base(reg, 32) + i, v)
 }
 
 /** Checks SEW against what the instruction's formats need and returns the widths. */
-function widths(m: Machine, ins: Instruction, allowed: readonly Sew[]): Sew {
+function widths(m: ArchState, ins: Instruction, allowed: readonly Sew[]): Sew {
   requireVtype(m, ins)
   const sew = m.vtype.sew
   if (!allowed.includes(sew)) {

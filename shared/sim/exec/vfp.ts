@@ -1,12 +1,16 @@
 /**
  * Vector floating point for SEW 32 (binary32) and SEW 64 (binary64): RISC-V V
- * 1.0 section 13, round to nearest even, canonical NaN results.
+ * 1.0 section 13, round to nearest even, canonical NaN results. When the
+ * program can read fflags (ArchState.readsFpFlags), the element-wise
+ * arithmetic, FMA, square root, compares, min/max and single-width
+ * conversions accrue IEEE 754 exception flags as the scalar instructions do
+ * (V 1.0 section 13.1), through fp.ts's exact path.
  */
 import type { Instruction } from '../isa/types'
-import { BINARY32, BINARY64, floatToInt, type FloatFormat, fusedMultiplyAdd as fma, maximumNumber, minimumNumber } from './fp'
+import { arith, BINARY32, BINARY64, floatToInt, type FloatFormat, fusedMultiplyAdd as fma, intToFloat, maximumNumber, minimumNumber, NV, RNE, takeFlags } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireFpSew } from './handler'
-import { checkGroup, type Machine, regGroup } from './machine'
+import { checkGroup, type ArchState, regGroup } from './machine'
 import { copyOrMerge, writeMaskBits } from './vint'
 
 type Form = 'vv' | 'vf'
@@ -15,6 +19,8 @@ type FpFn = (a: number, b: number, d: number, fmt: FloatFormat) => number
 
 interface FpDef {
   fn: FpFn
+  /** The same result through fp.ts's exact path, which raises the exception flags (when fn's fast path does not). */
+  exact?: FpFn
   forms: Form[]
   readsDest?: boolean
 }
@@ -23,12 +29,12 @@ const round = (fmt: FloatFormat, x: number): number => (fmt === BINARY32 ? Math.
 
 const fmaForms: Form[] = ['vv', 'vf']
 const FP_OPS: Record<string, FpDef> = {
-  vfadd: { fn: (a, b, _d, f) => round(f, a + b), forms: ['vv', 'vf'] },
-  vfsub: { fn: (a, b, _d, f) => round(f, a - b), forms: ['vv', 'vf'] },
-  vfrsub: { fn: (a, b, _d, f) => round(f, b - a), forms: ['vf'] },
-  vfmul: { fn: (a, b, _d, f) => round(f, a * b), forms: ['vv', 'vf'] },
-  vfdiv: { fn: (a, b, _d, f) => round(f, a / b), forms: ['vv', 'vf'] },
-  vfrdiv: { fn: (a, b, _d, f) => round(f, b / a), forms: ['vf'] },
+  vfadd: { fn: (a, b, _d, f) => round(f, a + b), exact: (a, b, _d, f) => arith('add', a, b, f, RNE, true), forms: ['vv', 'vf'] },
+  vfsub: { fn: (a, b, _d, f) => round(f, a - b), exact: (a, b, _d, f) => arith('sub', a, b, f, RNE, true), forms: ['vv', 'vf'] },
+  vfrsub: { fn: (a, b, _d, f) => round(f, b - a), exact: (a, b, _d, f) => arith('sub', b, a, f, RNE, true), forms: ['vf'] },
+  vfmul: { fn: (a, b, _d, f) => round(f, a * b), exact: (a, b, _d, f) => arith('mul', a, b, f, RNE, true), forms: ['vv', 'vf'] },
+  vfdiv: { fn: (a, b, _d, f) => round(f, a / b), exact: (a, b, _d, f) => arith('div', a, b, f, RNE, true), forms: ['vv', 'vf'] },
+  vfrdiv: { fn: (a, b, _d, f) => round(f, b / a), exact: (a, b, _d, f) => arith('div', b, a, f, RNE, true), forms: ['vf'] },
   vfmin: { fn: (a, b) => minimumNumber(a, b), forms: ['vv', 'vf'] },
   vfmax: { fn: (a, b) => maximumNumber(a, b), forms: ['vv', 'vf'] },
   // V 1.0 section 13.6; the negations apply to the product and the addend
@@ -44,14 +50,26 @@ const FP_OPS: Record<string, FpDef> = {
 }
 
 /** The f[rs1] operand at SEW (binary32 values must be NaN-boxed). */
-function fScalar(m: Machine, ins: Instruction, sew: 32 | 64): number {
+function fScalar(m: ArchState, ins: Instruction, sew: 32 | 64): number {
   const rs1 = operand(ins, 'rs1')
   return sew === 64 ? m.f[rs1]! : m.f32Operand(rs1)
 }
 
-function fScalarBits(m: Machine, ins: Instruction, sew: 32 | 64): bigint {
+function fScalarBits(m: ArchState, ins: Instruction, sew: 32 | 64): bigint {
   const rs1 = operand(ins, 'rs1')
   return sew === 64 ? m.fBits[rs1]! : BigInt(m.f32OperandBits(rs1))
+}
+
+/** A signaling NaN's bits at SEW (exponent all ones, fraction non-zero, quiet bit clear). */
+function signalingBits(bits: bigint, sew: 32 | 64): boolean {
+  return sew === 64
+    ? (bits & 0x7ff0000000000000n) === 0x7ff0000000000000n && (bits & 0x000fffffffffffffn) !== 0n && (bits & 0x0008000000000000n) === 0n
+    : (bits & 0x7f800000n) === 0x7f800000n && (bits & 0x007fffffn) !== 0n && (bits & 0x00400000n) === 0n
+}
+
+/** Element `i` of the register file at SEW is a signaling NaN. */
+function signalingAt(m: ArchState, i: number, sew: 32 | 64): boolean {
+  return signalingBits(sew === 64 ? m.u64[i]! : BigInt(m.u32[i]!), sew)
 }
 
 function fpOp(def: FpDef, form: Form): Handler {
@@ -69,12 +87,18 @@ function fpOp(def: FpDef, form: Form): Handler {
     const d = m.base(vd, sew)
     const s2 = m.base(vs2, sew)
     const s1 = m.base(vs1, sew)
+    const flags = m.readsFpFlags
+    const fn = (flags && def.exact) || def.fn
+    if (flags) takeFlags()
+    const kSignaling = flags && form === 'vf' && signalingBits(fScalarBits(m, ins, sew), sew)
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(vm, i)) continue
-      const r = def.fn(v[s2 + i]!, form === 'vv' ? v[s1 + i]! : k, def.readsDest ? v[d + i]! : 0, fmt)
+      if (flags && (kSignaling || signalingAt(m, s2 + i, sew) || (form === 'vv' && signalingAt(m, s1 + i, sew)) || (def.readsDest && signalingAt(m, d + i, sew)))) m.fflags |= NV
+      const r = fn(v[s2 + i]!, form === 'vv' ? v[s1 + i]! : k, def.readsDest ? v[d + i]! : 0, fmt)
       if (sew === 64) m.storeF64(d + i, r)
       else m.storeF32(d + i, r)
     }
+    if (flags) m.fflags |= takeFlags()
     if (rec.on) {
       const srcRegs = [regGroup(vs2, lmul)]
       if (form === 'vv') srcRegs.push(regGroup(vs1, lmul))
@@ -85,7 +109,7 @@ function fpOp(def: FpDef, form: Form): Handler {
 }
 
 /** Element-wise unary operation on vs2, with integer or FP views chosen by the caller. */
-function unaryOp(body: (m: Machine, sew: 32 | 64, d: number, s2: number, i: number) => void): Handler {
+function unaryOp(body: (m: ArchState, sew: 32 | 64, d: number, s2: number, i: number) => void): Handler {
   return (m, ins, rec) => {
     const sew = requireFpSew(m, ins)
     const lmul = m.vtype.lmul
@@ -94,12 +118,19 @@ function unaryOp(body: (m: Machine, sew: 32 | 64, d: number, s2: number, i: numb
     checkMaskOverlap(ins, vd)
     const d = m.base(vd, sew)
     const s2 = m.base(vs2, sew)
+    if (m.readsFpFlags) takeFlags()
     for (let i = 0; i < m.vl; i++) if (m.active(ins.operands.vm, i)) body(m, sew, d + i, s2 + i, i)
+    if (m.readsFpFlags) m.fflags |= takeFlags()
     if (rec.on) rec.vector(ins, { dstRegs: regGroup(vd, lmul), srcRegs: [regGroup(vs2, lmul)] })
   }
 }
 
-const vfsqrt = unaryOp((m, sew, d, s) => (sew === 64 ? m.storeF64(d, Math.sqrt(m.f64[s]!)) : m.storeF32(d, Math.fround(Math.sqrt(m.f32[s]!)))))
+const vfsqrt = unaryOp((m, sew, d, s) => {
+  if (!m.readsFpFlags) return sew === 64 ? m.storeF64(d, Math.sqrt(m.f64[s]!)) : m.storeF32(d, Math.fround(Math.sqrt(m.f32[s]!)))
+  if (signalingAt(m, s, sew)) m.fflags |= NV
+  const r = arith('sqrt', sew === 64 ? m.f64[s]! : m.f32[s]!, 0, sew === 64 ? BINARY64 : BINARY32, RNE, true)
+  return sew === 64 ? m.storeF64(d, r) : m.storeF32(d, r)
+})
 
 /** vfcvt.{x,xu}.f.v and the rtz forms: saturating, NaN gives the largest integer. */
 function toInt(signed: boolean, truncate: boolean): Handler {
@@ -116,7 +147,12 @@ function toInt(signed: boolean, truncate: boolean): Handler {
  */
 function fromInt(signed: boolean): Handler {
   return unaryOp((m, sew, d, s) => {
-    if (sew === 64) m.f64[d] = Number(signed ? m.i64[s]! : m.u64[s]!)
+    // With flags wanted, intToFloat rounds the same way and raises inexact.
+    if (m.readsFpFlags) {
+      const r = intToFloat(sew === 64 ? (signed ? m.i64[s]! : m.u64[s]!) : BigInt(signed ? m.i32[s]! : m.u32[s]!), sew === 64 ? BINARY64 : BINARY32, RNE)
+      if (sew === 64) m.f64[d] = r
+      else m.f32[d] = r
+    } else if (sew === 64) m.f64[d] = Number(signed ? m.i64[s]! : m.u64[s]!)
     else m.f32[d] = Math.fround(signed ? m.i32[s]! : m.u32[s]!)
   })
 }
@@ -154,17 +190,21 @@ function sgnjOp(kind: 'j' | 'n' | 'x', form: Form): Handler {
 }
 
 type FCmp = (a: number, b: number) => boolean
-/** FP compares (V 1.0 section 13.13): any NaN operand makes them false, except vmfne. */
-const FCMP_OPS: Record<string, { fn: FCmp; forms: Form[] }> = {
-  vmfeq: { fn: (a, b) => a === b, forms: ['vv', 'vf'] },
-  vmfne: { fn: (a, b) => a !== b, forms: ['vv', 'vf'] },
-  vmflt: { fn: (a, b) => a < b, forms: ['vv', 'vf'] },
-  vmfle: { fn: (a, b) => a <= b, forms: ['vv', 'vf'] },
-  vmfgt: { fn: (a, b) => a > b, forms: ['vf'] },
-  vmfge: { fn: (a, b) => a >= b, forms: ['vf'] },
+/**
+ * FP compares (V 1.0 section 13.13): any NaN operand makes them false, except
+ * vmfne. vmfeq/vmfne are quiet (invalid only for a signaling NaN), the
+ * ordered ones signal on any NaN, as feq and flt/fle do.
+ */
+const FCMP_OPS: Record<string, { fn: FCmp; forms: Form[]; signaling: boolean }> = {
+  vmfeq: { fn: (a, b) => a === b, forms: ['vv', 'vf'], signaling: false },
+  vmfne: { fn: (a, b) => a !== b, forms: ['vv', 'vf'], signaling: false },
+  vmflt: { fn: (a, b) => a < b, forms: ['vv', 'vf'], signaling: true },
+  vmfle: { fn: (a, b) => a <= b, forms: ['vv', 'vf'], signaling: true },
+  vmfgt: { fn: (a, b) => a > b, forms: ['vf'], signaling: true },
+  vmfge: { fn: (a, b) => a >= b, forms: ['vf'], signaling: true },
 }
 
-function fcmpOp(fn: FCmp, form: Form): Handler {
+function fcmpOp(fn: FCmp, form: Form, signaling: boolean): Handler {
   return (m, ins, rec) => {
     const sew = requireFpSew(m, ins)
     const lmul = m.vtype.lmul
@@ -176,7 +216,16 @@ function fcmpOp(fn: FCmp, form: Form): Handler {
     const s2 = m.base(vs2, sew)
     const s1 = m.base(vs1, sew)
     const bits = new Uint8Array(m.vl)
-    for (let i = 0; i < m.vl; i++) if (m.active(ins.operands.vm, i)) bits[i] = fn(v[s2 + i]!, form === 'vv' ? v[s1 + i]! : k) ? 1 : 2
+    const kSignaling = form === 'vf' && signalingBits(fScalarBits(m, ins, sew), sew)
+    for (let i = 0; i < m.vl; i++) {
+      if (!m.active(ins.operands.vm, i)) continue
+      const a = v[s2 + i]!
+      const b = form === 'vv' ? v[s1 + i]! : k
+      bits[i] = fn(a, b) ? 1 : 2
+      if (m.readsFpFlags && (a !== a || b !== b)) {
+        if (signaling || signalingAt(m, s2 + i, sew) || (form === 'vv' ? signalingAt(m, s1 + i, sew) : kSignaling)) m.fflags |= NV
+      }
+    }
     writeMaskBits(m, vd, bits)
     if (rec.on) {
       const srcRegs = [regGroup(vs2, lmul)]
@@ -234,7 +283,7 @@ export const fpHandlers: Record<string, Handler> = {
   'vfmv.s.f': vfmvSF,
 }
 for (const [name, def] of Object.entries(FP_OPS)) for (const form of def.forms) fpHandlers[`${name}.${form}`] = fpOp(def, form)
-for (const [name, def] of Object.entries(FCMP_OPS)) for (const form of def.forms) fpHandlers[`${name}.${form}`] = fcmpOp(def.fn, form)
+for (const [name, def] of Object.entries(FCMP_OPS)) for (const form of def.forms) fpHandlers[`${name}.${form}`] = fcmpOp(def.fn, form, def.signaling)
 for (const form of ['vv', 'vf'] as const) {
   fpHandlers[`vfsgnj.${form}`] = sgnjOp('j', form)
   fpHandlers[`vfsgnjn.${form}`] = sgnjOp('n', form)

@@ -6,7 +6,7 @@
 import type { Instruction, Sew } from '../isa/types'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireVtype } from './handler'
-import { checkGroup, ExecFault, type Machine, regGroup } from './machine'
+import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
 
 type Form = 'vv' | 'vx' | 'vi'
 type NumFn = (a: number, b: number, d: number, sew: number) => number
@@ -23,7 +23,7 @@ interface IntDef {
 }
 
 /** The scalar operand of a .vx/.vi form, truncated to SEW bits (V 1.0 section 11.1). */
-function scalar(m: Machine, ins: Instruction, form: Form, sew: Sew, signed: boolean): bigint {
+function scalar(m: ArchState, ins: Instruction, form: Form, sew: Sew, signed: boolean): bigint {
   const raw = form === 'vx' ? m.x[operand(ins, 'rs1')]! : BigInt(operand(ins, 'imm'))
   return signed ? BigInt.asIntN(sew, raw) : BigInt.asUintN(sew, raw)
 }
@@ -176,7 +176,7 @@ function cmpOp(def: CmpDef, form: Form): Handler {
 }
 
 /** bits[i]: 0 leaves mask bit i undisturbed, 1 sets it, 2 clears it. */
-export function writeMaskBits(m: Machine, vd: number, bits: Uint8Array): void {
+export function writeMaskBits(m: ArchState, vd: number, bits: Uint8Array): void {
   for (let i = 0; i < bits.length; i++) if (bits[i]) m.setMaskBit(vd, i, bits[i] === 1)
 }
 
@@ -203,7 +203,7 @@ function mergeOp(form: Form, merge: boolean): Handler {
  * vd[i] = (merge && !v0[i]) ? vs2[i] : (vs1 >= 0 ? vs1[i] : k), for i < vl, bit for
  * bit (shared by the FP merge and move).
  */
-export function copyOrMerge(m: Machine, sew: Sew, vd: number, vs2: number, vs1: number, k: bigint, merge: boolean): void {
+export function copyOrMerge(m: ArchState, sew: Sew, vd: number, vs2: number, vs1: number, k: bigint, merge: boolean): void {
   const vl = m.vl
   const d = m.base(vd, sew)
   const s2 = m.base(vs2, sew)

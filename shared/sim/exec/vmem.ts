@@ -7,7 +7,7 @@
 import type { Instruction, Lmul, Sew } from '../isa/types'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireVtype } from './handler'
-import { checkGroup, ExecFault, Machine, regGroup } from './machine'
+import { checkGroup, ExecFault, ArchState, regGroup } from './machine'
 import type { MemoryPattern } from './stream'
 
 type Pattern = Exclude<MemoryPattern, 'mask'>
@@ -21,7 +21,7 @@ function emulOf(ins: Instruction, eew: Sew, sew: Sew, lmul: Lmul): number {
   return emul
 }
 
-function readMem(m: Machine, address: number, width: Sew): bigint | number {
+function readMem(m: ArchState, address: number, width: Sew): bigint | number {
   const off = m.offset(address, width >> 3)
   switch (width) {
     case 8:
@@ -35,7 +35,7 @@ function readMem(m: Machine, address: number, width: Sew): bigint | number {
   }
 }
 
-function writeMem(m: Machine, address: number, width: Sew, value: bigint | number): void {
+function writeMem(m: ArchState, address: number, width: Sew, value: bigint | number): void {
   const off = m.offset(address, width >> 3)
   switch (width) {
     case 8:
@@ -49,17 +49,17 @@ function writeMem(m: Machine, address: number, width: Sew, value: bigint | numbe
   }
 }
 
-function readReg(m: Machine, index: number, width: Sew): bigint | number {
+function readReg(m: ArchState, index: number, width: Sew): bigint | number {
   return width === 64 ? m.u64[index]! : m.ints(width, false)[index]!
 }
 
-function writeReg(m: Machine, index: number, width: Sew, value: bigint | number): void {
+function writeReg(m: ArchState, index: number, width: Sew, value: bigint | number): void {
   if (width === 64) m.u64[index] = BigInt(value)
   else m.ints(width, false)[index] = Number(value)
 }
 
 /** Whether an access of `size` bytes at `address` would fault (outside the data memory and stack, or misaligned). */
-function faults(m: Machine, address: number, size: number): boolean {
+function faults(m: ArchState, address: number, size: number): boolean {
   return m.locate(address, size) < 0 || address % size !== 0
 }
 
@@ -89,7 +89,7 @@ function memoryOp(pattern: Pattern, eew: Sew, isStore: boolean, nf = 1, faultOnl
     const base = Number(m.xu[operand(ins, 'rs1')]!)
     const stride = pattern === 'strided' ? Number(m.x[operand(ins, 'rs2')]!) : bytes * nf
     const ix = m.base(vs2, eew)
-    const addressOf = (i: number): number => (indexed ? Machine.address(BigInt(m.xu[operand(ins, 'rs1')]!), BigInt(readReg(m, ix + i, eew))) : base + i * stride)
+    const addressOf = (i: number): number => (indexed ? ArchState.address(BigInt(m.xu[operand(ins, 'rs1')]!), BigInt(readReg(m, ix + i, eew))) : base + i * stride)
     if (faultOnlyFirst) {
       for (let i = 1; i < vl; i++) {
         if (!m.active(ins.operands.vm, i)) continue

@@ -6,13 +6,13 @@
 import type { Instruction, Sew } from '../isa/types'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireFpSew, requireVtype } from './handler'
-import { checkGroup, ExecFault, groupSize, type Machine, regGroup } from './machine'
+import { checkGroup, ExecFault, groupSize, type ArchState, regGroup } from './machine'
 
 /** Unsigned SEW-bit elements of a register group, copied out of the register file. */
 class Snapshot {
   private readonly narrow: Uint8Array | Uint16Array | Uint32Array | undefined
   private readonly wide: BigUint64Array | undefined
-  constructor(m: Machine, reg: number, lmul: number, sew: Sew) {
+  constructor(m: ArchState, reg: number, lmul: number, sew: Sew) {
     const bytes = m.u8.slice(reg * m.vlenb, (reg + groupSize(lmul)) * m.vlenb)
     if (sew === 64) this.wide = new BigUint64Array(bytes.buffer)
     else this.narrow = sew === 8 ? bytes : sew === 16 ? new Uint16Array(bytes.buffer) : new Uint32Array(bytes.buffer)
@@ -22,7 +22,7 @@ class Snapshot {
   }
 }
 
-function setElem(m: Machine, sew: Sew, index: number, value: bigint): void {
+function setElem(m: ArchState, sew: Sew, index: number, value: bigint): void {
   if (sew === 64) m.u64[index] = BigInt.asUintN(64, value)
   else m.ints(sew, false)[index] = Number(BigInt.asUintN(sew, value))
 }
@@ -34,7 +34,7 @@ function checkNoOverlap(ins: Instruction, vd: number, src: number, size: number,
 }
 
 /** The x or f scalar an instruction slides in, as SEW bits. */
-function scalarBits(m: Machine, ins: Instruction, fp: boolean): bigint {
+function scalarBits(m: ArchState, ins: Instruction, fp: boolean): bigint {
   const rs1 = operand(ins, 'rs1')
   if (!fp) return m.x[rs1]!
   return m.vtype.sew === 64 ? m.fBits[rs1]! : BigInt(m.f32OperandBits(rs1))

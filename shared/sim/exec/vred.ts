@@ -6,7 +6,7 @@
 import { maximumNumber, minimumNumber } from './fp'
 import type { Handler } from './handler'
 import { requireFpSew, requireVtype } from './handler'
-import { checkGroup, type Machine, regGroup } from './machine'
+import { checkGroup, type ArchState, regGroup } from './machine'
 
 type NumOp = (a: number, b: number) => number
 type BigOp = (a: bigint, b: bigint) => bigint
@@ -22,7 +22,7 @@ const INT_REDUCTIONS: Record<string, { num: NumOp; big: BigOp; signed: boolean }
   vredminu: { num: Math.min, big: (a, b) => (a < b ? a : b), signed: false },
 }
 
-function operands(m: Machine, ins: Parameters<Handler>[1]): { vd: number; vs2: number; vs1: number } {
+function operands(m: ArchState, ins: Parameters<Handler>[1]): { vd: number; vs2: number; vs1: number } {
   const lmul = m.vtype.lmul
   return {
     vd: checkGroup(ins.operands.vd, 1, 'vd', ins),

@@ -7,10 +7,14 @@
  * Layout: text at `textBase` (default 0x10000, the start of the text segment
  * of riscv64-linux-gnu-ld's default linker script), data at the next 4 KiB
  * boundary after the text. Programs only depend on pc-relative `la`, so the
- * exact bases do not change their results.
+ * exact bases do not change their results. `.origin ADDRESS` at the start of
+ * the text or of the data places it at that address instead (Chimeline's own
+ * directive: an imported executable keeps the addresses of its file).
+ * Instructions take 4 bytes, the RV64C forms written as `c.addi` ... 2.
  */
+import { compressedForm, compressedWord, expandedArgs, formatCompressed } from './compressed'
 import { applyDirective, isDirective, writeInt, type DataFixup, type DataState, type Section } from './directives'
-import { evalExpr, type Expr } from './expr'
+import { evalExpr, parseExpr, type Expr } from './expr'
 import { diag, nearest } from './diagnostics'
 import type { OperandKind } from './fields'
 import { formatInstruction } from './format'
@@ -45,11 +49,14 @@ export const ASSEMBLE_DEFAULTS = {
 } as const satisfies Required<AssembleOptions>
 
 interface Pending extends CheckedInstruction {
+  /** The c. form it was written as (2 bytes), else absent (4 bytes). */
+  compressed?: string
   label?: NonNullable<Parsed['label']>
   reloc?: NonNullable<Parsed['reloc']> | { op: 'pcrel_lo_prev'; expr: Expr; column: number }
 }
 
 const MNEMONICS: readonly string[] = [...OPS.map((o) => o.op), ...Object.keys(PSEUDOS)]
+const NOP: Operands = { rd: 0, rs1: 0, imm: 0 }
 
 function usage(info: OpInfo): string {
   const names: Partial<Record<OperandKind, string>> = { xd: 'rd', fd: 'fd', xs1: 'rs1', fs1: 'fs1', xs2: 'rs2', fs2: 'fs2', fs3: 'fs3', load: 'offset(rs1)', store: 'offset(rs1)', vaddr: '(rs1)', branch: 'label', jump: 'label', simm5: 'imm', uimm5: 'uimm', avl5: 'uimm', simm12: 'imm', shamt6: 'shamt', shamt5: 'shamt', uimm20: 'imm', vtypei11: 'vtype', vtypei10: 'vtype' }
@@ -113,12 +120,21 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
   const code: Pending[] = []
   const data: DataState = { bytes: new Uint8Array(256), size: 0, maxBytes: opt.maxDataBytes }
   let section: Section = 'text'
-  const textLabels = new Map<string, { index: number; loc: SourceLoc }>()
+  const textLabels = new Map<string, { index: number; offset: number; loc: SourceLoc }>()
   const dataLabels = new Map<string, { offset: number; loc: SourceLoc }>()
   const constants = new Map<string, { value: bigint; loc: SourceLoc }>()
   const numericCount = new Map<string, number>()
   const fixups: DataFixup[] = []
   let tooMany = false
+  /** Bytes of text so far; `.origin` of the text and of the data. */
+  let textSize = 0
+  let textOrigin: number | undefined
+  let dataOrigin: { address: number; loc: SourceLoc } | undefined
+  const push = (p: Pending): void => {
+    p.address = textSize // an offset until the layout adds the base
+    code.push(p)
+    textSize += p.compressed ? 2 : 4
+  }
 
   // `1b` is the latest definition of 1 so far, `1f` the next one.
   const rename = (name: string): string => {
@@ -159,18 +175,28 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
           continue
         }
       }
-      if (section === 'text') textLabels.set(key, { index: code.length, loc })
+      if (section === 'text') textLabels.set(key, { index: code.length, offset: textSize, loc })
       else dataLabels.set(key, { offset: data.size, loc })
     }
     const m = lexed.mnemonic
     if (!m) continue
     const loc = { line: lineNo, column: m.column }
     const name = m.text.toLowerCase()
+    if (name === '.origin') {
+      const where = originOf(lexed.operands, loc, section, section === 'text' ? code.length > 0 : data.size > 0, operandCtx)
+      if ('code' in where) report(where)
+      else if (section === 'text') textOrigin = where.address
+      else if (section === 'data') dataOrigin = { address: where.address, loc }
+      continue
+    }
     if (isDirective(name)) {
-      const r = applyDirective(name, lexed.operands, loc, { section, data, textBytes: code.length * 4, symbol, rename, defineConstant, fixups })
+      const r = applyDirective(name, lexed.operands, loc, { section, data, textBytes: (textOrigin ?? opt.textBase) + textSize, symbol, rename, defineConstant, fixups })
       report(r.error)
       if (r.section) section = r.section
-      for (let k = 0; k < (r.textPadding ?? 0); k++) code.push({ info: opInfo('addi') as OpInfo, operands: { rd: 0, rs1: 0, imm: 0 }, address: 0, loc, columns: {} })
+      // Padding with nops as GNU as does: 4-byte ones, and a c.nop for a 2-byte remainder.
+      for (let k = r.textPadding ?? 0; k > 0; k -= k >= 4 ? 4 : 2) {
+        push({ info: opInfo('addi') as OpInfo, operands: { ...NOP }, address: 0, loc, columns: {}, ...(k >= 4 ? {} : { compressed: 'c.nop' }) })
+      }
       continue
     }
     if (section !== 'text') {
@@ -180,7 +206,13 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
     let expansions: Expansion[] | SimDiagnostic
     const pseudo = pseudoNamed(name)
     const info = opInfo(name)
-    if (pseudo && (!info || pseudo.applies(lexed.operands))) {
+    const cform = compressedForm(name)
+    if (cform) {
+      const args = expandedArgs(cform, lexed.operands, (text, like) => ({ text, column: like.column }))
+      expansions = typeof args === 'number'
+        ? diag(loc, 'operand-count', `${name} takes ${args} operand${args === 1 ? '' : 's'}; found ${lexed.operands.length}`)
+        : [{ op: cform.op, args }]
+    } else if (pseudo && (!info || pseudo.applies(lexed.operands))) {
       expansions = pseudo.applies(lexed.operands)
         ? pseudo.expand(lexed.operands, m, lineNo, operandCtx)
         : diag(loc, 'operand-count', `${name} takes ${pseudo.usage || 'no operands'}; found ${lexed.operands.length} operand${lexed.operands.length === 1 ? '' : 's'}`)
@@ -208,7 +240,8 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
         report(p)
         break
       }
-      code.push(p)
+      if (cform) p.compressed = cform.name
+      push(p)
     }
     if (code.length > opt.maxInstructions) {
       report(diag(loc, 'too-many-instructions', `more than ${opt.maxInstructions} instructions (after expanding pseudo-instructions)`))
@@ -219,17 +252,19 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
   if (errors.length) return { ok: false, errors }
 
   // ---- layout and symbol resolution ----
-  const textBase = opt.textBase
-  const textEnd = textBase + code.length * 4
-  const dataBase = Math.ceil(textEnd / 4096) * 4096
+  const textBase = textOrigin ?? opt.textBase
+  const textEnd = textBase + textSize
+  const dataBase = dataOrigin?.address ?? Math.ceil(textEnd / 4096) * 4096
+  if (dataOrigin && data.size > 0 && dataBase < textEnd && dataBase + data.size > textBase) {
+    report(diag(dataOrigin.loc, 'bad-directive', `.origin: the data at 0x${dataBase.toString(16)} would overlap the text (0x${textBase.toString(16)}..0x${(textEnd - 1).toString(16)})`))
+    return { ok: false, errors }
+  }
   // No prototype: a label may be called __proto__ or constructor.
   const symbols = Object.create(null) as Record<string, number>
   for (const [n, c] of constants) symbols[n] = Number(c.value)
-  for (const [n, l] of textLabels) symbols[n] = textBase + l.index * 4
+  for (const [n, l] of textLabels) symbols[n] = textBase + l.offset
   for (const [n, l] of dataLabels) symbols[n] = dataBase + l.offset
-  code.forEach((p, i) => {
-    p.address = textBase + i * 4
-  })
+  for (const p of code) p.address += textBase
   const shown = (key: string): string => key.split('\u0000')[0] ?? key
   const lookup = (name: string): bigint | undefined => (name in symbols ? BigInt(symbols[name] as number) : undefined)
   const resolveExpr = (e: Expr, column: number, line: number, dot?: number): bigint | undefined => {
@@ -289,12 +324,19 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
       }
     }
   }
+  for (const p of code) {
+    if (!p.compressed) continue
+    const form = compressedForm(p.compressed)
+    if (form && compressedWord(form, p.info.op, p.operands) === undefined) {
+      report(diag(p.loc, 'no-compressed-form', `${p.compressed}: ${formatCompressed(form, p.operands, p.label?.name)} has no 16-bit encoding (3-bit register fields take x8..x15, s0-s1 and a0-a5; immediates have a smaller range and some must be non-zero or aligned)`))
+    }
+  }
   for (const f of fixups) {
     const v = resolveExpr(f.expr, f.loc.column, f.loc.line, dataBase + f.dot)
     if (v !== undefined) writeInt(data.bytes, f.offset, f.size, v)
   }
   if (errors.length) return { ok: false, errors }
-  for (const d of checkVectorOperands(code, textBase, textLabels.get('_start')?.index)) report(d)
+  for (const d of checkVectorOperands(code, textLabels.get('_start')?.index)) report(d)
   if (errors.length) return { ok: false, errors }
 
   const instructions: Instruction[] = code.map((p) => {
@@ -304,6 +346,7 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
       text: formatInstruction(p.info, p.operands, p.address, label), loc: p.loc,
     }
     if (label) ins.label = label
+    if (p.compressed) ins.compressed = p.compressed
     return ins
   })
   const visible = [...dataLabels.entries()].filter(([n]) => !n.includes('\u0000'))
@@ -316,6 +359,19 @@ export function assemble(text: string, options: AssembleOptions = {}): AssembleR
       name, address: dataBase + l.offset, size: (sorted[i + 1]?.[1].offset ?? data.size) - l.offset, loc: l.loc,
     })),
   }
-  if (start) program.entry = textBase + start.index * 4
+  if (start) program.entry = textBase + start.offset
   return { ok: true, program }
+}
+
+/** The address of `.origin ADDRESS`, allowed once at the start of the text or of the data. */
+function originOf(args: Token[], loc: SourceLoc, section: Section, started: boolean, ctx: OperandContext): { address: number } | SimDiagnostic {
+  const t = args[0]
+  if (section === 'other') return diag(loc, 'bad-directive', '.origin places the text or the data: use it after .text or .data')
+  if (started) return diag(loc, 'bad-directive', `.origin must come before the first ${section === 'text' ? 'instruction' : 'data'} of the ${section}`)
+  const e = t && args.length === 1 ? parseExpr(t.text, ctx.rename) : undefined
+  const v = e && !('message' in e) ? evalExpr(e, (n) => ctx.symbol?.(n)) : undefined
+  if (!v?.ok || v.value < 0n || v.value >= 1n << 48n || (section === 'text' && v.value % 2n !== 0n)) {
+    return diag({ line: loc.line, column: t?.column ?? loc.column }, 'bad-directive', `.origin takes one address${section === 'text' ? ' (even, as instructions are 2-byte aligned)' : ''}: .origin 0x10000`)
+  }
+  return { address: Number(v.value) }
 }

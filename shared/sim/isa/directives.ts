@@ -38,7 +38,7 @@ export interface DataFixup {
 export interface DirectiveContext {
   section: Section
   data: DataState
-  /** Bytes of text laid out so far. */
+  /** Address of the next instruction (the text base plus the bytes laid out so far). */
   textBytes: number
   /** Value of a constant symbol defined so far. */
   symbol: (name: string) => bigint | undefined
@@ -50,7 +50,7 @@ export interface DirectiveContext {
 export interface DirectiveResult {
   error?: SimDiagnostic
   section?: Section
-  /** Instructions (nops) to insert for alignment in the text section. */
+  /** Bytes of nops to insert for alignment in the text section. */
   textPadding?: number
 }
 
@@ -168,8 +168,8 @@ export function applyDirective(name: string, args: Token[], loc: SourceLoc, ctx:
       return { error: diag(at(args[0]), 'bad-directive', `${name}: expected ${name === '.balign' ? 'a power of two from 1 to 65536' : 'an exponent 0..16'}`) }
     }
     if (section === 'text') {
-      // The text base is 4 KiB-aligned, so offsets decide; pad with nops as GNU as does.
-      return { textPadding: bytes <= 4 ? 0 : ((bytes - (ctx.textBytes % bytes)) % bytes) / 4 }
+      // The next instruction's address decides (instructions are 2 or 4 bytes, so at least 2-byte aligned).
+      return { textPadding: bytes <= 2 ? 0 : (bytes - (ctx.textBytes % bytes)) % bytes }
     }
     const fill = args[1] && args[1].text !== '' ? parseInteger(args[1].text) : 0n
     if (fill === undefined || fill < 0n || fill > 255n) return { error: diag(at(args[1]), 'bad-directive', `${name}: the fill byte must be 0..255`) }

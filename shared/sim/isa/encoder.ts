@@ -2,6 +2,7 @@
  * The encoder: an instruction of the table to its 32-bit word. The word is the
  * table's match bits with each operand inserted into its field.
  */
+import { compressedForm, compressedWord } from './compressed'
 import { FIELDS, IMM_RANGE, insertField } from './fields'
 import { opInfo } from './table'
 import type { Instruction } from './types'
@@ -31,4 +32,16 @@ export function encode(instr: Pick<Instruction, 'op' | 'operands'>): number {
     w |= insertField(kind, instr.operands)
   }
   return w >>> 0
+}
+
+/**
+ * The bits of an instruction as they sit in memory: its 16-bit RV64C form for a
+ * compressed one (size 2), else its 32-bit word. Throws a RangeError as encode does.
+ */
+export function encodeSized(instr: Pick<Instruction, 'op' | 'operands' | 'compressed'>): { bits: number; size: 2 | 4 } {
+  if (!instr.compressed) return { bits: encode(instr), size: 4 }
+  const form = compressedForm(instr.compressed)
+  const bits = form && compressedWord(form, instr.op, instr.operands)
+  if (bits === undefined) throw new RangeError(`encode: ${instr.compressed} has no 16-bit form for these operands of ${instr.op}`)
+  return { bits, size: 2 }
 }

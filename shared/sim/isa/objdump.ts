@@ -1,17 +1,21 @@
 /**
  * Readers for machine code brought in as text: the listing `objdump -d`
  * prints (GNU binutils: "address: word<TAB>text" rows under "<symbol>:"
- * headers) and plain hex words. Both decode through decodeWord into a Program.
+ * headers, with 8 hex digits for a 32-bit instruction and 4 for a 16-bit
+ * compressed one) and plain 32-bit hex words. Both decode through the shared
+ * decoder into a Program.
  */
-import { decodeWord } from './decoder'
+import { decodeHalf, decodeWord } from './decoder'
 import { diag } from './diagnostics'
 import { formatInstruction } from './format'
 import { opInfo, type OpInfo } from './table'
-import type { Instruction, Program, SimDiagnostic } from './types'
+import { instructionSize, type Instruction, type Program, type SimDiagnostic } from './types'
 
 export interface ObjdumpRow {
   address: number
   word: number
+  /** 2 for a 16-bit (compressed) row, else 4. */
+  size: 2 | 4
   /** The text objdump printed, as it printed it (empty for raw hex words). */
   text: string
   line: number
@@ -38,15 +42,17 @@ function build(rows: ObjdumpRow[], symbols: Record<string, number>, textBase: nu
   const errors: SimDiagnostic[] = []
   const instructions: Instruction[] = []
   const nameAt = new Map(Object.entries(symbols).map(([n, a]) => [a, n]))
-  for (const [i, r] of rows.entries()) {
+  let expected = textBase
+  for (const r of rows) {
     if (errors.length >= MAX_ERRORS) break
     const loc = { line: r.line, column: r.column }
-    const expected = textBase + i * 4
     if (r.address !== expected) {
       errors.push(diag(loc, 'address-gap', `address ${r.address.toString(16)} does not follow the previous instruction (expected ${expected.toString(16)})`))
+      expected = r.address + r.size
       continue
     }
-    const d = decodeWord(r.word, r.address)
+    expected += r.size
+    const d = r.size === 2 ? decodeHalf(r.word, r.address) : decodeWord(r.word, r.address)
     if (!d.ok) {
       errors.push(diag(loc, d.error.code, d.error.message))
       continue
@@ -64,7 +70,8 @@ function build(rows: ObjdumpRow[], symbols: Record<string, number>, textBase: nu
     instructions.push(ins)
   }
   if (errors.length) return { ok: false, errors }
-  const dataBase = Math.ceil((textBase + instructions.length * 4) / 4096) * 4096
+  const last = instructions[instructions.length - 1]
+  const dataBase = Math.ceil((last ? last.address + instructionSize(last) : textBase) / 4096) * 4096
   return { ok: true, rows, program: { instructions, textBase, data: new Uint8Array(0), dataBase, symbols, dataLabels: [] } }
 }
 
@@ -86,12 +93,11 @@ export function parseObjdump(text: string, options: ReadOptions = {}): ReadResul
     const m = ROW.exec(raw)
     if (!m || m[2] === undefined || m[4] === undefined) continue
     const column = (m[1]?.length ?? 0) + m[2].length + 1 + (m[3]?.length ?? 0) + 1
-    if (m[4].length !== 8) {
-      const what = m[4].length === 4 ? 'a 16-bit compressed instruction; Chimeline reads 32-bit words only (assemble with .option norvc)' : 'not a 32-bit instruction word'
-      return { ok: false, errors: [diag({ line: i + 1, column }, m[4].length === 4 ? 'compressed' : 'bad-word', `${m[4]} is ${what}`)] }
+    if (m[4].length !== 8 && m[4].length !== 4) {
+      return { ok: false, errors: [diag({ line: i + 1, column }, 'bad-word', `${m[4]} is neither a 32-bit instruction (8 hex digits) nor a 16-bit compressed one (4)`)] }
     }
     if (rows.length >= max) return { ok: false, errors: [diag({ line: i + 1, column: 1 }, 'too-many-instructions', `more than ${max} instructions`)] }
-    rows.push({ address: parseInt(m[2], 16), word: parseInt(m[4], 16) >>> 0, text: (m[5] ?? '').trim(), line: i + 1, column })
+    rows.push({ address: parseInt(m[2], 16), word: parseInt(m[4], 16) >>> 0, size: m[4].length === 4 ? 2 : 4, text: (m[5] ?? '').trim(), line: i + 1, column })
   }
   if (rows.length === 0) return { ok: false, errors: [diag({ line: 1, column: 1 }, 'empty', 'no instruction rows found (expected lines like "   0:\t0d25f557\tvsetvli a0,a1,e32,m4,ta,ma")')] }
   return build(rows, symbols, rows[0]?.address ?? 0)
@@ -113,7 +119,7 @@ export function parseHexWords(text: string, options: ReadOptions = {}): ReadResu
       const column = (m.index ?? 0) + 1
       if (!/^(0x)?[0-9a-fA-F]{1,8}$/i.test(t)) return { ok: false, errors: [diag({ line: i + 1, column }, 'bad-word', `'${t}' is not a 32-bit hex word`)] }
       if (rows.length >= max) return { ok: false, errors: [diag({ line: i + 1, column }, 'too-many-instructions', `more than ${max} instructions`)] }
-      rows.push({ address: textBase + rows.length * 4, word: parseInt(t.replace(/^0x/i, ''), 16) >>> 0, text: '', line: i + 1, column })
+      rows.push({ address: textBase + rows.length * 4, word: parseInt(t.replace(/^0x/i, ''), 16) >>> 0, size: 4, text: '', line: i + 1, column })
     }
   }
   if (rows.length === 0) return { ok: false, errors: [diag({ line: 1, column: 1 }, 'empty', 'no hex words found')] }

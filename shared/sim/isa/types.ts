@@ -74,7 +74,16 @@ export interface Instruction {
   loc?: SourceLoc
   /** For a label operand (branches, jal, la), the label as written. */
   label?: string
+  /**
+   * The `c.` mnemonic of a 16-bit RV64C instruction (read from an ELF file or
+   * an objdump listing, or written as `c.addi` ...): `op` and `operands` are
+   * its 32-bit expansion, which is what runs; absent for 32-bit instructions.
+   */
+  compressed?: string
 }
+
+/** Bytes an instruction takes in the text: 2 for a compressed one, else 4. */
+export const instructionSize = (ins: Pick<Instruction, 'compressed'>): 2 | 4 => (ins.compressed ? 2 : 4)
 
 /** An assembled program: text, initial data and symbols. */
 export interface Program {

@@ -36,9 +36,11 @@ function join(a: State | undefined, b: State): State {
 }
 
 /** The vtype known to be in force before each instruction (undefined: unreachable). */
-export function knownVtypes(code: readonly CheckedInstruction[], textBase: number, entry = 0): (State | undefined)[] {
+export function knownVtypes(code: readonly CheckedInstruction[], entry = 0): (State | undefined)[] {
   const before: (State | undefined)[] = new Array(code.length)
-  const indexOf = (address: number): number => (address - textBase) / 4
+  // Instructions are 4 or 2 (compressed) bytes long: targets are looked up by address.
+  const at = new Map(code.map((c, i) => [c.address, i]))
+  const indexOf = (address: number): number => at.get(address) ?? -1
   const work: number[] = []
   const flow = (i: number, s: State): void => {
     if (i < 0 || i >= code.length || !Number.isInteger(i)) return
@@ -94,9 +96,9 @@ const OVERLAP_SECTION: Record<string, string> = {
 }
 
 /** Diagnostics for register groups and overlaps, in program order. */
-export function checkVectorOperands(code: readonly CheckedInstruction[], textBase: number, entry = 0): SimDiagnostic[] {
+export function checkVectorOperands(code: readonly CheckedInstruction[], entry = 0): SimDiagnostic[] {
   const out: SimDiagnostic[] = []
-  const states = knownVtypes(code, textBase, entry)
+  const states = knownVtypes(code, entry)
   code.forEach((c, i) => {
     const { info, operands: o } = c
     if (!info.vector || info.config) return

@@ -37,6 +37,8 @@ export class Ctx {
   private loadBusLeft = 0
   private storeBusLeft = 0
   private busCycle = -1
+  /** Lanes of the machine each timed lane stands for (1 each unless symmetry.ts groups alike lanes). */
+  readonly laneWeight: Int32Array
   /** Per lane, this cycle: did the lane read, execute, write or hold results in flight. */
   readonly progress: Uint8Array
   /** The cycle being stepped (notes are only valid within it). */
@@ -89,6 +91,7 @@ export class Ctx {
     this.loadBusRes = rec.addResource({ kind: 'bus', name: 'load bus 0', lane: null, capacity: this.m.loadBusBits })
     this.storeBusRes = rec.addResource({ kind: 'bus', name: 'store bus 0', lane: null, capacity: this.m.storeBusBits })
     rec.seal()
+    this.laneWeight = new Int32Array(L).fill(1)
     this.progress = new Uint8Array(L)
     this.denied = Array.from({ length: L }, () => [])
     this.deniedCount = new Int32Array(L)
@@ -136,11 +139,15 @@ export class Ctx {
     return store ? this.storeBusLeft : this.loadBusLeft
   }
 
-  /** An access moves `bits` on the load (or store) bus in cycle c (after busLeft in the same cycle). */
-  takeBus(store: boolean, c: number, bits: number, seq: number): void {
+  /**
+   * An access moves `bits` on the load (or store) bus in cycle c (after
+   * busLeft in the same cycle); `machineBits` is what the machine's bus
+   * carries for them (more when the timed lanes stand for several, symmetry.ts).
+   */
+  takeBus(store: boolean, c: number, bits: number, machineBits: number, seq: number): void {
     if (store) this.storeBusLeft -= bits
     else this.loadBusLeft -= bits
-    this.rec.use(store ? this.storeBusRes : this.loadBusRes, c, bits, seq)
+    this.rec.use(store ? this.storeBusRes : this.loadBusRes, c, machineBits, seq)
   }
 
   busyLane(lane: number): void {

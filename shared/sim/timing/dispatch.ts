@@ -9,6 +9,7 @@ import { REASON } from '../trace/types'
 import type { Ctx } from './context'
 import type { Inst } from './inst'
 import { LoadInst, MemInst, StoreInst } from './memory'
+import { opClass } from './op-class'
 import { PermutationInst } from './permutation'
 import { OrderedReductionInst, ReductionInst } from './reduction'
 import type { TimingState } from './state'
@@ -24,7 +25,7 @@ function makeInst(ctx: Ctx, op: VectorOp, src: Int32Array[], mask: Int32Array | 
     return op.memory?.isStore || op.unit === 'store' ? new StoreInst(ctx, op, src, mask) : new LoadInst(ctx, op, src, mask)
   }
   if (op.shape === 'ordered-reduction') return new OrderedReductionInst(ctx, op, src, mask)
-  if (op.shape === 'reduction' || (op.shape === 'scalar-result' && /^(vcpop|vfirst)/.test(op.op))) {
+  if (op.shape === 'reduction' || (op.shape === 'scalar-result' && opClass(op.op).maskScalar)) {
     return new ReductionInst(ctx, op, src, mask)
   }
   if (op.shape === 'permutation') return new PermutationInst(ctx, op, src, mask)
@@ -48,24 +49,35 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
     s.feReason = R_RENAME
     return false
   }
-  const src = op.srcRegs.map((g) => Int32Array.from(g, (r) => ctx.ren.lookup(r)))
-  const mask = op.masked ? Int32Array.of(ctx.ren.lookup(0)) : null
-  for (const g of src) for (const p of g) ctx.ren.addReader(p)
-  if (mask) ctx.ren.addReader(mask[0] ?? 0)
+  const ren = ctx.ren
+  const src: Int32Array[] = []
+  for (const g of op.srcRegs) {
+    const phys = new Int32Array(g.length)
+    for (let k = 0; k < g.length; k++) {
+      const p = ren.lookup(g[k] ?? 0)
+      phys[k] = p
+      ren.addReader(p)
+    }
+    src.push(phys)
+  }
+  const mask = op.masked ? Int32Array.of(ren.lookup(0)) : null
+  if (mask) ren.addReader(mask[0] ?? 0)
   const inst = makeInst(ctx, op, src, mask)
-  const dst = new Int32Array(op.dstRegs.length)
-  const old = new Int32Array(op.dstRegs.length)
-  op.dstRegs.forEach((r, k) => {
-    const [p, o] = ctx.ren.rename(r)
+  const n = op.dstRegs.length
+  const dst = new Int32Array(n)
+  const old = new Int32Array(n)
+  for (let k = 0; k < n; k++) {
+    const [p, o] = ren.rename(op.dstRegs[k] ?? 0)
     ctx.rf.invalidate(p)
     dst[k] = p
     old[k] = o
-  })
+  }
   inst.dst = dst
   inst.oldDst = old
   inst.dispatch = c
   s.dispatchAt[op.seq] = c
   s.inflight.push(inst)
+  if (inst.hasGlobal) s.globalInsts.push(inst)
   if (inst instanceof MemInst) {
     s.mem.push(inst)
     s.memQueued++

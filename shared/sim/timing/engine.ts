@@ -7,15 +7,22 @@
  * cycle is classified as busy, stalled (one reason) or idle. The parts live in
  * state.ts, dispatch.ts, issue.ts, memory-start.ts and stalls.ts.
  */
-import { frontEnd } from './dispatch'
+import { frontEnd as frontEndOf } from './dispatch'
 import type { Inst } from './inst'
-import { issueStaggered, issueTogether } from './issue'
-import { memoryStart } from './memory-start'
+import { issueStaggered as issueStaggeredOf, issueTogether as issueTogetherOf } from './issue'
+import { memoryStart as memoryStartOf } from './memory-start'
 import type { TimingState } from './state'
-import { classify } from './stalls'
+import { classify as classifyOf } from './stalls'
 
 export type { TimingState } from './state'
 export { STALL_COUNT, createTimingState } from './state'
+
+// Imported functions copied once: under tsx's module transform (Node: the CLIs, the server, the bench) each use of an imported binding is a getter call.
+const frontEnd = frontEndOf
+const issueStaggered = issueStaggeredOf
+const issueTogether = issueTogetherOf
+const memoryStart = memoryStartOf
+const classify = classifyOf
 
 /** Marks "no instruction waits" in Ctx.waitSeq. */
 const NONE = 0x7fffffff
@@ -42,7 +49,9 @@ export function step(s: TimingState): boolean {
   }
   memoryStart(s, c)
   const fl = s.inflight
-  for (let i = 0; i < fl.length; i++) (fl[i] as Inst).global(c)
+  // Only memory instructions, reductions and permutations have a phase outside the lanes.
+  const gl = s.globalInsts
+  for (let i = 0; i < gl.length; i++) (gl[i] as Inst).global(c)
   const together = s.machine.issue !== 'staggered'
   if (together) issueTogether(s, c)
   // Per lane, only instructions started and not finished there take part (most of the queue waits).
@@ -82,6 +91,7 @@ export function step(s: TimingState): boolean {
   if (s.finished) {
     s.finished = false
     s.inflight = fl.filter((i) => i.complete < 0)
+    s.globalInsts = s.globalInsts.filter((i) => i.complete < 0)
     // Forget finished instructions no lane's issue looks back at any more (it reads the previous one).
     let oldest = s.laneArithNext[0] ?? 0
     for (let l = 1; l < L; l++) oldest = Math.min(oldest, s.laneArithNext[l] ?? 0)

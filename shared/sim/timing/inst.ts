@@ -328,8 +328,12 @@ export abstract class Inst {
 
   /** Per-lane beat step; called after writes and before reads each cycle. */
   abstract exec(lane: number, c: number): void
-  /** Step outside the lanes (memory unit, ring); called first in each cycle. */
+  /** Step outside the lanes (memory unit, ring); called first in each cycle, only when `hasGlobal`. */
   global(_c: number): void {}
+  /** Whether the subclass has a step outside the lanes (`global`). */
+  get hasGlobal(): boolean {
+    return false
+  }
 
   /** The lane still has work for this instruction. */
   pending(lane: number): boolean {

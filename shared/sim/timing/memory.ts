@@ -134,12 +134,18 @@ export class LoadInst extends MemInst {
   }
 
   /** Issues this cycle's requests on the load bus. */
+  override get hasGlobal(): boolean {
+    return true
+  }
+
   override global(c: number): void {
     if (this.port < 0 || this.busDone) return
     const ctx = this.ctx
     const L = this.L
     const per = 64 / this.eew
     let moved = 0
+    let weighed = 0
+    const weight = ctx.laneWeight
     const unit = this.unitStride()
     // The load bus is shared: older accesses took their share of this cycle first.
     const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(false, c) / this.eew))
@@ -148,15 +154,18 @@ export class LoadInst extends MemInst {
       const active = this.isActive(i)
       if (active && !this.indexReady(i)) break
       // Unit-stride moves whole lines, masked-off elements included; gathers skip them.
-      if (active || unit) moved++
       const lane = i % L
+      if (active || unit) {
+        moved++
+        weighed += weight[lane] ?? 1
+      }
       this.touchLane(lane, c)
       this.consumeIndex(i)
       const got = (this.arrived[lane] = (this.arrived[lane] ?? 0) + 1)
       if (got % per === 0 || got === (this.n[lane] ?? 0)) this.resultReady(lane, Math.ceil(got / per) - 1, c + ctx.m.memLatency)
       this.next++
     }
-    if (moved > 0) ctx.takeBus(false, c, moved * this.eew, this.seq)
+    if (moved > 0) ctx.takeBus(false, c, moved * this.eew, weighed * this.eew, this.seq)
     if (this.next >= this.count) {
       this.busDone = true
       // One memory pipeline: the port stays with the load until its last element has arrived.
@@ -194,11 +203,17 @@ export class StoreInst extends MemInst {
   }
 
   /** Sends this cycle's elements on the store bus, in element order, once their data words are queued. */
+  override get hasGlobal(): boolean {
+    return true
+  }
+
   override global(c: number): void {
     if (this.port < 0 || this.busDone) return
     const ctx = this.ctx
     const L = this.L
     let moved = 0
+    let weighed = 0
+    const weight = ctx.laneWeight
     const unit = this.unitStride()
     // The store bus is shared: older accesses took their share of this cycle first.
     const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(true, c) / this.eew))
@@ -212,7 +227,10 @@ export class StoreInst extends MemInst {
         if (d && (d.readCnt[lane] ?? 0) < Math.floor((local * this.eew) / 64) + 1) break
         if (!this.indexReady(i)) break
       }
-      if (active || unit) moved++
+      if (active || unit) {
+        moved++
+        weighed += weight[lane] ?? 1
+      }
       this.touchLane(lane, c)
       this.consumeIndex(i)
       const sent = (this.sentCount[lane] = (this.sentCount[lane] ?? 0) + 1)
@@ -229,7 +247,7 @@ export class StoreInst extends MemInst {
       }
       this.next++
     }
-    if (moved > 0) ctx.takeBus(true, c, moved * this.eew, this.seq)
+    if (moved > 0) ctx.takeBus(true, c, moved * this.eew, weighed * this.eew, this.seq)
     if (this.next >= this.count) {
       this.busDone = true
       this.portUntil = c

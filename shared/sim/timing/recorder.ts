@@ -44,6 +44,16 @@ class Columns {
     ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width] = start
     return i
   }
+  /** Columns 1 to 5 of row i at once (one chunk lookup): the rest of a row when its span closes. */
+  setRest(i: number, a: number, b: number, c: number, d: number, e: number): void {
+    const chunk = this.chunks[i >>> CHUNK_BITS] as Int32Array
+    const at = (i & LOW) * this.width
+    chunk[at + 1] = a
+    chunk[at + 2] = b
+    chunk[at + 3] = c
+    chunk[at + 4] = d
+    if (this.width > 5) chunk[at + 5] = e
+  }
   set(k: number, i: number, v: number): void {
     ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width + k] = v
   }
@@ -57,7 +67,12 @@ class Columns {
     const w = this.width
     const chunks = this.chunks
     if (idx === null) {
-      for (let i = 0; i < n; i++) out[i] = (chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * w + k] ?? 0
+      // Chunk by chunk: one lookup per chunk, a strided walk inside it.
+      for (let ci = 0, i = 0; i < n; ci++) {
+        const chunk = chunks[ci] as Int32Array
+        const end = Math.min(n, i + CHUNK)
+        for (let at = k; i < end; i++, at += w) out[i] = chunk[at] as number
+      }
     } else {
       for (let i = 0; i < idx.length; i++) {
         const j = idx[i] ?? 0
@@ -120,9 +135,10 @@ export class SpanRecorder {
   private uStart = new Int32Array(0)
   private uLen = new Int32Array(0)
   private uRow = new Int32Array(0)
-  /** Closed spans, counted as the full machine holds them (see `setLaneFactor`). */
+  /** Closed spans, counted as the full machine holds them (see `setLaneWeights`). */
   private closed = 0
-  private stallWeight = 1
+  /** Lanes of the machine each recorded lane stands for (1 each unless symmetry.ts groups lanes). */
+  private readonly laneWeight: Int32Array
   private useWeight = new Int32Array(0)
   /** Stall cycles by reason index. */
   readonly stallTotals = new Float64Array(STALL_REASONS.length)
@@ -134,6 +150,7 @@ export class SpanRecorder {
     this.sStart = new Int32Array(lanes)
     this.sLen = new Int32Array(lanes)
     this.sRow = new Int32Array(lanes)
+    this.laneWeight = new Int32Array(lanes).fill(1)
     this.totals = new Float64Array(0)
   }
 
@@ -157,13 +174,14 @@ export class SpanRecorder {
   }
 
   /**
-   * This recorder times one lane for `factor` identical ones (symmetry.ts):
-   * its stall spans and lane-resource spans count `factor` times against the
-   * span limit, so that a run stops where the full one would.
+   * Each recorded lane stands for `weights[lane]` alike lanes (symmetry.ts):
+   * its stall cycles count that many times in the totals, and its stall spans
+   * and lane-resource spans against the span limit, so that a run stops where
+   * the full one would.
    */
-  setLaneFactor(factor: number): void {
-    this.stallWeight = factor
-    this.resources.forEach((r, i) => (this.useWeight[i] = r.lane === null ? 1 : factor))
+  setLaneWeights(weights: Int32Array): void {
+    this.laneWeight.set(weights)
+    this.resources.forEach((r, i) => (this.useWeight[i] = r.lane === null ? 1 : (weights[r.lane] ?? 1)))
   }
 
   /** Spans closed so far (the trace-size limit counts these). */
@@ -173,19 +191,15 @@ export class SpanRecorder {
 
   /** Lane `lane` waited in cycle c for `inst` because of reason index `reason`. */
   stallAt(lane: number, c: number, reason: number, inst: number): void {
-    this.stallTotals[reason] = (this.stallTotals[reason] ?? 0) + 1
+    this.stallTotals[reason] = (this.stallTotals[reason] ?? 0) + (this.laneWeight[lane] ?? 1)
     const open = this.sReason[lane] ?? -1
     if (open === reason && this.sInst[lane] === inst && (this.sStart[lane] ?? 0) + (this.sLen[lane] ?? 0) === c) {
       this.sLen[lane] = (this.sLen[lane] ?? 0) + 1
       return
     }
     if (open >= 0) this.closeStall(lane)
-    const t = this.stall
-    const row = t.push(c)
-    t.set(S_INST, row, inst)
-    t.set(S_REASON, row, reason)
-    t.set(S_LANE, row, lane)
-    this.sRow[lane] = row
+    // The row is taken now (rows stay in order of their start); the rest is written when the span closes.
+    this.sRow[lane] = this.stall.push(c)
     this.sReason[lane] = reason
     this.sInst[lane] = inst
     this.sStart[lane] = c
@@ -200,22 +214,23 @@ export class SpanRecorder {
     while (n > 0 && t.get(0, n - 1) >= cycles) {
       n--
       const r = t.get(S_REASON, n)
-      tot[r] = (tot[r] ?? 0) - t.get(S_LEN, n)
+      tot[r] = (tot[r] ?? 0) - t.get(S_LEN, n) * (this.laneWeight[t.get(S_LANE, n)] ?? 1)
     }
     t.count = n
     for (let i = 0; i < n; i++) {
       const over = t.get(0, i) + t.get(S_LEN, i) - cycles
       if (over <= 0) continue
       const r = t.get(S_REASON, i)
-      tot[r] = (tot[r] ?? 0) - over
+      tot[r] = (tot[r] ?? 0) - over * (this.laneWeight[t.get(S_LANE, i)] ?? 1)
       t.set(S_LEN, i, t.get(S_LEN, i) - over)
     }
   }
 
   private closeStall(lane: number): void {
-    this.stall.set(S_LEN, this.sRow[lane] ?? 0, this.sLen[lane] ?? 0)
+    // Columns S_LEN, S_INST, S_REASON, S_LANE.
+    this.stall.setRest(this.sRow[lane] ?? 0, this.sLen[lane] ?? 0, this.sInst[lane] ?? 0, this.sReason[lane] ?? 0, lane, 0)
     this.sReason[lane] = -1
-    this.closed += this.stallWeight
+    this.closed += this.laneWeight[lane] ?? 1
   }
 
   /**
@@ -267,11 +282,8 @@ export class SpanRecorder {
   }
 
   private openUse(r: number, c: number, amount: number, inst: number, len: number, writes: number): void {
-    const t = this.usage
-    const row = t.push(c)
-    t.set(U_INST, row, inst)
-    t.set(U_RESOURCE, row, r)
-    this.uRow[r] = row
+    // The row is taken now (rows stay in order of their start); the rest is written when the span closes.
+    this.uRow[r] = this.usage.push(c)
     this.uInst[r] = inst
     this.uAmt[r] = amount
     this.uWr[r] = writes
@@ -280,11 +292,8 @@ export class SpanRecorder {
   }
 
   private closeUse(r: number): void {
-    const row = this.uRow[r] ?? 0
-    const t = this.usage
-    t.set(U_LEN, row, this.uLen[r] ?? 0)
-    t.set(U_AMOUNT, row, this.uAmt[r] ?? 0)
-    t.set(U_WRITES, row, this.uWr[r] ?? 0)
+    // Columns U_LEN, U_INST, U_AMOUNT, U_RESOURCE, U_WRITES.
+    this.usage.setRest(this.uRow[r] ?? 0, this.uLen[r] ?? 0, this.uInst[r] ?? 0, this.uAmt[r] ?? 0, r, this.uWr[r] ?? 0)
     this.uInst[r] = -1
     this.closed += this.useWeight[r] ?? 1
   }

@@ -8,10 +8,14 @@
  */
 import type { VectorOp } from '../exec/stream'
 import { REASON } from '../trace/types'
-import { elementsPerBeat, UNIT_COUNT, UNIT_INDEX, unitLatency, wordsFor } from './config'
+import { elementsPerBeat, UNIT_COUNT as UNITS_PER_LANE, UNIT_INDEX, unitLatency, wordsFor } from './config'
 import type { Ctx } from './context'
 import { F_EXEC_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst } from './inst'
 import { execUnitOf, maskBits } from './units'
+
+// Copied once: under tsx's module transform (Node: the CLIs, the server, the bench) each use of an imported binding is a getter call.
+const UNIT_COUNT: number = UNITS_PER_LANE
+const R_RING = REASON.ring
 
 const STAGE_LANES = 0 // lanes folding their beats
 const STAGE_SEND = 1 // running value waits in lane `pos` to be sent down
@@ -230,7 +234,7 @@ export class ReductionInst extends Inst {
       let free = true
       for (let j = 0; j < dist && free; j++) free = ctx.linkFree(false, l - 1 - j, c + j * hop)
       if (!free) {
-        ctx.deny(l, this, REASON.ring)
+        ctx.deny(l, this, R_RING)
         continue
       }
       for (let j = 0; j < dist; j++) ctx.bookLink(false, l - 1 - j, c + j * hop, this.seq)
@@ -254,6 +258,10 @@ export class ReductionInst extends Inst {
     this.resultReady(0, 0, this.valueAt)
   }
 
+  override get hasGlobal(): boolean {
+    return true
+  }
+
   override global(c: number): void {
     if (this.tree) {
       if (this.stage === STAGE_LANES) this.treeSend(c)
@@ -262,7 +270,7 @@ export class ReductionInst extends Inst {
     if (this.stage !== STAGE_SEND || c < this.valueAt) return
     const from = this.pos
     if (!this.ctx.bookLink(false, from - 1, c, this.seq)) {
-      this.ctx.deny(from, this, REASON.ring)
+      this.ctx.deny(from, this, R_RING)
       return
     }
     this.ctx.busyLane(from)
@@ -290,7 +298,7 @@ export class ReductionInst extends Inst {
   private waiting(lane: number): void {
     if (this.laneDone[lane] === 1 || this.started[lane] !== 1) return
     if ((this.beatDone[lane] ?? 0) >= (this.beats[lane] ?? 0) && (this.laneValue[lane] ?? -1) >= 0) {
-      this.ctx.wait(lane, this.seq, REASON.ring)
+      this.ctx.wait(lane, this.seq, R_RING)
     }
   }
 
@@ -374,12 +382,16 @@ export class OrderedReductionInst extends Inst {
     if (this.target === lane && this.next >= this.op.vl) this.resultReady(0, 0, this.valueAt)
   }
 
+  override get hasGlobal(): boolean {
+    return true
+  }
+
   override global(c: number): void {
     if (this.at === this.target || this.valueAt < 0 || c < this.valueAt) return
     if (this.next === 0) return
     const from = this.at
     if (!this.ctx.bookLink(true, from, c, this.seq)) {
-      this.ctx.deny(from, this, REASON.ring)
+      this.ctx.deny(from, this, R_RING)
       return
     }
     this.ctx.busyLane(from)

@@ -48,7 +48,6 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
   const ctx = s.ctx
   const cycles = s.lastBusy + 1
   const ops = s.source.ops
-  const k = s.laneFactor
   const flopsBySew = { '16': 0, '32': 0, '64': 0 }
   const instructions: InstructionTrace[] = ops.map((op, i) => {
     const done = (s.completeAt[i] ?? -1) >= 0
@@ -57,7 +56,7 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
     const width = String(op.sew)
     if (f > 0 && (width === '16' || width === '32' || width === '64')) flopsBySew[width] += f
     const stalls = emptyStallCounts()
-    STALL_REASONS.forEach((r, j) => (stalls[r] = (s.opStalls[i * STALL_COUNT + j] ?? 0) * k))
+    STALL_REASONS.forEach((r, j) => (stalls[r] = s.opStalls[i * STALL_COUNT + j] ?? 0))
     const dispatch = (s.dispatchAt[i] ?? -1) >= 0 ? (s.dispatchAt[i] ?? 0) : null
     const complete = done ? (s.completeAt[i] ?? 0) : null
     return {
@@ -84,14 +83,19 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
   let laneTimes = ctx.laneTimes
   let full = ctx
   let laneBusy = s.laneBusy
-  if (k > 1) {
-    // One lane was timed for all: spread its results over the machine's lanes (symmetry.ts).
+  const plan = s.plan
+  if (plan) {
+    // One lane was timed for each class of alike lanes: spread its results over the class (symmetry.ts).
     const d = derive(s.sourceMachine)
     full = new Ctx(d, new RegFile(d, s.sourceMachine.physRegs), new Renamer(s.sourceMachine.physRegs), new SpanRecorder(d.lanes, false), new Int32Array(0))
-    const r = replicate(ctx, full, spans)
+    const r = replicate(ctx, full, spans, plan)
     spans = r
     laneTimes = r.laneTimes
-    laneBusy = new Float64Array(d.lanes).fill(s.laneBusy[0] ?? 0)
+    laneBusy = new Float64Array(d.lanes)
+    for (let j = 0; j < plan.first.length; j++) {
+      const f = plan.first[j] ?? 0
+      laneBusy.fill(s.laneBusy[j] ?? 0, f, f + (plan.size[j] ?? 0))
+    }
   }
   return {
     trace: {

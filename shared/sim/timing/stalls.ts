@@ -4,10 +4,12 @@
  */
 import { REASON } from '../trace/types'
 import type { Inst } from './inst'
-import { STALL_COUNT, type TimingState } from './state'
+import { STALL_COUNT as STRIDE, type TimingState } from './state'
 
 const NONE = 0x7fffffff
+// Imported bindings copied once: under tsx's module transform (Node: the CLIs, the server, the bench) each use of an imported binding is a getter call.
 const R_FRONTEND = REASON.frontend
+const STALL_COUNT: number = STRIDE
 
 /**
  * The lane's instruction on the critical path this cycle: the oldest one in
@@ -101,12 +103,14 @@ export function classify(s: TimingState, l: number, c: number, feWaiting: boolea
     }
   }
   const st = s.opStalls
+  // A timed lane may stand for several alike lanes (symmetry.ts): each of them lost the cycle.
+  const w = ctx.laneWeight[l] ?? 1
   for (let i = 0; i < nd; i++) {
     const inst = denied[i] as Inst
     const k = inst.seq * STALL_COUNT + (inst.noteReason[l] ?? 0)
-    st[k] = (st[k] ?? 0) + 1
+    st[k] = (st[k] ?? 0) + w
   }
   if (reason < 0 || seq < 0) return
   ctx.rec.stallAt(l, c, reason, seq)
-  if (!refusal) st[seq * STALL_COUNT + reason] = (st[seq * STALL_COUNT + reason] ?? 0) + 1
+  if (!refusal) st[seq * STALL_COUNT + reason] = (st[seq * STALL_COUNT + reason] ?? 0) + w
 }

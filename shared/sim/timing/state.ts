@@ -14,7 +14,7 @@ import { ProgramOrderList } from './program-order-list'
 import { RegFile } from './regfile'
 import { Renamer } from './rename'
 import { SpanRecorder } from './recorder'
-import { lanePlan } from './symmetry'
+import { lanePlan, type LanePlan } from './symmetry'
 
 /** Stall reasons: the stride of TimingState.opStalls. */
 export const STALL_COUNT = STALL_REASONS.length
@@ -26,8 +26,8 @@ export interface TimingState {
   /** The caller's stream and machine, which the trace describes. */
   readonly source: DynamicStream
   readonly sourceMachine: Machine
-  /** Lanes each timed lane stands for (1: every lane is timed). */
-  readonly laneFactor: number
+  /** The classes of alike lanes the timed lanes stand for (symmetry.ts); null: every lane is timed. */
+  readonly plan: Pick<LanePlan, 'first' | 'size'> | null
   readonly ctx: Ctx
   readonly options: Required<SimulateOptions>
   cycle: number
@@ -51,6 +51,8 @@ export interface TimingState {
   feDispatched: number
   // Instructions in flight, in program order
   inflight: Inst[]
+  /** The instructions in flight with a phase outside the lanes (Inst.hasGlobal), in program order. */
+  globalInsts: Inst[]
   /** Program-order lists of the arithmetic and memory instructions, by absolute position. */
   readonly arith: ProgramOrderList<Inst>
   readonly mem: ProgramOrderList<MemInst>
@@ -81,13 +83,16 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
   const laneTimes = new Int32Array(ops.length * L * LANE_FIELD_COUNT).fill(NO_CYCLE)
   const rec = new SpanRecorder(L, options.recordUsage ?? true)
   const ctx = new Ctx(d, new RegFile(d, machine.physRegs), new Renamer(machine.physRegs), rec, laneTimes)
-  if (plan) rec.setLaneFactor(plan.factor)
+  if (plan) {
+    rec.setLaneWeights(plan.size)
+    ctx.laneWeight.set(plan.size)
+  }
   const s: TimingState = {
     stream,
     machine,
     source,
     sourceMachine,
-    laneFactor: plan?.factor ?? 1,
+    plan,
     ctx,
     options: {
       cycleLimit: options.cycleLimit ?? DEFAULT_CYCLE_LIMIT,
@@ -111,6 +116,7 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
     feReason: REASON.frontend,
     feDispatched: -1,
     inflight: [],
+    globalInsts: [],
     arith: new ProgramOrderList<Inst>(),
     mem: new ProgramOrderList<MemInst>(),
     memLive: 0,

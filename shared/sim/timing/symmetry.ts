@@ -1,16 +1,25 @@
 /**
- * Identical lanes, timed once. When every instruction of a run gives every
- * lane the same work (vl a multiple of the lane count, no masks, only
- * element-wise, mask and unit-stride memory instructions whose bus moves a
- * multiple of the lane count each cycle, all of one EEW when several memory
- * ports share the buses), every lane holds the same elements
- * in the same banks and goes through the same history, cycle for cycle: the
- * bank of word w of physical register p, (p + w) mod rfBanks, does not depend
- * on the lane. Such a run is timed on one lane (a machine with lanes = 1, the
- * same words per register, and buses 1/L as wide) and the result replicated
- * to every lane: phase times, stalls, usage spans of lane resources, totals;
- * bus amounts are scaled by L. The golden corpus checks that this gives the
- * very trace of the full run.
+ * Lanes that do the same work, timed once. A run's lanes fall into classes
+ * of consecutive lanes that hold the same number of elements in every
+ * instruction: with vl = q x L + r, lanes below r hold q + 1 elements and the
+ * others q, so the cuts are the remainders r of the run's instructions (one
+ * class when every vl is a multiple of L; two for a ragged tail). When every
+ * instruction is element-wise, mask or unit-stride memory work (no masks, no
+ * reductions or permutations, whose lanes meet over the ring), lanes of one
+ * class go through the same history cycle for cycle: the bank of word w of
+ * physical register p, (p + w) mod rfBanks, does not depend on the lane, and
+ * a unit-stride access whose bus moves a multiple of L elements a cycle gives
+ * every lane its k-th element in the same cycle. Such a run is timed on a
+ * machine of one lane per class (the same words per register, an op's vl
+ * giving each timed lane its class's elements, buses K/L as wide) and the
+ * result replicated to every lane of each class: phase times, stalls, usage
+ * spans of lane resources, totals. The timed lanes carry their class's size
+ * as a weight wherever the run counts lanes (stall totals and per-instruction
+ * stalls, the span limit, bus amounts). With several memory ports, accesses
+ * share a bus cycle and split it by elements, so there every memory access
+ * must give all lanes alike (vl a multiple of L) and all share one EEW. The
+ * golden corpus and tests/sim/timing/identical-lanes.test.ts check that this
+ * gives the very trace of the full run.
  */
 import type { Machine } from '../../schemas/machine'
 import type { DynamicStream, VectorOp } from '../exec/stream'
@@ -20,17 +29,21 @@ import { UNIT_COUNT } from './config'
 import type { Ctx } from './context'
 
 export interface LanePlan {
-  /** Lanes each timed lane stands for. */
-  factor: number
+  /** Timed lane j stands for the lanes first[j] .. first[j] + size[j] - 1 of the machine. */
+  first: Int32Array
+  size: Int32Array
   stream: DynamicStream
   machine: Machine
 }
 
-function symmetricOp(op: VectorOp, m: Machine, L: number): boolean {
+function isMemory(op: VectorOp): boolean {
+  return !!op.memory || op.unit === 'load' || op.unit === 'store'
+}
+
+function groupableOp(op: VectorOp, m: Machine, L: number): boolean {
   if (op.isConfig) return true
-  if (op.vl % L !== 0 || op.masked || op.active || op.scalarResult) return false
-  const memoryUnit = op.unit === 'load' || op.unit === 'store'
-  if (op.memory || memoryUnit) {
+  if (op.masked || op.active || op.scalarResult) return false
+  if (isMemory(op)) {
     const mem = op.memory
     if (!mem || (mem.pattern !== 'unit' && mem.pattern !== 'mask')) return false
     const perCycle = (mem.isStore ? m.storeBusBits : m.loadBusBits) / op.eew
@@ -39,65 +52,108 @@ function symmetricOp(op: VectorOp, m: Machine, L: number): boolean {
   return op.shape === 'elementwise' || op.shape === 'mask'
 }
 
-/** The one-lane plan of a run whose lanes all do the same, or null. */
+/** The plan timing one lane per class of alike lanes, or null when every lane must be timed (or no two are alike). */
 export function lanePlan(stream: DynamicStream, m: Machine): LanePlan | null {
   const L = m.lanes
   if (L <= 1) return null
-  for (const op of stream.ops) if (!symmetricOp(op, m, L)) return null
-  // Accesses overlapping on a shared bus split each cycle's bits: whole elements for every lane only if they share an EEW.
-  if (m.memoryPorts > 1 && new Set(stream.ops.filter((op) => !!op.memory || op.unit === 'load' || op.unit === 'store').map((op) => op.eew)).size > 1) return null
-  const ops = stream.ops.map((op) => (op.isConfig ? op : { ...op, vl: op.vl / L }))
+  // cut[b] = 1: a class starts at lane b.
+  const cut = new Uint8Array(L + 1)
+  cut[0] = 1
+  let raggedMemory = false
+  const eews = new Set<number>()
+  for (const op of stream.ops) {
+    if (!groupableOp(op, m, L)) return null
+    if (op.isConfig) continue
+    const r = op.vl % L
+    cut[r] = 1
+    if (isMemory(op)) {
+      eews.add(op.eew)
+      if (r !== 0) raggedMemory = true
+    }
+  }
+  // Accesses overlapping on a shared bus split each cycle's bits: alike lanes only if every access is whole rows of one EEW.
+  if (m.memoryPorts > 1 && (raggedMemory || eews.size > 1)) return null
+  const first: number[] = []
+  // below[r]: classes that start below lane r, i.e. the timed lanes holding q + 1 elements when vl mod L = r.
+  const below = new Int32Array(L + 1)
+  for (let b = 0; b < L; b++) {
+    below[b] = first.length
+    if (cut[b] === 1) first.push(b)
+  }
+  const K = first.length
+  if (K === L) return null
+  const size = Int32Array.from(first, (b, j) => (first[j + 1] ?? L) - b)
+  const ops = stream.ops.map((op) => (op.isConfig ? op : { ...op, vl: Math.floor(op.vl / L) * K + (below[op.vl % L] ?? 0) }))
   const machine: Machine = {
     ...m,
-    lanes: 1,
-    vlen: Math.ceil(m.vlen / 64 / L) * 64,
-    loadBusBits: m.loadBusBits / L,
-    storeBusBits: m.storeBusBits / L,
+    lanes: K,
+    vlen: Math.ceil(m.vlen / 64 / L) * 64 * K,
+    loadBusBits: (m.loadBusBits * K) / L,
+    storeBusBits: (m.storeBusBits * K) / L,
   }
-  return { factor: L, stream: { ...stream, ops }, machine }
+  return { first: Int32Array.from(first), size, stream: { ...stream, ops }, machine }
 }
 
 /**
- * Lane 0's resource r in the one-lane context as ids of the full context: a
- * lane resource (unit, bank) becomes `base[r] + l * stride` in lane l (the full
- * context declares each lane's units and banks in turn); a bus keeps one id
- * (`stride[r]` 0) and its amount is scaled by L.
+ * The timed context's resources as ids of the full context: a lane resource
+ * (unit, bank) of timed lane j becomes `base[r] + l * perLane` in each lane l
+ * of class j (the full context declares each lane's units and banks in turn);
+ * a bus keeps its one id (`lane[r]` -1). Ring links are never used by a
+ * planned run (`lane[r]` -2: nothing to copy).
  */
-function resourceMap(one: Ctx, full: Ctx): { base: Int32Array; stride: Int32Array } {
+function resourceMap(one: Ctx, full: Ctx): { base: Int32Array; lane: Int32Array; perLane: number } {
   const n = one.rec.resources.length
   const base = new Int32Array(n)
-  const stride = new Int32Array(n)
+  const lane = new Int32Array(n).fill(-2)
   const perLane = (full.unitRes[UNIT_COUNT] ?? 0) - (full.unitRes[0] ?? 0)
-  for (let u = 0; u < UNIT_COUNT; u++) {
-    base[one.unitRes[u] ?? 0] = full.unitRes[u] ?? 0
-    stride[one.unitRes[u] ?? 0] = perLane
-  }
-  for (let b = 0; b < full.d.banks; b++) {
-    base[one.bankRes[b] ?? 0] = full.bankRes[b] ?? 0
-    stride[one.bankRes[b] ?? 0] = perLane
+  const banks = full.d.banks
+  for (let j = 0; j < one.L; j++) {
+    for (let u = 0; u < UNIT_COUNT; u++) {
+      const r = one.unitRes[j * UNIT_COUNT + u] ?? 0
+      base[r] = full.unitRes[u] ?? 0
+      lane[r] = j
+    }
+    for (let b = 0; b < banks; b++) {
+      const r = one.bankRes[j * banks + b] ?? 0
+      base[r] = full.bankRes[b] ?? 0
+      lane[r] = j
+    }
   }
   base[one.loadBusRes] = full.loadBusRes
+  lane[one.loadBusRes] = -1
   base[one.storeBusRes] = full.storeBusRes
-  return { base, stride }
+  lane[one.storeBusRes] = -1
+  return { base, lane, perLane }
 }
 
-/** Spreads the one-lane run's figures over the full context (totals) and returns its spans, per lane, sorted by start as before. */
+/**
+ * Spreads the timed run's totals over the full context and returns its spans
+ * and phase times for every lane of each class. Spans stay sorted by start.
+ * Stall totals and bus amounts were weighted by class size when recorded.
+ */
 export function replicate(
   one: Ctx,
   full: Ctx,
   spans: { stalls: StallSpans; usage: UsageSpans },
+  plan: Pick<LanePlan, 'first' | 'size'>,
 ): { stalls: StallSpans; usage: UsageSpans; laneTimes: Int32Array } {
   const L = full.L
-  const { base, stride } = resourceMap(one, full)
+  const K = one.L
+  const { first, size } = plan
+  const { base, lane, perLane } = resourceMap(one, full)
   const tot = one.rec.totals
   for (let r = 0; r < base.length; r++) {
-    const st = stride[r] ?? 0
-    if (st === 0) full.rec.totals[base[r] ?? 0] = (tot[r] ?? 0) * L
-    else for (let l = 0; l < L; l++) full.rec.totals[(base[r] ?? 0) + l * st] = tot[r] ?? 0
+    const j = lane[r] ?? -2
+    if (j === -1) full.rec.totals[base[r] ?? 0] = tot[r] ?? 0
+    else if (j >= 0) {
+      const f = first[j] ?? 0
+      for (let l = f; l < f + (size[j] ?? 0); l++) full.rec.totals[(base[r] ?? 0) + l * perLane] = tot[r] ?? 0
+    }
   }
-  one.rec.stallTotals.forEach((v, k) => (full.rec.stallTotals[k] = v * L))
+  full.rec.stallTotals.set(one.rec.stallTotals)
   const s = spans.stalls
-  const sn = s.count * L
+  let sn = 0
+  for (let i = 0; i < s.count; i++) sn += size[s.lane[i] ?? 0] ?? 0
   const stalls: StallSpans = {
     count: sn,
     lane: new Uint16Array(sn),
@@ -106,41 +162,68 @@ export function replicate(
     reason: new Uint8Array(sn),
     instruction: new Int32Array(sn),
   }
+  const sLane = stalls.lane
+  const sStart = stalls.start
+  const sLength = stalls.length
+  const sReason = stalls.reason
+  const sInst = stalls.instruction
   for (let i = 0, o = 0; i < s.count; i++) {
     const st = s.start[i] ?? 0
     const len = s.length[i] ?? 0
     const why = s.reason[i] ?? 0
     const inst = s.instruction[i] ?? 0
-    for (let l = 0; l < L; l++, o++) {
-      stalls.lane[o] = l
-      stalls.start[o] = st
-      stalls.length[o] = len
-      stalls.reason[o] = why
-      stalls.instruction[o] = inst
+    const j = s.lane[i] ?? 0
+    const f = first[j] ?? 0
+    const e = f + (size[j] ?? 0)
+    for (let l = f; l < e; l++, o++) {
+      sLane[o] = l
+      sStart[o] = st
+      sLength[o] = len
+      sReason[o] = why
+      sInst[o] = inst
     }
   }
   const u = spans.usage
+  const uCount = u.count
+  const uResource = u.resource
+  const uStart = u.start
+  const uLength = u.length
+  const uAmount = u.amount
+  const uInst = u.instruction
+  const uWrites = u.writes ?? new Uint32Array(uCount)
+  // Copies of each row: its class's size for a lane resource, 1 for a bus.
+  const copies = new Int32Array(base.length)
+  for (let r = 0; r < base.length; r++) {
+    const j = lane[r] as number
+    copies[r] = j >= 0 ? (size[j] as number) : 1
+  }
   let n = 0
-  for (let i = 0; i < u.count; i++) n += (stride[u.resource[i] ?? 0] ?? 0) === 0 ? 1 : L
+  for (let i = 0; i < uCount; i++) n += copies[uResource[i] as number] as number
   const resource = new Uint32Array(n)
   const start = new Int32Array(n)
   const length = new Int32Array(n)
   const amount = new Uint16Array(n)
   const instruction = new Int32Array(n)
   const writes = new Uint32Array(n)
-  const w1 = u.writes
-  for (let i = 0, o = 0; i < u.count; i++) {
-    const r = u.resource[i] ?? 0
-    const st = stride[r] ?? 0
-    const copies = st === 0 ? 1 : L
-    const id = base[r] ?? 0
-    const a = (u.amount[i] ?? 0) * (st === 0 ? L : 1)
-    const c0 = u.start[i] ?? 0
-    const len = u.length[i] ?? 0
-    const inst = u.instruction[i] ?? 0
-    const wr = w1 ? (w1[i] ?? 0) : 0
-    for (let l = 0; l < copies; l++, o++) {
-      resource[o] = id + l * st
+  // The id of a row's first copy and the step between copies, per timed resource.
+  const firstId = new Int32Array(base.length)
+  const idStep = new Int32Array(base.length)
+  for (let r = 0; r < base.length; r++) {
+    const j = lane[r] as number
+    firstId[r] = (base[r] as number) + (j >= 0 ? (first[j] as number) * perLane : 0)
+    idStep[r] = j >= 0 ? perLane : 0
+  }
+  for (let i = 0, o = 0; i < uCount; i++) {
+    const r = uResource[i] as number
+    const e = o + (copies[r] as number)
+    const st = idStep[r] as number
+    const c0 = uStart[i] as number
+    const len = uLength[i] as number
+    const a = uAmount[i] as number
+    const inst = uInst[i] as number
+    const wr = uWrites[i] as number
+    for (let id = firstId[r] as number; o < e; o++, id += st) {
+      resource[o] = id
       start[o] = c0
       length[o] = len
       amount[o] = a
@@ -150,11 +233,15 @@ export function replicate(
   }
   const usage: UsageSpans = { count: n, resource, start, length, amount, instruction, writes }
   const t1 = one.laneTimes
-  const ops = t1.length / LANE_FIELD_COUNT
+  const ops = t1.length / (K * LANE_FIELD_COUNT)
   const laneTimes = new Int32Array(ops * L * LANE_FIELD_COUNT)
   for (let k = 0; k < ops; k++) {
-    const row = t1.subarray(k * LANE_FIELD_COUNT, (k + 1) * LANE_FIELD_COUNT)
-    for (let l = 0; l < L; l++) laneTimes.set(row, (k * L + l) * LANE_FIELD_COUNT)
+    for (let j = 0; j < K; j++) {
+      const at = (k * K + j) * LANE_FIELD_COUNT
+      const row = t1.subarray(at, at + LANE_FIELD_COUNT)
+      const f = first[j] ?? 0
+      for (let l = f; l < f + (size[j] ?? 0); l++) laneTimes.set(row, (k * L + l) * LANE_FIELD_COUNT)
+    }
   }
   return { stalls, usage, laneTimes }
 }

@@ -5,17 +5,14 @@
  */
 import type { VectorOp } from '../exec/stream'
 import type { ExecUnit } from './config'
-import { elementsPerBeat, UNIT_COUNT, UNIT_INDEX, unitLatency, wordsFor } from './config'
+import { elementsPerBeat, UNIT_COUNT as UNITS_PER_LANE, UNIT_INDEX, unitLatency, wordsFor } from './config'
 import type { Ctx } from './context'
 import type { Operand } from './inst'
 import { F_EXEC_START, F_READ_START, fillLaneElements, Inst } from './inst'
+import { opClass } from './op-class'
 
-/** Mask-producing instructions write one bit per element. */
-const MASK_DST = /^vm(seq|sne|sltu?|sleu?|sgtu?|feq|fne|flt|fle|fgt|fge|and|nand|andn|or|nor|orn|xor|xnor|sbf|sif|sof)\./
-/** Instructions whose vector sources are all masks. */
-const MASK_SRC = /(\.mm$)|^(vmsbf|vmsif|vmsof|viota|vcpop|vfirst)\./
-/** Pure mask work: 64 mask bits a beat. */
-const MASK_ONLY = /(\.mm$)|^(vmsbf|vmsif|vmsof|vcpop|vfirst)\./
+// Copied once: under tsx's module transform (Node: the CLIs, the server, the bench) each use of an imported binding is a getter call.
+const UNIT_COUNT: number = UNITS_PER_LANE
 
 export function execUnitOf(op: VectorOp): ExecUnit {
   return op.unit === 'mul' || op.unit === 'fpu' || op.unit === 'div' ? op.unit : 'alu'
@@ -23,10 +20,11 @@ export function execUnitOf(op: VectorOp): ExecUnit {
 
 /** Bits an element reads and writes: 1 for masks, else SEW, or the EEW of widening, narrowing and extending ops (docs/model.md). */
 export function maskBits(op: VectorOp): { src: number; dst: number; maskOnly: boolean } {
+  const k = opClass(op.op)
   return {
-    src: MASK_SRC.test(op.op) ? 1 : (op.widths?.vs2 ?? op.sew),
-    dst: MASK_DST.test(op.op) ? 1 : (op.widths?.dst ?? op.sew),
-    maskOnly: MASK_ONLY.test(op.op),
+    src: k.maskSrc ? 1 : (op.widths?.vs2 ?? op.sew),
+    dst: k.maskDst ? 1 : (op.widths?.dst ?? op.sew),
+    maskOnly: k.maskOnly,
   }
 }
 
@@ -63,7 +61,7 @@ export class UnitInst extends Inst {
   /** Element positions per lane; element-0 forms override it. */
   protected layout(): void {
     const op = this.op
-    if (op.shape === 'scalar-result' && !/^(vcpop|vfirst)/.test(op.op)) {
+    if (op.shape === 'scalar-result' && !opClass(op.op).maskScalar) {
       // vmv.x.s, vfmv.f.s: lane 0 reads element 0; the result goes to the front end.
       this.n[0] = 1
       this.scalarDst = true
@@ -101,7 +99,11 @@ export class UnitInst extends Inst {
     ctx.busyLane(lane)
     if (j === 0) this.setTime(lane, F_EXEC_START, c)
     const last = j === b - 1
-    for (const s of this.srcs) s.cons[lane] = last ? (s.words[lane] ?? 0) : Math.floor((upto * s.bits) / 64)
+    const srcs = this.srcs
+    for (let k = 0; k < srcs.length; k++) {
+      const s = srcs[k] as Operand
+      s.cons[lane] = last ? (s.words[lane] ?? 0) : Math.floor((upto * s.bits) / 64)
+    }
     const before = j === 0 ? 0 : Math.floor((Math.min(n, j * this.epc) * this.dstBits) / 64)
     const after = last ? (this.dstWords[lane] ?? 0) : Math.floor((upto * this.dstBits) / 64)
     for (let w = before; w < after; w++) this.resultReady(lane, w, c + this.latency)

@@ -7,5 +7,7 @@
  *   2: stalls of lanes starved by the front end; the ordered sum's ring wait;
  *      one load bus and one store bus shared by all memory ports; the peak
  *      flops a cycle of a run follows the element widths of its FP work.
+ *   3: vmadc and vmsbc write one bit per element (their destination is a
+ *      mask), as compares do; instruction classes come from the instruction table.
  */
-export const MODEL_VERSION = 2
+export const MODEL_VERSION = 3

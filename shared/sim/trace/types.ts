@@ -185,9 +185,9 @@ export interface SimulateOptions {
   /** Record resource-use spans (default true); totals in the metrics are kept either way. */
   recordUsage?: boolean
   /**
-   * Time a run whose lanes all do the same work on one lane and replicate it
-   * (default true; docs/model.md "Speed"). false times every lane: the same
-   * trace, more slowly.
+   * Time alike lanes once per class and replicate them (every lane alike, or
+   * the classes of a ragged tail; default true; docs/model.md "Speed"). false
+   * times every lane: the same trace, more slowly.
    */
   identicalLanes?: boolean
 }

@@ -8,6 +8,7 @@ import type { ScenarioContent } from '@shared/schemas/scenario'
 import { contentFrom, type BenchFields, type BenchSnapshot } from '@/lib/scenarios/content'
 import { useBenchStore } from '@/stores/bench'
 import { useExpectationsStore } from '@/stores/expectations'
+import { useWalkthroughsStore } from '@/stores/walkthroughs'
 
 export const NEW_SCENARIO_FIELDS: Omit<ScenarioContent, BenchFields> = {
   title: '',
@@ -19,11 +20,12 @@ export const NEW_SCENARIO_FIELDS: Omit<ScenarioContent, BenchFields> = {
 export function useBenchBridge() {
   const bench = useBenchStore()
   const expectations = useExpectationsStore()
+  const walkthroughs = useWalkthroughsStore()
 
   /** The Bench as it is now, or null while its machine form has an invalid value (nothing valid to save). */
   function snapshot(): BenchSnapshot | null {
     if (!bench.machine) return null
-    return { program: bench.source, machine: bench.machine, view: { ...bench.view }, expectations: expectations.list }
+    return { program: bench.source, machine: bench.machine, view: { ...bench.view }, expectations: expectations.list, walkthroughs: walkthroughs.list }
   }
 
   function content(base: Omit<ScenarioContent, BenchFields>): ScenarioContent | null {
@@ -41,6 +43,7 @@ export function useBenchBridge() {
     bench.machineDraft = parseMachine(c.machine)
     bench.setView(c.view)
     expectations.setList(c.expectations)
+    walkthroughs.setList(c.walkthroughs)
     await bench.run()
     // A run keeps a view that fits the trace; set it again in case the run moved a cursor the trace now holds.
     bench.setView(c.view)

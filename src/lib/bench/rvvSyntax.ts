@@ -6,7 +6,8 @@
  * variableName.special (vector registers), variableName (x/f registers),
  * number, meta (directives), operator (v0.t, vtype words, rounding modes,
  * %hi/%lo/%pcrel_hi/%pcrel_lo), string. Compiler output adds numeric labels
- * (`1:`, referred to as `1b`/`1f`), `.L` labels, CSR names and `@plt`.
+ * (`1:`, referred to as `1b`/`1f`), `.L` labels, CSR names, `@plt` and the
+ * `@function`/`@progbits` types; imported executables add `c.` mnemonics and `.origin`.
  *
  * @example
  *   tokenizeLine('loop: vadd.vv v1, v2, v3 # add') // [['loop:', 'labelName'], ['vadd.vv', 'keyword'], ...]
@@ -60,7 +61,8 @@ export function token(stream: TokenStream, state: LineState): string | null {
   if (stream.match(/^\d+[bf]\b/)) return 'labelName'
   if (stream.match(NUMBER)) return 'number'
   if (stream.match(/^%(pcrel_)?(hi|lo)\b/)) return 'operator'
-  if (stream.match(/^@plt\b/)) return 'operator'
+  // @plt, and the symbol and section types of .type/.section (@function, @object, @progbits, @nobits).
+  if (stream.match(/^@[A-Za-z_]+\b/)) return 'operator'
   if (stream.match(/^"([^"\\]|\\.)*"?/)) return 'string'
   if (stream.match(/^[A-Za-z_.$][A-Za-z0-9_.$]*/)) return 'labelName'
   stream.next()

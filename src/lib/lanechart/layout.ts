@@ -462,3 +462,15 @@ export function chartSize(viewportHeight: number, subRows: boolean): ChartSize {
     maxTrack: Math.min(28, Math.max(14, Math.floor(plain / 24))),
   }
 }
+
+/**
+ * Present mode: the chart is nearly all there is on the screen (a caption
+ * of about a third below it), so the lanes take about 56 % of the window's
+ * height (64 % with sub-rows) and a track may be up to 64 pixels tall:
+ * thick bars for a projector.
+ */
+export function presentChartSize(viewportHeight: number, subRows: boolean): ChartSize {
+  if (!(viewportHeight > 0)) throw new RangeError(`viewport height must be positive, got ${viewportHeight}`)
+  const target = Math.round((subRows ? 0.64 : 0.56) * viewportHeight)
+  return { target, maxTrack: Math.min(64, Math.max(24, Math.floor(target / 8))) }
+}

@@ -9,20 +9,29 @@
 import type { Expectation } from '@shared/schemas/expectation'
 import type { Machine } from '@shared/schemas/machine'
 import type { ScenarioContent, ScenarioView } from '@shared/schemas/scenario'
+import type { Walkthrough } from '@shared/schemas/walkthrough'
 
 export interface BenchSnapshot {
   program: string
   machine: Machine
   view: ScenarioView
   expectations: Expectation[]
+  walkthroughs: Walkthrough[]
 }
 
 /** The content fields the Bench edits itself; the rest come from the scenario. */
-export type BenchFields = 'program' | 'machine' | 'view' | 'expectations'
+export type BenchFields = 'program' | 'machine' | 'view' | 'expectations' | 'walkthroughs'
 
-/** Content to save: the Bench's program, machine, view and expectations over the scenario's other fields. */
+/** Content to save: the Bench's program, machine, view, expectations and walkthroughs over the scenario's other fields. */
 export function contentFrom(base: Omit<ScenarioContent, BenchFields>, bench: BenchSnapshot): ScenarioContent {
-  return { ...base, program: bench.program, machine: structuredClone(bench.machine), view: { ...bench.view }, expectations: structuredClone(bench.expectations) }
+  return {
+    ...base,
+    program: bench.program,
+    machine: structuredClone(bench.machine),
+    view: { ...bench.view },
+    expectations: structuredClone(bench.expectations),
+    walkthroughs: structuredClone(bench.walkthroughs),
+  }
 }
 
 /** Stable JSON: object keys sorted, so that two equal contents give equal text whatever the key order. */

@@ -54,6 +54,7 @@ const CONTENT_LABELS: Record<string, string> = {
   tags: 'Tags',
   initialData: 'Named data',
   view: 'View (cursor, window, selection)',
+  walkthroughs: 'Walkthroughs',
 }
 
 /** A changed field as the forms name it: machine fields by the machine form's label, the rest by the scenario form's. */

@@ -20,6 +20,14 @@ describe('the RISC-V V tokenizer', () => {
     ['\tfld\tft0, %lo(.LCPI0_0)(a0)', [['fld', 'keyword'], ['ft0', 'variableName'], [',', null], ['%lo', 'operator'], ['(', null], ['.LCPI0_0', 'labelName'], [')', null], ['(', null], ['a0', 'variableName'], [')', null]]],
     ['\tfadd.d\tfa0, fa1, fa2, rtz', [['fadd.d', 'keyword'], ['fa0', 'variableName'], [',', null], ['fa1', 'variableName'], [',', null], ['fa2', 'variableName'], [',', null], ['rtz', 'operator']]],
     ['\tcsrr\tt1, vlenb', [['csrr', 'keyword'], ['t1', 'variableName'], [',', null], ['vlenb', 'variableName']]],
+    ['\t.section\t.text.daxpy,"ax",@progbits', [['.section', 'meta'], ['.text.daxpy', 'labelName'], [',', null], ['"ax"', 'string'], [',', null], ['@progbits', 'operator']]],
+    ['\t.type\tdaxpy,@function', [['.type', 'meta'], ['daxpy', 'labelName'], [',', null], ['@function', 'operator']]],
+    ['\t.attribute\t5, "rv64i2p1_m2p0"', [['.attribute', 'meta'], ['5', 'number'], [',', null], ['"rv64i2p1_m2p0"', 'string']]],
+    ['\tauipc\ta0, %pcrel_hi(x)', [['auipc', 'keyword'], ['a0', 'variableName'], [',', null], ['%pcrel_hi', 'operator'], ['(', null], ['x', 'labelName'], [')', null]]],
+    ['\t.size\tdaxpy, .Lfunc_end0-daxpy', [['.size', 'meta'], ['daxpy', 'labelName'], [',', null], ['.Lfunc_end0', 'labelName'], ['-', null], ['daxpy', 'labelName']]],
+    // An imported executable: .origin and compressed instructions.
+    ['  .origin 0x10120', [['.origin', 'meta'], ['0x10120', 'number']]],
+    ['  c.ldsp ra,8(sp)', [['c.ldsp', 'keyword'], ['ra', 'variableName'], [',', null], ['8', 'number'], ['(', null], ['sp', 'variableName'], [')', null]]],
   ])('styles %j', (line, expected) => {
     expect(tokenizeLine(line)).toEqual(expected)
   })

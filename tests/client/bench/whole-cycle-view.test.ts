@@ -24,7 +24,7 @@ describe('the view is taken in whole cycles', () => {
 
   it('the store hands out a view that the save and share schemas accept after a zoom', () => {
     const bench = useBenchStore()
-    bench.window = { start: 6.388888888888888, end: 16.61111111111111 }
+    bench.cycleWindow = { start: 6.388888888888888, end: 16.61111111111111 }
     bench.cursor = 11
     const view = bench.view
     expect(view.window).toEqual({ start: 6, end: 17 })

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { scenarioContentSchema } from '@shared/schemas/scenario'
+import { walkthroughSchema } from '@shared/schemas/walkthrough'
 import { listQueryString } from '@/api/scenarios'
 import { bundleFileName, contentFrom, sameContent, stableJson } from '@/lib/scenarios/content'
 import { leaveBlocker, memberActions } from '@/lib/workspace/memberRules'
@@ -8,10 +9,13 @@ import { DEFAULT_LIST_PARAMS } from '@/stores/scenarios'
 describe('scenario content from the Bench', () => {
   const base = scenarioContentSchema.parse({ title: 'saxpy tail', tags: ['tail'], program: 'old' })
 
-  it('takes program, machine, view and expectations from the Bench and keeps the other fields', () => {
+  it('takes program, machine, view, expectations and walkthroughs from the Bench and keeps the other fields', () => {
     const expectations = [{ kind: 'metric' as const, metric: 'cycles' as const, op: '<=' as const, value: 120 }]
-    const c = contentFrom(base, { program: 'new', machine: base.machine, view: { cursor: 7, window: null, selected: 2 }, expectations })
+    const walkthroughs = [walkthroughSchema.parse({ title: 'Tail', steps: [{ cursor: 3, note: 'Lane 3 idles.' }] })]
+    const c = contentFrom(base, { program: 'new', machine: base.machine, view: { cursor: 7, window: null, selected: 2 }, expectations, walkthroughs })
     expect(c.expectations).toEqual(expectations)
+    expect(c.walkthroughs).toEqual(walkthroughs)
+    expect(c.walkthroughs).not.toBe(walkthroughs) // a copy, like the machine
     expect(c.title).toBe('saxpy tail')
     expect(c.tags).toEqual(['tail'])
     expect(c.program).toBe('new')

@@ -14,7 +14,8 @@ import { fileURLToPath } from 'node:url'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { decodeFunction, listFunctions } from '../../../server/services/elf/import'
 import { ElfError, readElf } from '../../../server/services/elf/reader'
-import { encode } from '../../../shared/sim/isa/encoder'
+import { assemble } from '../../../shared/sim/isa/assembler'
+import { encode, encodeSized } from '../../../shared/sim/isa/encoder'
 
 const kernels = fileURLToPath(new URL('./kernels.s', import.meta.url))
 
@@ -147,10 +148,38 @@ describe.skipIf(!present)('the ELF reader against GNU binutils on tests/referenc
     expect(codeOf(new TextEncoder().encode('  vadd.vv v1, v2, v3\n'))?.code).toBe('not-elf')
   })
 
-  it('stops at a compressed instruction with its address', () => {
+  it('decodes every RV64C form GNU as writes to the 32-bit instruction and the text objdump -d prints (unprivileged ISA, chapter C)', () => {
+    // One line per 16-bit form of RV64C (the RVC listings for RV64), with operands GNU as compresses.
+    const forms = [
+      'c.addi4spn a0, sp, 16', 'c.fld fa0, 8(a1)', 'c.lw a2, 4(a3)', 'c.ld a4, 16(a5)', 'c.fsd fa1, 24(s0)', 'c.sw s1, 8(a0)', 'c.sd a1, 248(a2)',
+      'c.nop', 'c.addi a0, -32', 'c.addiw a1, 31', 'c.li a2, -1', 'c.addi16sp sp, -64', 'c.lui a3, 0xfffff', 'c.lui t0, 1',
+      'c.srli a4, 63', 'c.srai a5, 1', 'c.andi s0, -7', 'c.sub s1, a0', 'c.xor a1, a2', 'c.or a3, a4', 'c.and a5, s0', 'c.subw s1, a5', 'c.addw a0, a1',
+      'c.slli t1, 33', 'c.fldsp ft2, 504(sp)', 'c.lwsp t3, 252(sp)', 'c.ldsp ra, 8(sp)', 'c.jr t2', 'c.mv t4, t5', 'c.ebreak', 'c.jalr a6', 'c.add s2, s3',
+      'c.fsdsp fs0, 0(sp)', 'c.swsp s4, 60(sp)', 'c.sdsp s5, 504(sp)',
+    ]
+    const src = ['  .text', '  .globl f', '  .type f, @function', 'f:', ...forms.map((f) => `  ${f}`), '1:', '  c.beqz a0, 1b', '  c.bnez s1, 1b', '  c.j 1b', '  .size f, .-f', ''].join('\n')
     const rvc = join(dir, 'rvc.o')
-    writeFileSync(join(dir, 'rvc.s'), '  .text\n  .globl f\n  .type f, @function\nf:\n  addi a0, a0, 1\n  ret\n  .size f, .-f\n')
+    writeFileSync(join(dir, 'rvc.s'), src)
     run('as', ['-march=rv64gc', join(dir, 'rvc.s'), '-o', rvc])
-    expect(() => decodeFunction(readFileSync(rvc), 'f', 1000)).toThrow(/^f\+0x0 \(address 0x0\): 0x[0-9a-f]{8} is a 16-bit compressed instruction/)
+    const decoded = decodeFunction(readFileSync(rvc), 'f', 1000).instructions
+    const lines = run('objdump', ['-d', rvc]).split('\n').map((l) => /^\s*([0-9a-f]+):\s+([0-9a-f]{4})\s+(.*)$/.exec(l)).filter((m) => m !== null)
+    expect(lines.length).toBe(forms.length + 3)
+    expect(decoded.map((i) => ({ address: i.address, bits: encodeSized(i).bits, text: i.text.replace(/\s+/g, ' ') }))).toEqual(
+      lines.map((m) => ({ address: parseInt(m[1] as string, 16), bits: parseInt(m[2] as string, 16), text: normalise(m[3] as string) })),
+    )
+    // The c. names Chimeline writes back are the ones of the source, and read as the same bits.
+    expect(decoded.map((i) => i.compressed)).toEqual([...forms.map((f) => f.split(' ')[0]), 'c.beqz', 'c.bnez', 'c.j'])
+    // Chimeline's assembler reads the same source to the same bits at the same addresses.
+    const ours = assemble(src)
+    if (!ours.ok) throw new Error(ours.errors.map((e) => `${e.line}: ${e.message}`).join('\n'))
+    expect(ours.program.instructions.map((i) => ({ address: i.address - ours.program.textBase, ...encodeSized(i) }))).toEqual(decoded.map((i) => ({ address: i.address, ...encodeSized(i) })))
+  })
+
+  it('refuses a reserved 16-bit encoding with its address', () => {
+    const bad = join(dir, 'bad.o')
+    // c.addi16sp with a zero immediate is reserved (RVC listings): the half-word 0x6101.
+    writeFileSync(join(dir, 'bad.s'), '  .text\n  .globl f\n  .type f, @function\nf:\n  addi a0, a0, 1\n  .half 0x6101\n  .size f, .-f\n')
+    run('as', ['-march=rv64g', join(dir, 'bad.s'), '-o', bad])
+    expect(() => decodeFunction(readFileSync(bad), 'f', 1000)).toThrow(/^f\+0x4 \(address 0x4\): 0x6101 is no RV64C instruction/)
   })
 })

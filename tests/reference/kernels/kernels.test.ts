@@ -8,9 +8,13 @@
  * same source compiled with -fno-addrsig (GNU as 2.40 does not know LLVM's
  * .addrsig), assembled by riscv64-linux-gnu-as, linked by riscv64-linux-gnu-ld
  * --no-relax and run by qemu-riscv64 at VLEN 128, 256 and 1024: Chimeline's
- * output must equal QEMU's byte for byte at each VLEN. Each kernel also runs
- * through the timing model to completion on every preset, and the assembler's
- * and executor's limits hold on compiler output.
+ * output must equal QEMU's byte for byte at each VLEN. The linked executable
+ * itself (full of 16-bit RV64C instructions) is imported through the upload's
+ * ELF path (the whole program, with its data, from its entry point) and must
+ * print the same bytes; its instructions decode to the text `objdump -d`
+ * prints, and its objdump listing imports too. Each kernel also runs through
+ * the timing model to completion on every preset, and the assembler's and
+ * executor's limits hold on compiler output.
  */
 import { execFile } from 'node:child_process'
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs'
@@ -19,6 +23,11 @@ import { basename, join } from 'node:path'
 import { promisify } from 'node:util'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { assemble } from '../../../shared/sim/isa/assembler'
+import { decodeAt } from '../../../shared/sim/isa/decoder'
+import { executableToAssembly, WHOLE_EXECUTABLE } from '../../../server/services/elf/program'
+import { readElf } from '../../../server/services/elf/reader'
+import { uploadWork } from '../../../server/services/uploads'
+import type { UploadFields } from '../../../shared/schemas/upload'
 import { execute } from '../../../shared/sim/exec/execute'
 import { PRESETS } from '../../../shared/sim/presets'
 import { runPipeline } from '../../../shared/sim/run'
@@ -29,7 +38,7 @@ const DIR = import.meta.dirname
 const KERNELS = readdirSync(DIR).filter((f) => f.endsWith('.c')).sort().map((f) => basename(f, '.c'))
 const CLANG = 'clang-16'
 const FLAGS = ['--target=riscv64-unknown-elf', '-march=rv64gcv', '-O2', '-ffreestanding', '-nostdlib', '-S']
-const TOOLS = [CLANG, 'riscv64-linux-gnu-as', 'riscv64-linux-gnu-ld', 'qemu-riscv64']
+const TOOLS = [CLANG, 'riscv64-linux-gnu-as', 'riscv64-linux-gnu-ld', 'riscv64-linux-gnu-objdump', 'qemu-riscv64']
 
 async function missing(): Promise<string[]> {
   const out: string[] = []
@@ -55,6 +64,24 @@ interface Built {
   asm: string
   /** QEMU's standard output by VLEN. */
   qemu: Map<number, Buffer>
+  /** The linked executable QEMU ran, and `objdump -d` of it. */
+  elf: Buffer
+  objdump: string
+}
+
+/** A file through the upload's reading (the work-pool task), as the server imports it: the scenario's program text. */
+function importedProgram(name: string, buffer: Buffer, fields: UploadFields): string {
+  const r = uploadWork({ file: { originalname: name, mimetype: 'application/octet-stream', size: buffer.length, buffer }, fields, mode: 'read' })
+  if (!r.ok) throw new Error(`${name}: ${r.message}`)
+  const read = (r.value as { read: { content?: { program: string } } }).read
+  if (!read.content) throw new Error(`${name}: no scenario content`)
+  return read.content.program
+}
+
+/** objdump -d text normalised as in tests/reference/binutils (binutils 2.40 prints addi/andi/... with an immediate as add/and/...). */
+function normalise(text: string): string {
+  const t = text.replace(/#.*$/, '').replace(/\s*<[^>]*>/, '').replace(/\s+/g, ' ').trim()
+  return t.replace(/^(add|and|or|xor|sll|srl|sra)(w?) ([a-z0-9]+),([a-z0-9]+),(-?(0x[0-9a-f]+|[0-9]+))$/, (_m, op: string, w: string, rd: string, rs: string, imm: string) => `${op}i${w} ${rd},${rs},${imm}`)
 }
 
 describe.skipIf(absent.length > 0)('C kernels compiled by clang-16: Chimeline runs the compiler output and prints what QEMU prints', () => {
@@ -77,7 +104,8 @@ describe.skipIf(absent.length > 0)('C kernels compiled by clang-16: Chimeline ru
         if (r.exitCode !== 0) throw new Error(`${k} exits with ${r.exitCode} under QEMU at VLEN ${vlen}`)
         qemu.set(vlen, r.stdout)
       }
-      built.set(k, { asm: readFileSync(asmPath, 'utf8'), qemu })
+      const { stdout: objdump } = await run('riscv64-linux-gnu-objdump', ['-d', join(dir, k)], { maxBuffer: 1 << 24 })
+      built.set(k, { asm: readFileSync(asmPath, 'utf8'), qemu, elf: readFileSync(join(dir, k)), objdump })
     }), 2)
   }, 240_000)
   afterAll(() => {
@@ -108,6 +136,40 @@ describe.skipIf(absent.length > 0)('C kernels compiled by clang-16: Chimeline ru
     expect(r.ended).toBe('exit')
   })
 
+  it.each(cases)('$k at VLEN $vlen: the linked executable, imported as an ELF file (whole program with its data), prints the same bytes as QEMU', ({ k, vlen }) => {
+    const b = built.get(k)!
+    const text = importedProgram(`${k}.elf`, b.elf, { kind: 'elf', function: WHOLE_EXECUTABLE })
+    const asm = assemble(text)
+    if (!asm.ok) throw new Error(asm.errors.slice(0, 5).map((e) => `${e.line}:${e.column} ${e.message}`).join('\n'))
+    expect(asm.program.entry).toBe(readElf(b.elf).entry)
+    const r = execute(asm.program, { vlen })
+    if (!r.ok) throw new Error(`${r.error.line}:${r.error.column} ${r.error.message}`)
+    expect(Buffer.from(r.output).equals(b.qemu.get(vlen)!), `${k}: ${r.output.length} bytes, QEMU ${b.qemu.get(vlen)!.length}`).toBe(true)
+    expect(r.ended).toBe('exit')
+  })
+
+  it.each(KERNELS)('%s: every instruction of the linked executable (RV64C included) decodes to the bits and text objdump -d prints', (k) => {
+    const b = built.get(k)!
+    const rows = b.objdump.split('\n').map((l) => /^\s*([0-9a-f]+):\s+([0-9a-f]{4}|[0-9a-f]{8})\s+(.*)$/.exec(l)).filter((m) => m !== null)
+    const elf = readElf(b.elf)
+    const text = elf.sections.find((s) => s.name === '.text')!
+    const ours = []
+    for (let at = 0; at < text.size;) {
+      const d = decodeAt(b.elf, text.offset + at, text.addr + at)
+      if (!d.result?.ok) throw new Error(`${k}: no instruction at 0x${(text.addr + at).toString(16)}`)
+      ours.push({ address: d.result.instruction.address, size: d.size, text: d.result.instruction.text.replace(/\s+/g, ' ') })
+      at += d.size
+    }
+    expect(rows.some((m) => m[2]!.length === 4), 'the executable has compressed instructions').toBe(true)
+    expect(ours).toEqual(rows.map((m) => ({ address: parseInt(m[1]!, 16), size: m[2]!.length / 2, text: normalise(m[3]!) })))
+  })
+
+  it.each(KERNELS)('%s: the objdump -d listing of the linked executable imports (16-bit rows included) and assembles back to its bits', (k) => {
+    const text = importedProgram(`${k}.txt`, Buffer.from(built.get(k)!.objdump), { kind: 'objdump' })
+    expect(text).toMatch(/^ {2}c\.[a-z]/m)
+    expect(assemble(text).ok).toBe(true)
+  })
+
   it.each(PRESETS.map((p) => ({ preset: p.id, machine: p.machine })))('every kernel times to completion on preset $preset', ({ machine }) => {
     for (const k of KERNELS) {
       const r = runPipeline({ program: built.get(k)!.asm, machine })
@@ -131,6 +193,21 @@ describe.skipIf(absent.length > 0)('C kernels compiled by clang-16: Chimeline ru
     const smallData = assemble(text, { maxDataBytes: 1024 })
     expect(!smallData.ok && smallData.errors[0]?.code).toBe('data-too-large')
     const steps = execute(full.program, { vlen: 128, stepLimit: 1000 })
+    expect(!steps.ok && steps.error).toMatchObject({ code: 'step-limit' })
+    expect(!steps.ok && steps.error.line).toBeGreaterThan(0)
+  })
+
+  it('keeps the limits on a linked executable: instructions and data span at import, steps when it runs', async () => {
+    const elf = readElf(built.get('daxpy')!.elf)
+    expect(() => executableToAssembly(elf, 'daxpy', 10)).toThrow('.text has more than 10 instructions; the limit is 10')
+    // The same object linked with .bss 32 MiB above .sdata (ld -Tbss): the data span exceeds the 16 MiB data limit.
+    const far = join(dir, 'daxpy-far')
+    await run('riscv64-linux-gnu-ld', ['--no-relax', '-Tbss=0x2100000', join(dir, 'daxpy.o'), '-o', far])
+    expect(() => executableToAssembly(readElf(readFileSync(far)), 'daxpy-far', 1000)).toThrow(/^the data spans \d+ bytes \(0x[0-9a-f]+\.\.0x[0-9a-f]+\); the limit is 16777216$/)
+    const text = importedProgram('daxpy.elf', built.get('daxpy')!.elf, { kind: 'elf', function: WHOLE_EXECUTABLE })
+    const program = assemble(text)
+    if (!program.ok) throw new Error('the import does not assemble')
+    const steps = execute(program.program, { vlen: 128, stepLimit: 1000 })
     expect(!steps.ok && steps.error).toMatchObject({ code: 'step-limit' })
     expect(!steps.ok && steps.error.line).toBeGreaterThan(0)
   })

@@ -70,9 +70,18 @@ describe('parseObjdump', () => {
     expect(last).toMatchObject({ op: 'bne', label: 'loop', text: 'bnez a0,0 <loop>', loc: { line: 11, column: 7 } })
   })
 
-  it('points at a compressed word with line and column', () => {
-    const r = parseObjdump('   0:\t0d2572d7\tvsetvli t0,a0,e32,m4,ta,ma\n   4:\t0001    \tnop\n')
-    expect(r.ok ? [] : r.errors).toEqual([expect.objectContaining({ line: 2, column: 7, code: 'compressed' })])
+  it('reads 16-bit compressed rows at their own addresses (RV64C, words as objdump -d prints them)', () => {
+    const r = parseObjdump('   0:\t0d2572d7\tvsetvli t0,a0,e32,m4,ta,ma\n   4:\t0001    \tnop\n   6:\t8082    \tret\n')
+    expect(r.ok && r.program.instructions.map((i) => [i.address, i.op, i.compressed, i.text])).toEqual([
+      [0, 'vsetvli', undefined, 'vsetvli t0,a0,e32,m4,ta,ma'],
+      [4, 'addi', 'c.nop', 'nop'],
+      [6, 'jalr', 'c.jr', 'ret'],
+    ])
+  })
+
+  it('points at a reserved compressed half-word with line and column (c.addi16sp with a zero immediate)', () => {
+    const r = parseObjdump('   0:\t0d2572d7\tvsetvli t0,a0,e32,m4,ta,ma\n   4:\t6101    \t.insn\n')
+    expect(r.ok ? [] : r.errors).toEqual([expect.objectContaining({ line: 2, column: 7, code: 'reserved' })])
   })
 
   it('rejects a listing with a gap between addresses', () => {

@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs'
 import { fileURLToPath } from 'node:url'
 import { describe, expect, it } from 'vitest'
+import { C_FORMS } from '../../../shared/sim/isa/compressed'
 import { PSEUDOS } from '../../../shared/sim/isa/pseudo'
 import { OPS } from '../../../shared/sim/isa/table'
 
@@ -19,7 +20,11 @@ describe('README "Supported instructions" list', () => {
     expect(listed.get('pseudo-instructions')).toEqual(Object.keys(PSEUDOS))
   })
 
+  it('lists exactly the compressed forms the decoder and assembler know', () => {
+    expect(listed.get('compressed (RV64C)')).toEqual(C_FORMS.map((f) => f.name))
+  })
+
   it('has no other categories', () => {
-    expect([...listed.keys()].sort()).toEqual([...new Set(OPS.map((o) => o.category)), 'pseudo-instructions'].sort())
+    expect([...listed.keys()].sort()).toEqual([...new Set(OPS.map((o) => o.category)), 'compressed (RV64C)', 'pseudo-instructions'].sort())
   })
 })

@@ -13,6 +13,8 @@ import { describe, expect, it } from 'vitest'
 import type { VectorOp } from '../../../shared/sim/exec/stream'
 import { createTimingState, finish, step } from '../../../shared/sim/timing/simulate'
 import { laneTiming } from '../../../shared/sim/trace/types'
+import { runPipeline } from '../../../shared/sim/run'
+import { REDUCTION_CURVE } from '../../sweep/programs'
 import { ampleMachine, buildOp, buildStream, unitLoad } from './factories'
 
 const D = 4
@@ -125,5 +127,38 @@ describe('stepping the engine by hand (createTimingState, step): one vfadd.vv, v
     const { trace } = finish(s)
     expect(trace.cycles).toBe(10)
     expect(laneTiming(trace, 0, 0)).toMatchObject({ readStart: 1, readEnd: 4, execStart: 2, writeStart: 6, writeEnd: 9 })
+  })
+})
+
+describe('reduction accumulators past the FPU latency (model section 8; docs/model.md "Two rules of thumb")', () => {
+  it('8 accumulators take exactly D = 4 cycles more than 4 on a 256-element sum: one more combine level, nothing gained in the fold', () => {
+    // Lane 7 holds 32 elements and takes its first beat in cycle 41. With A >= D no beat waits for its
+    // accumulator, so beats run in 41..72 for A = 4 and A = 8 alike, the unit busy every cycle.
+    // A = 4: partials ready 73..76; the two earliest ready are combined in 74 (ready 78), 76 (80), 80 (84).
+    // A = 8: partials ready 69..76; combines in 73 (77), 74 (78), 75 (79), 76 (80), 78 (82), 80 (84), 84 (88).
+    // The ring, vs1[0] and the write are the same afterwards, so the run is 4 cycles longer.
+    const run = (reductionAccumulators: number) => {
+      const r = runPipeline({ program: REDUCTION_CURVE, machine: { reductionAccumulators } })
+      if (!r.ok) throw new Error(r.error.message)
+      return r.trace
+    }
+    const [four, eight] = [run(4), run(8)]
+    const last = four.instructions.length - 1
+    expect(laneTiming(four, last, 7)).toMatchObject({ execStart: 41, execEnd: 84 })
+    expect(laneTiming(eight, last, 7)).toMatchObject({ execStart: 41, execEnd: 88 })
+    expect(eight.cycles - four.cycles).toBe(D)
+  })
+})
+
+describe('carry and borrow outs write a mask (model version 3; RISC-V V 1.0 section 11.4: vmadc and vmsbc write mask registers)', () => {
+  it.each(['vmadc.vv', 'vmsbc.vv'])('%s at SEW 64 writes one word a lane, after its last beat: write at b + 1 + D, cycles b + D + 2', (op) => {
+    // 8 lanes, vl 512: n = 64 elements and b = 64 beats a lane (the ALU takes 64 / SEW = 1 element a beat).
+    // Reads in 1..64, beats in 2..65 (section 5); the destination is 64 mask bits = one word, complete with
+    // the last beat, so it asks for a port at 65 + D with the ALU latency D = 2 and is written then.
+    const alu = 2
+    const b = 64
+    const trace = cyclesOf([buildOp({ op, text: `${op} v3, v1, v2`, unit: 'alu', flopsPerElement: 0, vl: 512 })], { lanes: 8, vlen: 8 * 64 * 64 })
+    for (let l = 0; l < 8; l++) expect(laneTiming(trace, 0, l)).toMatchObject({ readStart: 1, readEnd: b, execStart: 2, writeStart: b + 1 + alu, writeEnd: b + 1 + alu })
+    expect(trace.cycles).toBe(b + alu + 2)
   })
 })
