@@ -74,7 +74,7 @@ async function makeLink() {
 }
 
 describe('share links across two app processes on one database', () => {
-  it('revoked through one process, a link the other has cached answers 410 once the revoke's notification has reached it', async () => {
+  it('revoked through one process, a link the other has cached answers 410 once the notification of the revoke has reached it', async () => {
     const { token, linkId } = await makeLink()
     // Warm the other process's cache, twice so the second open is served from it.
     await request(second().url).get(`/api/shares/${token}`).expect(200)
