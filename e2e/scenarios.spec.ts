@@ -96,7 +96,7 @@ test.describe('versions and workspace settings', () => {
     const members = page.getByTestId('members-table')
     for (const who of [DEMO.owner, DEMO.editor, DEMO.viewer]) await expect(members).toContainText(who)
     const invitee = `new-${Date.now().toString(36)}@example.org`
-    await page.getByLabel('E-mail').fill(invitee)
+    await page.getByLabel('E-mail', { exact: true }).fill(invitee)
     await page.getByRole('button', { name: 'Send invitation' }).click()
     await expect(page.getByText(`Invitation sent to ${invitee}.`)).toBeVisible()
     await expect(page.getByTestId('pending-invitations')).toContainText(invitee)
