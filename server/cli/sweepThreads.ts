@@ -7,15 +7,17 @@ import { createRequire } from 'node:module'
 import { pathToFileURL } from 'node:url'
 import { Piscina } from 'piscina'
 import type { SweepDefinition, SweepPointResult } from '../../shared/schemas/sweep'
+import { programOrder } from '../../shared/sweep/order'
 import type { ResolvedSweep } from '../../shared/sweep/resolve'
 import { plannedPoints, pointsLimitMessage, timeLimitMessage } from '../../shared/sweep/runSweep'
 import type { SweepChunkTask } from './sweepWorker'
 
-/** Point indexes in chunks dealt round-robin, so that the threads get similar mixes of a grid. */
-function chunks(count: number, workers: number): number[][] {
+/** Point indexes in chunks, in program order (shared/sweep/order.ts), so that a thread prepares each program of its chunk once. */
+function chunks(order: readonly number[], workers: number): number[][] {
+  const count = order.length
   const size = Math.max(1, Math.min(32, Math.ceil(count / (workers * 8))))
   const out: number[][] = []
-  for (let start = 0; start < count; start += size) out.push(Array.from({ length: Math.min(size, count - start) }, (_, k) => start + k))
+  for (let start = 0; start < count; start += size) out.push(order.slice(start, start + size))
   return out
 }
 
@@ -31,7 +33,7 @@ export async function runOnThreads(definition: SweepDefinition, sweep: ResolvedS
   })
   const deadline = Date.now() + sweep.limits.timeLimitMs
   try {
-    const parts = await Promise.all(chunks(planned, workers).map((indexes) => pool.run({ definition, indexes, deadline })))
+    const parts = await Promise.all(chunks(programOrder(sweep, planned), workers).map((indexes) => pool.run({ definition, indexes, deadline })))
     const points = parts.flat().sort((a, b) => a.index - b.index)
     const stopped = points.length < planned ? timeLimitMessage(sweep, points.length) : pointsLimitMessage(sweep)
     return { points, stopped }

@@ -7,6 +7,7 @@
 import type { SweepPointResult } from '../schemas/sweep'
 import type { ResolvedSweep } from './resolve'
 import { createPointRunner } from './runPoint'
+import { programOrder } from './order'
 
 export interface SweepOutcome {
   points: SweepPointResult[]
@@ -31,7 +32,7 @@ export interface SweepDriverOptions {
   /** Milliseconds clock (default performance.now). */
   now?: () => number
   onPoint?: (point: SweepPointResult) => void
-  /** Indexes to run (default: 0 .. plannedPoints - 1). */
+  /** Indexes to run (default: every point, in program order: shared/sweep/order.ts). Results come back in index order. */
   indexes?: Iterable<number>
 }
 
@@ -41,12 +42,13 @@ export function runSweep(sweep: ResolvedSweep, options: SweepDriverOptions = {})
   const runner = createPointRunner(sweep)
   const points: SweepPointResult[] = []
   const planned = plannedPoints(sweep)
-  const indexes = options.indexes ?? Array.from({ length: planned }, (_, i) => i)
+  const indexes = options.indexes ?? programOrder(sweep, planned)
+  const byIndex = () => points.sort((a, b) => a.index - b.index)
   for (const index of indexes) {
-    if (now() - start > sweep.limits.timeLimitMs) return { points, stopped: timeLimitMessage(sweep, points.length) }
+    if (now() - start > sweep.limits.timeLimitMs) return { points: byIndex(), stopped: timeLimitMessage(sweep, points.length) }
     const p = runner.run(index)
     points.push(p)
     options.onPoint?.(p)
   }
-  return { points, stopped: pointsLimitMessage(sweep) }
+  return { points: byIndex(), stopped: pointsLimitMessage(sweep) }
 }

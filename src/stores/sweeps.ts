@@ -8,6 +8,7 @@ import { defineStore } from 'pinia'
 import { defaultMachine } from '@shared/schemas/machine'
 import { SWEEP_DEFAULT_MAX_POINTS, sweepDefinitionSchema, type SweepDefinition, type SweepParameter, type SweepPointResult, type SweepSummary } from '@shared/schemas/sweep'
 import { MACHINE_FIELD_PATHS } from '@shared/sweep/machineFields'
+import { programOrder } from '@shared/sweep/order'
 import { resolveSweep, type ResolvedSweep, type SweepDefinitionIssue } from '@shared/sweep/resolve'
 import { pointsLimitMessage, plannedPoints } from '@shared/sweep/runSweep'
 import { symbolDefinitions } from '@shared/sweep/symbols'
@@ -129,7 +130,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
     const workers = makeWorkers(poolSize(planned))
     try {
       await loadPool(workers.runners, def.definition)
-      const run = runPool(workers.runners, { planned, timeLimitMs: resolved.sweep.limits.timeLimitMs }, {
+      const run = runPool(workers.runners, { planned, timeLimitMs: resolved.sweep.limits.timeLimitMs, order: programOrder(resolved.sweep, planned) }, {
         onPoint(point, p) {
           firstPointMs.value ??= performance.now() - t0
           points.value[point.index] = point

@@ -43,6 +43,8 @@ export interface SweepPoolCallbacks {
 export interface SweepPoolOptions {
   planned: number
   timeLimitMs: number
+  /** The order runners take the indexes in (default: index order); shared/sweep/order.ts groups a program's points. */
+  order?: readonly number[]
   now?: () => number
 }
 
@@ -76,7 +78,8 @@ export function runPool(runners: PointRunnerPort[], options: SweepPoolOptions, c
         stop ??= { reason: 'time-limit', message: `the sweep reached its time limit of ${options.timeLimitMs / 1000} s after ${done} of ${options.planned} points; the points done are kept` }
         return
       }
-      const index = next++
+      const index = options.order?.[next] ?? next
+      next++
       const point = await runner.run(index)
       done++
       callbacks.onPoint(point, progress())

@@ -4,6 +4,7 @@ import { parseSpec } from '../../shared/sweep/spec'
 import { pointValues, resolveSweep } from '../../shared/sweep/resolve'
 import { symbolDefinitions, withSymbols } from '../../shared/sweep/symbols'
 import { sweepCsvHeader } from '../../shared/sweep/csv'
+import { programOrder } from '../../shared/sweep/order'
 import { runSweep } from '../../shared/sweep/runSweep'
 import { runPipeline } from '../../shared/sim/run'
 import { figuresOf } from '../../shared/sweep/figures'
@@ -128,5 +129,17 @@ describe('running a sweep', () => {
     expect(sweepCsvHeader(['AVL', 'issue'])).toBe(
       'AVL,issue,cycles,flops,flopsPerCycle,peakFlopsPerCycle,fractionOfPeak,laneBusyMean,laneBusyMin,stall.raw,stall.bank,stall.queue,stall.slot,stall.barrier,stall.rename,stall.memory,stall.ring,stall.frontend,status,error',
     )
+  })
+})
+
+describe('program order (shared/sweep/order.ts)', () => {
+  it("takes one program's points together, index order inside, and every index once", () => {
+    const r = resolveSweep(sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'issue', spec: 'serial,staggered' }, { path: 'AVL', spec: '1..3' }] }))
+    if (!r.ok) throw new Error('unresolved')
+    // Indexes: 0-2 serial AVL 1-3, 3-5 staggered AVL 1-3 (first parameter slowest).
+    expect(programOrder(r.sweep, 6)).toEqual([0, 3, 1, 4, 2, 5])
+    const m = resolveSweep(sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'issue', spec: 'serial,staggered' }, { path: 'lanes', spec: '2,4' }] }))
+    if (!m.ok) throw new Error('unresolved')
+    expect(programOrder(m.sweep, 4)).toEqual([0, 1, 2, 3])
   })
 })
