@@ -91,12 +91,13 @@ test.describe('imports on the Scenarios page', () => {
       await page.goto('/scenarios')
       await page.getByTestId('import-upload').locator('input[type=file]').setInputFiles({ name: `${run}-kernels`, mimeType: 'application/octet-stream', buffer: readFileSync(exe) })
 
-      // Both functions of the symbol table are offered, with their size.
+      // The whole executable first, then both functions of the symbol table, with their size.
       const choice = page.getByTestId('import-choice')
       await expect(choice).toContainText('RISC-V ELF file')
       await choice.getByRole('combobox').or(choice.locator('.n-base-selection')).first().click()
       const options = page.locator('.n-base-select-option')
-      await expect(options).toHaveCount(2)
+      await expect(options).toHaveCount(3)
+      await expect(options.first()).toContainText('(whole executable, from its entry point)')
       await expect(options.filter({ hasText: 'vcount (5 instructions, 20 bytes' })).toHaveCount(1)
       await expect(options.filter({ hasText: `vscale (9 instructions, 36 bytes at 0x${reference[0]!.address.toString(16)})` })).toHaveCount(1)
       await screenshot(page, 'import-elf-functions')
@@ -116,6 +117,46 @@ test.describe('imports on the Scenarios page', () => {
       expect(lines[0]).toContain(`Imported from ${run}-kernels: function vscale`)
       expect(importedInstructions(lines, reference[0]!.address)).toEqual(reference)
       await screenshot(page, 'import-elf-bench')
+      expect(problems).toEqual([])
+    } finally {
+      rmSync(dir, { recursive: true, force: true })
+    }
+  })
+
+  test('a linked rv64gc executable imports whole: compressed instructions keep their c. names, code and data their addresses', async ({ page }) => {
+    const missing = missingBinutils()
+    if (missing && process.env.CI === 'true') throw new Error(`CI: ${missing}`)
+    test.skip(missing !== null, missing ?? '')
+    const run = runId()
+    const dir = mkdtempSync(join(tmpdir(), 'chimeline-e2e-exe-'))
+    try {
+      const exe = join(dir, `${run}-hello`)
+      // A program of our own: GNU as compresses what it can under rv64gc.
+      writeFileSync(join(dir, 'hello.s'), [
+        '  .text', '  .globl _start', '_start:', '  la a1, msg', '  li a2, 6', '  li a0, 1', '  li a7, 64', '  ecall', '  li a0, 0', '  li a7, 93', '  ecall',
+        '  .data', 'msg:', '  .ascii "chime\\n"', '',
+      ].join('\n'))
+      binutils('as', ['-march=rv64gc', join(dir, 'hello.s'), '-o', join(dir, 'hello.o')])
+      binutils('ld', ['--no-relax', join(dir, 'hello.o'), '-o', exe])
+
+      const problems = watchConsole(page)
+      await signIn(page, DEMO.editor)
+      await page.goto('/scenarios')
+      await page.getByTestId('import-upload').locator('input[type=file]').setInputFiles({ name: `${run}-hello`, mimeType: 'application/octet-stream', buffer: readFileSync(exe) })
+      const choice = page.getByTestId('import-choice')
+      await expect(choice).toContainText('RISC-V ELF file')
+      // The whole executable is the first choice, chosen already.
+      await choice.getByRole('button', { name: 'Import this function' }).click()
+      const title = `${run}-hello: (whole executable, from its entry point)`
+      await expect(page.getByText(`Imported ${run}-hello: “${title}”.`)).toBeVisible()
+      await page.getByLabel('Search scenarios').fill(run)
+      await page.getByTestId('scenario-table').getByRole('link', { name: title }).click()
+      await expect(page.getByTestId('scenario-title')).toHaveText(title)
+      const text = (await programLines(page)).join('\n')
+      expect(text).toContain('.origin 0x')
+      expect(text).toMatch(/c\.li a0,1/)
+      expect(text).toContain('msg:')
+      await screenshot(page, 'import-elf-whole')
       expect(problems).toEqual([])
     } finally {
       rmSync(dir, { recursive: true, force: true })

@@ -10,7 +10,7 @@ import { readFileSync } from 'node:fs'
 import { parse } from 'csv-parse/sync'
 import { expect, test } from '@playwright/test'
 import { KERNEL_SUITE_TITLE, KERNELS, kernelContent } from '../server/services/demo-kernels'
-import { runSuiteScenarios } from '../server/services/suite-runner'
+import { changedVerdicts, runSuiteScenarios } from '../server/services/suite-runner'
 import { DEMO, signIn, watchConsole } from './helpers/auth'
 import { screenshot } from './helpers/screenshots'
 
@@ -55,5 +55,15 @@ test('characterise the kernel suite on two presets: table, ratio, CSV and the pr
   await expect(page.getByTestId('report-table')).toBeVisible()
   await screenshot(page, 'report-print')
   await page.emulateMedia({ media: 'screen' })
+
+  // The Wide 16-lane run on the suite's page: what changed since the Default 8-lane run before it,
+  // the same list as comparing the two runs of the same check in Node.
+  const [, wideRun] = (new URL(page.url()).searchParams.get('runs') ?? '').split(',')
+  await page.goto(`${new URL(page.url()).pathname.replace(/\/report$/, '')}?run=${wideRun}`)
+  const since = page.getByTestId('suite-run-since')
+  await expect(since).toBeVisible({ timeout: 60_000 })
+  const changed = changedVerdicts(a, b)
+  await expect(since.locator('li')).toHaveText(changed)
+  await screenshot(page, 'suite-kernels-wide')
   expect(problems).toEqual([])
 })

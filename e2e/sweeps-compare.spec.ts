@@ -133,3 +133,45 @@ test('sweep from a scenario, compare two points side by side, save with the vers
   await screenshot(page, 'sweeps-compare-accumulators')
   expect(problems).toEqual([])
 })
+
+test('brushing a range of the line chart runs it again finer; the plot exports as PNG and SVG with a legend and the machine summary', async ({ page }) => {
+  test.setTimeout(120_000)
+  const problems = watchConsole(page)
+  await signIn(page, DEMO.editor)
+  await page.goto('/sweeps')
+  await page.getByTestId('sweep-program').locator('textarea').fill(FMA_CURVE)
+  await setParameters(page, [['issue', 'serial,staggered'], ['AVL', '8..64:8']])
+  await page.getByTestId('sweep-run').click()
+  await expect(page.getByTestId('sweep-progress-text')).toContainText('16 of 16 points', { timeout: 60_000 })
+
+  // Drag over the middle of the plot area: AVL 8..64 every 8 becomes every integer of the brushed range.
+  await page.getByTestId('sweep-refine').click()
+  const brush = page.locator('[data-testid="sweep-brush"] .overlay')
+  const box = (await brush.boundingBox())!
+  await page.mouse.move(box.x + box.width * 0.3, box.y + box.height / 2)
+  await page.mouse.down()
+  await page.mouse.move(box.x + box.width * 0.6, box.y + box.height / 2, { steps: 5 })
+  await page.mouse.up()
+  const spec = await page.getByLabel('Values of parameter 2').inputValue()
+  const m = /^(\d+)\.\.(\d+)$/.exec(spec)
+  expect(m, `refined spec ${spec}`).not.toBeNull()
+  const n = Number(m![2]) - Number(m![1]) + 1
+  // 30 % to 60 % of 8..64 is about 25..42: more values than the two or three multiples of 8 run there.
+  expect(n).toBeGreaterThan(3)
+  await expect(page.getByTestId('sweep-progress-text')).toContainText(`${2 * n} of ${2 * n} points`, { timeout: 60_000 })
+
+  const [png] = await Promise.all([page.waitForEvent('download'), page.getByTestId('sweep-png').click()])
+  const pngPath = 'sweeps-plot-export.png'
+  await png.saveAs(`.screenshots/${pngPath}`)
+  const { readFileSync } = await import('node:fs')
+  // PNG signature (ISO/IEC 15948, section 5.2).
+  expect(readFileSync(`.screenshots/${pngPath}`).subarray(0, 8)).toEqual(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]))
+  const [svg] = await Promise.all([page.waitForEvent('download'), page.getByTestId('sweep-svg').click()])
+  await svg.saveAs('.screenshots/sweeps-plot-export.svg')
+  const text = readFileSync('.screenshots/sweeps-plot-export.svg', 'utf8')
+  expect(text).toContain('Base machine (swept fields vary): 8 lanes, VLEN 8192')
+  expect(text).toContain('Model estimates, not sign-off for silicon.')
+  expect(text).toContain('>serial</text>')
+  expect(text).toContain('>staggered</text>')
+  expect(problems).toEqual([])
+})

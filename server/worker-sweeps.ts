@@ -51,6 +51,8 @@ async function runChunk(sequelize: Sequelize, runners: Map<string, ReturnType<ty
     }
     await insertPoints({ sequelize }, job.sweepId, [runner.run(index)])
   }
+  // Which process ran which chunk: operators spread workers over machines by these lines.
+  logger.info({ sweep: job.sweepId, first: job.indexes[0], points: job.indexes.length, pid: process.pid }, 'chunk done')
   const [row] = await sequelize.query<{ n: string }>('SELECT count(*) AS n FROM sweep_points WHERE sweep_id = :id', { replacements: { id: job.sweepId }, type: QueryTypes.SELECT })
   if (Number(row?.n ?? 0) >= sweep.planned) {
     await Sweep.update({ status: 'done' }, { where: { id: job.sweepId, status: 'running' } })

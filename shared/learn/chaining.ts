@@ -87,7 +87,7 @@ export const chaining = defineLesson({
           correct: 0,
           explanation: 'The lane reads the multiply\'s 8 words in cycles 3 to 10. Its next arithmetic instruction may start the cycle after, 11; by then v3\'s words are already there, so chaining hides all of the dependence.',
         },
-        checks: [phaseIs(0, 1, 'readEnd', 10), stallCyclesAre('bank', 0)],
+        checks: [phaseIs(0, 1, 'writeStart', 8)],
       },
     ],
   },

@@ -14,7 +14,7 @@
  * 11..14, beats 12..15, writes 16..19; the run's last busy cycle is 19, so
  * cycles = 20. With 16 lanes, n = 4, b = 4: #1 reads 3..6.
  */
-import { cyclesAre, defineLesson, phaseIs } from './lesson'
+import { defineLesson, phaseIs } from './lesson'
 
 export const lanesAndBeats = defineLesson({
   id: 'lanes-and-beats',
@@ -81,7 +81,7 @@ export const lanesAndBeats = defineLesson({
           fact: { kind: 'phase', lane: 0, instruction: 3, field: 'writeEnd' },
           explanation: 'The last beat enters the FPU in cycle 15 and its result is written 4 cycles later, in cycle 19. That is the last busy cycle of the run, which therefore takes 20 cycles (0 to 19).',
         },
-        checks: [phaseIs(0, 3, 'execStart', 12), cyclesAre(20)],
+        checks: [phaseIs(0, 3, 'execStart', 12)],
       },
     ],
   },

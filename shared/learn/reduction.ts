@@ -14,7 +14,7 @@
  * Ring: each step is a hop plus an add, 1 + 4 = 5: lane 6's running sum leaves
  * in 37, lane l's in 32 + 5 (7 - l): lane 1 in 62; lane 0 has it added by 67,
  * adds vs1[0] (4 more) and writes vd[0] in 71: cycles = 72. From lane 7's send
- * to the write: 7 x 5 + 4 = 39.
+ * to the write: 7 x 5 + 4 = 39; lane 3 sends in 32 + 4 x 5 = 52 (the question).
  * One accumulator: a beat every D = 4 cycles, the last (j = 15) in
  * 4 + 4 x 15 = 64, ready 68, leaves 69; lane 0 writes 69 + 35 + 4 = 108,
  * cycles = 109. Tree: levels of 2^k hops + D, k = 0..2: 32 + (1 + 4) +
@@ -87,18 +87,18 @@ export const reduction = defineLesson({
         checks: [phaseIs(0, 1, 'writeEnd', 71), cyclesAre(72)],
       },
       {
-        cursor: 71,
+        cursor: 32,
         subRows: false,
         window: { start: 28, end: 71 },
-        highlight: { instruction: 1, lane: 0 },
-        note: '**Your turn.** Lane 7 sends its total in cycle 32; lane 0 writes the result in cycle 71.',
+        highlight: { instruction: 1, lane: 3 },
+        note: '**Your turn.** Lane 7 sends its total in cycle **32**, and every step down the ring costs one hop and one add.',
         question: {
           kind: 'number',
-          text: 'How many cycles pass from lane 7 sending its total to lane 0 writing the result? Work it out from the ring\'s steps first.',
-          fact: { kind: 'phase', lane: 0, instruction: 1, field: 'writeEnd', minus: { kind: 'phase', lane: 7, instruction: 1, field: 'writeEnd' } },
-          explanation: '7 ring steps of 1 + 4 cycles bring the sum into lane 0 (35 cycles), and adding v2[0] takes 4 more: 39.',
+          text: 'In which cycle does lane 3 send its running sum on to lane 2? Work it out from the ring\'s steps before you look at the chart.',
+          fact: { kind: 'phase', lane: 3, instruction: 1, field: 'writeEnd' },
+          explanation: 'Lanes 6, 5, 4 and 3 each receive the sum (1 cycle) and add their own total (4 cycles) before passing it on: 32 + 4 × 5 = 52.',
         },
-        checks: [stallCyclesAre('bank', 0)],
+        checks: [phaseIs(7, 1, 'writeEnd', 32)],
       },
     ],
   },

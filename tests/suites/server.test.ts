@@ -130,6 +130,8 @@ describe('suites', () => {
   it('gives the same verdicts under a new model version whose results are unchanged', async () => {
     // The worker records the version it was given; a bumped number with the same engine is a model change that moved nothing.
     const runs = (await api().get(`${base()}/${suiteId}/runs`).set(team.viewer.auth).expect(200)).body.runs as SuiteRun[]
+    // The history counts each run's scenarios without sending their verdicts.
+    expect(runs.map((r) => [r.status, r.scenarios, 'entries' in r])).toEqual([['passed', 1, false], ['failed', 1, false], ['passed', 1, false]])
     const previous = (await api().get(`${base()}/${suiteId}/runs/${runs.find((r) => r.presetId === 'default-8')?.id}`).set(team.viewer.auth)).body.run as SuiteRun
     const row = await SuiteRunRow.create({ suiteId, workspaceId: team.workspace.id, status: 'queued', presetId: 'default-8', modelVersion: null, message: null, startedById: team.editor.user.id, finishedAt: null })
     await runSuiteJob({ config: runtime.ctx.config, sequelize: runtime.ctx.sequelize, mailer: runtime.ctx.mailer, logger: runtime.ctx.logger, modelVersion: MODEL_VERSION + 1 }, { runId: row.id })

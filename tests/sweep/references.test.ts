@@ -30,7 +30,9 @@ describe('vector-length curves on 8 FMA lanes at FP64', () => {
   // Register-file banks with ports to spare (8 banks of 2 ports) so that the FMA
   // beats, not bank ports, bound the run: that is the premise of the ragged-tail
   // rule. On the default 6 single-port banks the run is bank-bound and the rule
-  // can fail by a hair (staggered vl 120: 11.82 flops a cycle, vl 121: 11.90).
+  // can fail by a hair (staggered vl 120: 11.82 flops a cycle, vl 121: 11.90):
+  // conflicts recur with the lane's word count mod the bank count, derived in
+  // docs/model.md "Two rules of thumb the model does not always follow, and why".
   // 256 is VLMAX (e64, m2, VLEN 8192): AVL 257 gives vl 256 again, so the last multiple checked is 248.
   const multiples = Array.from({ length: 31 }, (_, k) => 8 * (k + 1))
   const avls = [...new Set([1, ...multiples, ...multiples.map((n) => n + 1), 256])].sort((a, b) => a - b)
@@ -80,7 +82,8 @@ describe('reduction accumulators (unordered sum, vfredusum.vs, at e64 on the def
     // Folding 2a partials a lane instead of a is one more level of a pairwise
     // fold: one FPU latency (4 cycles) more at most. Past the latency (8
     // accumulators against 4) that is what the model charges, so the issue's
-    // "more accumulators never slow" holds here only up to the FPU latency.
+    // "more accumulators never slow" holds here only up to the FPU latency
+    // (docs/model.md "Two rules of thumb the model does not always follow, and why").
     for (let avl = 8; avl <= 256; avl += 8) {
       for (const a of [1, 2, 4]) expect(cycles(avl, 2 * a), `AVL ${avl}, ${a} -> ${2 * a}`).toBeLessThanOrEqual(cycles(avl, a) + 4)
     }

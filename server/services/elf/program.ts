@@ -113,11 +113,12 @@ function dataLines(bytes: Uint8Array): string[] {
   return out
 }
 
+/** The chooser's entry: all the code (its first address, size and instruction count). */
 export function wholeExecutableChoice(elf: ElfFile): ElfFunction | undefined {
   try {
     const l = layout(elf)
     const bytes = elf.bytes.subarray(l.code[0]?.offset ?? 0, (l.code[0]?.offset ?? 0) + (l.textEnd - l.textStart))
-    return { name: WHOLE_EXECUTABLE, address: elf.entry, size: l.textEnd - l.textStart, instructions: countInstructions(bytes) }
+    return { name: WHOLE_EXECUTABLE, address: l.textStart, size: l.textEnd - l.textStart, instructions: countInstructions(bytes) }
   } catch {
     return undefined
   }

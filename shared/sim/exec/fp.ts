@@ -36,6 +36,14 @@ export function raiseFlags(flags: number): void {
   accrued |= flags
 }
 
+/** A signaling NaN's bits at width 32 or 64: exponent all ones, fraction non-zero, quiet bit (the fraction's top) clear. */
+export function signalingNaN(bits: bigint, width: 32 | 64): boolean {
+  const exp = width === 64 ? 0x7ff0000000000000n : 0x7f800000n
+  const frac = width === 64 ? 0x000fffffffffffffn : 0x007fffffn
+  const quiet = width === 64 ? 0x0008000000000000n : 0x00400000n
+  return (bits & exp) === exp && (bits & frac) !== 0n && (bits & quiet) === 0n
+}
+
 /** The flags raised since the last call, cleared. */
 export function takeFlags(): number {
   const f = accrued

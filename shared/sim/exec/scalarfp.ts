@@ -11,7 +11,7 @@
 import type { Instruction } from '../isa/types'
 import {
   arith, BINARY32, BINARY64, CANONICAL_NAN32, CANONICAL_NAN64, floatToInt, type FloatFormat, fusedMultiplyAdd,
-  intToFloat, maximumNumber, minimumNumber, NV, raiseFlags, type RoundingMode, takeFlags, toBinary32,
+  intToFloat, maximumNumber, minimumNumber, NV, raiseFlags, type RoundingMode, signalingNaN, takeFlags, toBinary32,
 } from './fp'
 import type { Handler } from './handler'
 import { operand } from './handler'
@@ -110,12 +110,7 @@ function compare(w: Width, fn: (a: number, b: number) => boolean, signaling: boo
 
 /** A signaling NaN in f register r read at width w (quiet bit clear; an unboxed binary32 reads as the quiet canonical NaN). */
 function isSignaling(m: ArchState, w: Width, r: number): boolean {
-  if (w === 'd') {
-    const b = m.fBits[r]!
-    return (b & 0x7ff0000000000000n) === 0x7ff0000000000000n && (b & 0x000fffffffffffffn) !== 0n && (b & 0x0008000000000000n) === 0n
-  }
-  const b = m.f32OperandBits(r)
-  return (b & 0x7f800000) === 0x7f800000 && (b & 0x007fffff) !== 0 && (b & 0x00400000) === 0
+  return w === 'd' ? signalingNaN(m.fBits[r]!, 64) : signalingNaN(BigInt(m.f32OperandBits(r)), 32)
 }
 
 /**

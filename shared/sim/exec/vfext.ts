@@ -5,10 +5,11 @@
  * forms), and vfclass (13.14). binary32 sources widen to binary64; half
  * precision is not supported, so conversions that would read or write binary16
  * are refused. Dynamic rounding is frm's mode; results that are NaN are the
- * canonical NaN.
+ * canonical NaN. When the program can read fflags (ArchState.readsFpFlags)
+ * they accrue IEEE 754 exception flags, as vfp.ts does.
  */
 import type { Instruction, Sew } from '../isa/types'
-import { BINARY64, floatToInt, fusedMultiplyAdd, intToFloat, RTZ, type RoundingMode, toBinary32, BINARY32 } from './fp'
+import { arith, BINARY64, floatToInt, fusedMultiplyAdd, intToFloat, NV, RNE, RTZ, type RoundingMode, signalingNaN, takeFlags, toBinary32, BINARY32 } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireVtype } from './handler'
 import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
@@ -21,6 +22,11 @@ function frm(m: ArchState, ins: Instruction): RoundingMode {
 
 function readF(m: ArchState, reg: number, eew: 32 | 64, i: number): number {
   return eew === 64 ? m.f64[m.base(reg, 64) + i]! : m.f32[m.base(reg, 32) + i]!
+}
+
+/** Element i of the group at `reg` at width eew is a signaling NaN (quiet bit clear). */
+function signalingF(m: ArchState, reg: number, eew: 32 | 64, i: number): boolean {
+  return signalingNaN(readElem(m, reg, eew, i, false), eew)
 }
 
 function writeF(m: ArchState, reg: number, eew: 32 | 64, i: number, v: number): void {
@@ -41,8 +47,11 @@ function widths(m: ArchState, ins: Instruction, allowed: readonly Sew[]): Sew {
 
 type Form = 'vv' | 'vf' | 'wv' | 'wf'
 
-/** vfwadd/vfwsub/vfwmul (.vv .vf .wv .wf) and vfwmacc & co: binary32 operands, binary64 results. */
-function wideArith(fn: (a: number, b: number, d: number) => number, form: Form, readsVd: boolean): Handler {
+/**
+ * vfwadd/vfwsub/vfwmul (.vv .vf .wv .wf) and vfwmacc & co: binary32 operands,
+ * binary64 results; `exact` computes the same result raising its flags.
+ */
+function wideArith(fn: (a: number, b: number, d: number) => number, form: Form, readsVd: boolean, exact: (a: number, b: number, d: number) => number = fn): Handler {
   return (m, ins, rec) => {
     widths(m, ins, [32])
     const lmul = m.vtype.lmul
@@ -53,12 +62,17 @@ function wideArith(fn: (a: number, b: number, d: number) => number, form: Form, 
     const vs1 = vv ? checkGroup(ins.operands.vs1, lmul, 'vs1', ins) : 0
     checkMaskOverlap(ins, vd)
     const k = vv ? 0 : m.f32Operand(operand(ins, 'rs1'))
+    const flags = m.readsFpFlags
+    const kSignaling = flags && !vv && signalingNaN(BigInt(m.f32OperandBits(operand(ins, 'rs1'))), 32)
+    if (flags) takeFlags()
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(ins.operands.vm, i)) continue
       const a = readF(m, vs2, wideA ? 64 : 32, i)
       const b = vv ? readF(m, vs1, 32, i) : k
-      writeF(m, vd, 64, i, fn(a, b, readsVd ? readF(m, vd, 64, i) : 0))
+      if (flags && (kSignaling || signalingF(m, vs2, wideA ? 64 : 32, i) || (vv && signalingF(m, vs1, 32, i)) || (readsVd && signalingF(m, vd, 64, i)))) m.fflags |= NV
+      writeF(m, vd, 64, i, (flags ? exact : fn)(a, b, readsVd ? readF(m, vd, 64, i) : 0))
     }
+    if (flags) m.fflags |= takeFlags()
     if (rec.on) {
       const srcRegs = [regGroup(vs2, wideA ? 2 * lmul : lmul)]
       if (vv) srcRegs.push(regGroup(vs1, lmul))
@@ -84,10 +98,13 @@ function convert(from: Kind, to: Kind, dir: 'widen' | 'narrow', allowed: readonl
     const vs2 = checkGroup(ins.operands.vs2, dir === 'widen' ? lmul : 2 * lmul, 'vs2', ins)
     checkMaskOverlap(ins, vd)
     const rm = mode === undefined ? frm(m, ins) : mode
+    const flags = m.readsFpFlags
+    if (flags) takeFlags()
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(ins.operands.vm, i)) continue
       if (from === 'f') {
         const x = readF(m, vs2, srcEew as 32 | 64, i)
+        if (flags && signalingF(m, vs2, srcEew as 32 | 64, i)) m.fflags |= NV
         if (to === 'f') {
           let r: number
           if (dstEew === 64) r = x
@@ -99,7 +116,7 @@ function convert(from: Kind, to: Kind, dir: 'widen' | 'narrow', allowed: readonl
               new Uint32Array(f.buffer)[0]! |= 1
               r = f[0]!
             }
-          } else r = toBinary32(x, rm)
+          } else r = toBinary32(x, rm, flags)
           writeF(m, vd, dstEew as 32 | 64, i, r)
         } else {
           const v = floatToInt(x, dstEew, to === 'x', false, rm === 'odd' ? RTZ : rm)
@@ -110,6 +127,7 @@ function convert(from: Kind, to: Kind, dir: 'widen' | 'narrow', allowed: readonl
         writeF(m, vd, dstEew as 32 | 64, i, intToFloat(v, dstEew === 64 ? BINARY64 : BINARY32, rm === 'odd' ? RTZ : rm))
       }
     }
+    if (flags) m.fflags |= takeFlags()
     if (rec.on) {
       rec.vector(ins, {
         dstRegs: regGroup(vd, dir === 'widen' ? 2 * lmul : lmul),
@@ -171,8 +189,8 @@ export const fpExtHandlers: Record<string, Handler> = {
   'vfncvt.rtz.xu.f.w': convert('f', 'xu', 'narrow', [16, 32], RTZ),
 }
 for (const form of ['vv', 'vf'] as const) {
-  fpExtHandlers[`vfwadd.${form}`] = wideArith((a, b) => a + b, form, false)
-  fpExtHandlers[`vfwsub.${form}`] = wideArith((a, b) => a - b, form, false)
+  fpExtHandlers[`vfwadd.${form}`] = wideArith((a, b) => a + b, form, false, (a, b) => arith('add', a, b, BINARY64, RNE, true))
+  fpExtHandlers[`vfwsub.${form}`] = wideArith((a, b) => a - b, form, false, (a, b) => arith('sub', a, b, BINARY64, RNE, true))
   // binary32 x binary32 is exact in binary64 (24 + 24 < 53 bits): one rounding, at the add.
   fpExtHandlers[`vfwmul.${form}`] = wideArith((a, b) => a * b, form, false)
   fpExtHandlers[`vfwmacc.${form}`] = wideArith((a, b, d) => fusedMultiplyAdd(b, a, d), form, true)
@@ -181,6 +199,6 @@ for (const form of ['vv', 'vf'] as const) {
   fpExtHandlers[`vfwnmsac.${form}`] = wideArith((a, b, d) => fusedMultiplyAdd(-b, a, d), form, true)
 }
 for (const form of ['wv', 'wf'] as const) {
-  fpExtHandlers[`vfwadd.${form}`] = wideArith((a, b) => a + b, form, false)
-  fpExtHandlers[`vfwsub.${form}`] = wideArith((a, b) => a - b, form, false)
+  fpExtHandlers[`vfwadd.${form}`] = wideArith((a, b) => a + b, form, false, (a, b) => arith('add', a, b, BINARY64, RNE, true))
+  fpExtHandlers[`vfwsub.${form}`] = wideArith((a, b) => a - b, form, false, (a, b) => arith('sub', a, b, BINARY64, RNE, true))
 }

@@ -7,7 +7,7 @@
  * (V 1.0 section 13.1), through fp.ts's exact path.
  */
 import type { Instruction } from '../isa/types'
-import { arith, BINARY32, BINARY64, floatToInt, type FloatFormat, fusedMultiplyAdd as fma, intToFloat, maximumNumber, minimumNumber, NV, RNE, takeFlags } from './fp'
+import { arith, BINARY32, BINARY64, floatToInt, type FloatFormat, fusedMultiplyAdd as fma, intToFloat, maximumNumber, minimumNumber, NV, RNE, signalingNaN, takeFlags } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireFpSew } from './handler'
 import { checkGroup, type ArchState, regGroup } from './machine'
@@ -60,16 +60,9 @@ function fScalarBits(m: ArchState, ins: Instruction, sew: 32 | 64): bigint {
   return sew === 64 ? m.fBits[rs1]! : BigInt(m.f32OperandBits(rs1))
 }
 
-/** A signaling NaN's bits at SEW (exponent all ones, fraction non-zero, quiet bit clear). */
-function signalingBits(bits: bigint, sew: 32 | 64): boolean {
-  return sew === 64
-    ? (bits & 0x7ff0000000000000n) === 0x7ff0000000000000n && (bits & 0x000fffffffffffffn) !== 0n && (bits & 0x0008000000000000n) === 0n
-    : (bits & 0x7f800000n) === 0x7f800000n && (bits & 0x007fffffn) !== 0n && (bits & 0x00400000n) === 0n
-}
-
 /** Element `i` of the register file at SEW is a signaling NaN. */
 function signalingAt(m: ArchState, i: number, sew: 32 | 64): boolean {
-  return signalingBits(sew === 64 ? m.u64[i]! : BigInt(m.u32[i]!), sew)
+  return signalingNaN(sew === 64 ? m.u64[i]! : BigInt(m.u32[i]!), sew)
 }
 
 function fpOp(def: FpDef, form: Form): Handler {
@@ -90,7 +83,7 @@ function fpOp(def: FpDef, form: Form): Handler {
     const flags = m.readsFpFlags
     const fn = (flags && def.exact) || def.fn
     if (flags) takeFlags()
-    const kSignaling = flags && form === 'vf' && signalingBits(fScalarBits(m, ins, sew), sew)
+    const kSignaling = flags && form === 'vf' && signalingNaN(fScalarBits(m, ins, sew), sew)
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(vm, i)) continue
       if (flags && (kSignaling || signalingAt(m, s2 + i, sew) || (form === 'vv' && signalingAt(m, s1 + i, sew)) || (def.readsDest && signalingAt(m, d + i, sew)))) m.fflags |= NV
@@ -216,7 +209,7 @@ function fcmpOp(fn: FCmp, form: Form, signaling: boolean): Handler {
     const s2 = m.base(vs2, sew)
     const s1 = m.base(vs1, sew)
     const bits = new Uint8Array(m.vl)
-    const kSignaling = form === 'vf' && signalingBits(fScalarBits(m, ins, sew), sew)
+    const kSignaling = form === 'vf' && signalingNaN(fScalarBits(m, ins, sew), sew)
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(ins.operands.vm, i)) continue
       const a = v[s2 + i]!

@@ -3,6 +3,7 @@
  * moves vmv<nr>r.v (16.6) and the widening reductions vwredsum[u].vs (14.2),
  * vfwredusum.vs and vfwredosum.vs (14.3).
  */
+import { arith, BINARY64, NV, RNE, signalingNaN, takeFlags } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, requireVtype } from './handler'
 import { checkGroup, ExecFault, regGroup } from './machine'
@@ -77,11 +78,17 @@ const wideFpReduction: Handler = (m, ins, rec) => {
     let acc = m.f64[m.base(vs1, 64)]!
     let active = 0
     const s2 = m.base(vs2, 32)
+    const flags = m.readsFpFlags
+    let snan = flags && signalingNaN(m.u64[m.base(vs1, 64)]!, 64)
+    if (flags) takeFlags()
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(ins.operands.vm, i)) continue
-      acc += m.f32[s2 + i]!
+      // With flags wanted the addition goes through fp.ts's exact path, which raises them.
+      acc = flags ? arith('add', acc, m.f32[s2 + i]!, BINARY64, RNE, true) : acc + m.f32[s2 + i]!
+      if (flags) snan ||= signalingNaN(BigInt(m.u32[s2 + i]!), 32)
       active++
     }
+    if (flags && active > 0) m.fflags |= takeFlags() | (snan ? NV : 0)
     const d = m.base(vd, 64)
     if (active === 0) m.u64[d] = m.u64[m.base(vs1, 64)]!
     else m.storeF64(d, acc)

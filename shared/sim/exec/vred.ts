@@ -3,7 +3,7 @@
  * active elements of vs2; the rest of vd stays undisturbed; nothing is written
  * when vl = 0.
  */
-import { maximumNumber, minimumNumber } from './fp'
+import { arith, BINARY32, BINARY64, maximumNumber, minimumNumber, NV, RNE, signalingNaN, takeFlags } from './fp'
 import type { Handler } from './handler'
 import { requireFpSew, requireVtype } from './handler'
 import { checkGroup, type ArchState, regGroup } from './machine'
@@ -64,7 +64,12 @@ function fpReduction(kind: FpReductionKind): Handler {
     const { vd, vs2, vs1 } = operands(m, ins)
     if (m.vl > 0) {
       const v = sew === 64 ? m.f64 : m.f32
-      const add = sew === 64 ? (a: number, b: number) => a + b : (a: number, b: number) => Math.fround(a + b)
+      // With flags wanted, each addition goes through fp.ts's exact path, which raises them.
+      const flags = m.readsFpFlags
+      const fmt = sew === 64 ? BINARY64 : BINARY32
+      const add = flags ? (a: number, b: number) => arith('add', a, b, fmt, RNE, true)
+        : sew === 64 ? (a: number, b: number) => a + b : (a: number, b: number) => Math.fround(a + b)
+      if (flags) takeFlags()
       const combine = kind === 'max' ? maximumNumber : kind === 'min' ? minimumNumber : add
       const s2 = m.base(vs2, sew)
       const start = v[m.base(vs1, sew)]!
@@ -83,6 +88,13 @@ function fpReduction(kind: FpReductionKind): Handler {
           acc = combine(acc, v[s2 + i]!)
           active++
         }
+      }
+      if (flags && active > 0) {
+        // A signaling NaN among the operands (vs1[0] and the active elements) is invalid.
+        const bits = (i: number): bigint => (sew === 64 ? m.u64[i]! : BigInt(m.u32[i]!))
+        let snan = signalingNaN(bits(m.base(vs1, sew)), sew)
+        for (let i = 0; i < m.vl && !snan; i++) snan = m.active(ins.operands.vm, i) && signalingNaN(bits(s2 + i), sew)
+        m.fflags |= takeFlags() | (snan ? NV : 0)
       }
       // With no active element the result is vs1[0] itself, bit for bit (as QEMU copies it).
       if (active === 0) {

@@ -29,6 +29,13 @@ export class Operand {
   readonly words: Int32Array
   readonly readCnt: Int32Array
   readonly cons: Int32Array
+  /**
+   * Segment store data (docs/model.md, "Segments"): `fields` register groups
+   * of `fieldRegs` registers each, read element-major (word j of every field,
+   * then word j + 1); 1: one group read word after word.
+   */
+  fields = 1
+  fieldRegs = 1
   constructor(
     readonly group: Int32Array,
     readonly bits: number,
@@ -59,6 +66,9 @@ export abstract class Inst {
   protected maxDstWords = 0
   /** Writes a lane may do for this instruction in one cycle. */
   protected writesPerCycle = 1
+  /** Segment loads: the destination is `dstFields` groups of `dstFieldRegs` registers, written element-major (see Operand). */
+  protected dstFields = 1
+  protected dstFieldRegs = 1
   /** A scalar result (vmv.x.s, vcpop.m): no vector write port, it goes to the front end. */
   scalarDst = false
   readonly started: Uint8Array
@@ -193,14 +203,26 @@ export abstract class Inst {
       const words = s.words[lane] ?? 0
       if (w >= words) continue
       all = false
-      if (w - (s.cons[lane] ?? 0) >= depth) {
+      // A segment store's data queue holds at least a row of its fields (docs/model.md, "Segment accesses").
+      if (w - (s.cons[lane] ?? 0) >= (s.fields === 1 ? depth : Math.max(depth, s.fields))) {
         full = true
         continue
       }
       const g = s.group
-      const r = (w / wpr) | 0
+      let r: number
+      let off: number
+      if (s.fields === 1) {
+        r = (w / wpr) | 0
+        off = w - r * wpr
+      } else {
+        // Word j of field f is read as word j x fields + f (fieldWord).
+        const nf = s.fields
+        const j = (w / nf) | 0
+        const q = (j / wpr) | 0
+        r = (w - j * nf) * s.fieldRegs + q
+        off = j - q * wpr
+      }
       const p = g[r < g.length ? r : g.length - 1] ?? 0
-      const off = w - r * wpr
       if ((rf.ready[(p * this.L + lane) * wpr + off] ?? 0) > c) {
         ctx.deny(lane, this, R_RAW)
         continue
@@ -267,13 +289,22 @@ export abstract class Inst {
         break
       }
       if (!this.scalarDst) {
-        const bank = rf.bankOf(this.dst, w)
+        // The physical register and offset of destination word w (segment loads: word j of field f is w = j x nf + f).
+        const g = this.dst
+        const wpr = rf.wpr
+        const nf = this.dstFields
+        const j = nf === 1 ? w : (w / nf) | 0
+        const q = (j / wpr) | 0
+        const r = nf === 1 ? q : (w - j * nf) * this.dstFieldRegs + q
+        const p = g[r < g.length ? r : g.length - 1] ?? 0
+        const off = j - q * wpr
+        const bank = (p + off) % rf.banks
         if (!rf.grant(lane, bank, c)) {
           ctx.deny(lane, this, R_BANK)
           break
         }
         rec.use(ctx.bankRes[lane * rf.banks + bank] ?? 0, c, 1, this.seq, 1, 1)
-        if (this.chaining) rf.ready[rf.slot(this.dst, lane, w)] = c + 1
+        if (this.chaining) rf.ready[(p * this.L + lane) * wpr + off] = c + 1
       }
       w++
     }

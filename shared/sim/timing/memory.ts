@@ -14,8 +14,15 @@ import type { Ctx } from './context'
 import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst } from './inst'
 
 export abstract class MemInst extends Inst {
-  /** Element count moved (vl, or ceil(vl / 8) bytes for vlm/vsm: the stream already says so). */
+  /**
+   * Values moved on the bus: elements (vl, or ceil(vl / 8) bytes for vlm/vsm:
+   * the stream already says so) times the fields of a segment access, in
+   * element order, field after field (value k is field k mod nf of element
+   * floor(k / nf)).
+   */
   readonly count: number
+  /** Fields an element (segment accesses: nf; otherwise 1). */
+  readonly nf: number
   readonly eew: number
   readonly perCycle: number
   readonly lo: number
@@ -34,20 +41,23 @@ export abstract class MemInst extends Inst {
     super(ctx, op, 'mem')
     this.waitReason = REASON.memory
     const L = this.L
-    this.count = op.vl
+    this.nf = op.nf ?? 1
+    this.count = op.vl * this.nf
     this.eew = op.eew
     const mem = op.memory
     const bus = mem?.isStore ? ctx.m.storeBusBits : ctx.m.loadBusBits
     const unit = !mem || mem.pattern === 'unit' || mem.pattern === 'mask'
+    // Values of EEW bits a cycle: a segment's fields each take their place on the bus like elements.
     this.perCycle = unit ? Math.max(1, bus / this.eew) : Math.max(1, Math.min(ctx.m.gatherElementsPerCycle, bus / this.eew))
-    fillLaneElements(this.n, this.count)
+    fillLaneElements(this.n, op.vl)
     let lo = Infinity
     let hi = -Infinity
     const addr = mem?.addresses
     if (addr) for (let i = 0; i < addr.length; i++) {
       const a = addr[i] ?? 0
       if (a < lo) lo = a
-      if (a + this.eew / 8 > hi) hi = a + this.eew / 8
+      // A segment's fields are adjacent to its first (RISC-V V 1.0 section 7.8).
+      if (a + (this.nf * this.eew) / 8 > hi) hi = a + (this.nf * this.eew) / 8
     }
     this.lo = lo
     this.hi = hi
@@ -115,8 +125,6 @@ export abstract class MemInst extends Inst {
 }
 
 export class LoadInst extends MemInst {
-  private readonly arrived: Int32Array
-
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
     super(ctx, op)
     const [index] = srcPhys
@@ -125,19 +133,23 @@ export class LoadInst extends MemInst {
       this.index = this.addSource(index, this.indexBits, (l) => wordsFor(this.n[l] ?? 0, this.indexBits))
     }
     if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
-    for (let l = 0; l < this.L; l++) this.dstWords[l] = wordsFor(this.n[l] ?? 0, this.eew)
-    // A lane may receive several elements a cycle from a wide bus.
-    this.writesPerCycle = Math.max(1, Math.ceil(this.perCycle / this.L))
+    const nf = this.nf
+    for (let l = 0; l < this.L; l++) this.dstWords[l] = nf * wordsFor(this.n[l] ?? 0, this.eew)
+    // A lane may receive several elements a cycle from a wide bus; with segments, every field of them.
+    this.writesPerCycle = nf === 1 ? Math.max(1, Math.ceil(this.perCycle / this.L)) : Math.min(this.perCycle, nf * Math.ceil((this.perCycle + nf) / (nf * this.L)))
+    if (nf > 1) {
+      this.dstFields = nf
+      this.dstFieldRegs = Math.max(1, op.dstRegs.length / nf)
+    }
     this.allocResults()
-    this.arrived = new Int32Array(this.L)
     this.writeCounts()
   }
 
-  /** Issues this cycle's requests on the load bus. */
   override get hasGlobal(): boolean {
     return true
   }
 
+  /** Issues this cycle's requests on the load bus. */
   override global(c: number): void {
     if (this.port < 0 || this.busDone) return
     const ctx = this.ctx
@@ -149,8 +161,12 @@ export class LoadInst extends MemInst {
     const unit = this.unitStride()
     // The load bus is shared: older accesses took their share of this cycle first.
     const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(false, c) / this.eew))
+    const nf = this.nf
     while (this.next < this.count && moved < most) {
-      const i = this.next
+      const k = this.next
+      // Value k is field f of element i.
+      const i = nf === 1 ? k : (k / nf) | 0
+      const f = k - i * nf
       const active = this.isActive(i)
       if (active && !this.indexReady(i)) break
       // Unit-stride moves whole lines, masked-off elements included; gathers skip them.
@@ -161,8 +177,9 @@ export class LoadInst extends MemInst {
       }
       this.touchLane(lane, c)
       this.consumeIndex(i)
-      const got = (this.arrived[lane] = (this.arrived[lane] ?? 0) + 1)
-      if (got % per === 0 || got === (this.n[lane] ?? 0)) this.resultReady(lane, Math.ceil(got / per) - 1, c + ctx.m.memLatency)
+      // Local element j completes word floor(j / per) of field f when it is the word's last element or the lane's.
+      const j = (i / L) | 0
+      if ((j + 1) % per === 0 || j + 1 === (this.n[lane] ?? 0)) this.resultReady(lane, ((j / per) | 0) * nf + f, c + ctx.m.memLatency)
       this.next++
     }
     if (moved > 0) ctx.takeBus(false, c, moved * this.eew, weighed * this.eew, this.seq)
@@ -191,7 +208,12 @@ export class StoreInst extends MemInst {
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
     super(ctx, op)
     const [data, index] = srcPhys
-    this.data = data ? this.addSource(data, this.eew, (l) => wordsFor(this.n[l] ?? 0, this.eew)) : null
+    const nf = this.nf
+    this.data = data ? this.addSource(data, this.eew, (l) => nf * wordsFor(this.n[l] ?? 0, this.eew)) : null
+    if (this.data && nf > 1) {
+      this.data.fields = nf
+      this.data.fieldRegs = Math.max(1, this.data.group.length / nf)
+    }
     if (index && this.indexed) {
       this.indexBits = (op.memory as { indexEew?: number } | undefined)?.indexEew ?? op.sew
       this.index = this.addSource(index, this.indexBits, (l) => wordsFor(this.n[l] ?? 0, this.indexBits))
@@ -202,11 +224,11 @@ export class StoreInst extends MemInst {
     this.writeCounts()
   }
 
-  /** Sends this cycle's elements on the store bus, in element order, once their data words are queued. */
   override get hasGlobal(): boolean {
     return true
   }
 
+  /** Sends this cycle's elements on the store bus, in element order, once their data words are queued. */
   override global(c: number): void {
     if (this.port < 0 || this.busDone) return
     const ctx = this.ctx
@@ -217,14 +239,18 @@ export class StoreInst extends MemInst {
     const unit = this.unitStride()
     // The store bus is shared: older accesses took their share of this cycle first.
     const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(true, c) / this.eew))
+    const nf = this.nf
     while (this.next < this.count && moved < most) {
-      const i = this.next
+      const k = this.next
+      // Value k is field f of element i; its data is word floor(local x EEW / 64) of field f, read element-major.
+      const i = nf === 1 ? k : (k / nf) | 0
+      const f = k - i * nf
       const lane = i % L
       const local = Math.floor(i / L)
       const active = this.isActive(i)
       if (active) {
         const d = this.data
-        if (d && (d.readCnt[lane] ?? 0) < Math.floor((local * this.eew) / 64) + 1) break
+        if (d && (d.readCnt[lane] ?? 0) < Math.floor((local * this.eew) / 64) * nf + f + 1) break
         if (!this.indexReady(i)) break
       }
       if (active || unit) {
@@ -233,9 +259,12 @@ export class StoreInst extends MemInst {
       }
       this.touchLane(lane, c)
       this.consumeIndex(i)
+      this.next++
+      // An element is sent with its last field.
+      if (f < nf - 1) continue
       const sent = (this.sentCount[lane] = (this.sentCount[lane] ?? 0) + 1)
       const d = this.data
-      if (d) d.cons[lane] = sent === (this.n[lane] ?? 0) ? (d.words[lane] ?? 0) : Math.floor((sent * this.eew) / 64)
+      if (d) d.cons[lane] = sent === (this.n[lane] ?? 0) ? (d.words[lane] ?? 0) : Math.floor((sent * this.eew) / 64) * nf
       if (sent === (this.n[lane] ?? 0)) {
         // The store's write phase in a lane is the cycle its last element leaves for memory.
         this.setTime(lane, F_WRITE_START, c)
@@ -245,7 +274,6 @@ export class StoreInst extends MemInst {
           this.setTime(lane, F_READ_END, c)
         }
       }
-      this.next++
     }
     if (moved > 0) ctx.takeBus(true, c, moved * this.eew, weighed * this.eew, this.seq)
     if (this.next >= this.count) {

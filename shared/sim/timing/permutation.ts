@@ -98,11 +98,11 @@ export class PermutationInst extends Inst {
 
   exec(_lane: number, _c: number): void {}
 
-  /** Each source lane injects its next packet when its word is queued and the whole path is free. */
   override get hasGlobal(): boolean {
     return true
   }
 
+  /** Each source lane injects its next packet when its word is queued and the whole path is free. */
   override global(c: number): void {
     const ctx = this.ctx
     const L = this.L

@@ -46,6 +46,8 @@ function groupableOp(op: VectorOp, m: Machine, L: number): boolean {
   if (isMemory(op)) {
     const mem = op.memory
     if (!mem || (mem.pattern !== 'unit' && mem.pattern !== 'mask')) return false
+    // A segment's fields share the bus rows, so lanes get their elements in different cycles.
+    if ((op.nf ?? 1) > 1) return false
     const perCycle = (mem.isStore ? m.storeBusBits : m.loadBusBits) / op.eew
     return Number.isInteger(perCycle) && perCycle % L === 0
   }

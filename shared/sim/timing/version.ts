@@ -8,6 +8,7 @@
  *      one load bus and one store bus shared by all memory ports; the peak
  *      flops a cycle of a run follows the element widths of its FP work.
  *   3: vmadc and vmsbc write one bit per element (their destination is a
- *      mask), as compares do; instruction classes come from the instruction table.
+ *      mask), as compares do; segment loads and stores move nf fields per
+ *      element on the bus and in the lanes.
  */
 export const MODEL_VERSION = 3

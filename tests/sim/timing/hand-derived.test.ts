@@ -9,13 +9,14 @@
  * 1..b, takes beats in 2..b+1, writes in 2+D..b+1+D, and the run takes
  * b + D + 2 cycles (cycles count from 0 to the last busy one).
  */
+import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import type { VectorOp } from '../../../shared/sim/exec/stream'
 import { createTimingState, finish, step } from '../../../shared/sim/timing/simulate'
 import { laneTiming } from '../../../shared/sim/trace/types'
 import { runPipeline } from '../../../shared/sim/run'
 import { REDUCTION_CURVE } from '../../sweep/programs'
-import { ampleMachine, buildOp, buildStream, unitLoad } from './factories'
+import { ampleMachine, buildOp, buildStream, unitLoad, unitStore } from './factories'
 
 const D = 4
 const vfadd = (d: number, vl: number, a = 1, b = 2): VectorOp => buildOp({ vl, dstRegs: [d], srcRegs: [[a], [b]], text: `vfadd.vv v${d}, v${a}, v${b}` })
@@ -160,5 +161,65 @@ describe('carry and borrow outs write a mask (model version 3; RISC-V V 1.0 sect
     const trace = cyclesOf([buildOp({ op, text: `${op} v3, v1, v2`, unit: 'alu', flopsPerElement: 0, vl: 512 })], { lanes: 8, vlen: 8 * 64 * 64 })
     for (let l = 0; l < 8; l++) expect(laneTiming(trace, 0, l)).toMatchObject({ readStart: 1, readEnd: b, execStart: 2, writeStart: b + 1 + alu, writeEnd: b + 1 + alu })
     expect(trace.cycles).toBe(b + alu + 2)
+  })
+})
+
+describe('segment accesses move nf fields per element (model version 3; handbook section 11; docs/model.md "Segment accesses")', () => {
+  // 8 lanes, vl 256, EEW 64, 512-bit buses: 8 values of 64 bits a bus cycle; ample ports; memLatency M = 16.
+  // The access is dispatched in cycle 0 and gets the memory port in cycle 1.
+  const M = 16
+  const machine = { lanes: 8, memLatency: M }
+  const vl = 256
+  it('vlseg2e64.v requests its 2 x 256 values in cycles 1..64: 1 + 64 + M cycles, 32 more than vle64.v (1 + 32 + M)', () => {
+    const plain = cyclesOf([unitLoad(8, vl)], machine)
+    const seg = cyclesOf([unitLoad(8, vl, 0x1000, 64, { nf: 2, dstRegs: [8, 9, 10, 11] })], machine)
+    expect(plain.cycles).toBe(1 + 32 + M)
+    expect(seg.cycles).toBe(1 + 64 + M)
+    // Lane 7 gets both fields of element 255, the last values, requested in cycle 64: written on arrival in 64 + M.
+    expect(laneTiming(seg, 0, 7)).toMatchObject({ elements: 32, writeEnd: 64 + M })
+    // 2 x 256 x 64 bits over 81 cycles of a 512-bit bus.
+    expect(seg.metrics.busUtilization.load).toBeCloseTo((2 * vl * 64) / (81 * 512), 12)
+  })
+
+  it('vsseg2e64.v reads 64 words a lane, one a cycle: element j is ready in 2j + 3, the last bus row leaves in 66, 67 cycles (vse64.v: 34)', () => {
+    // Plain: lane l reads word j in j + 1, sends element j in j + 2 (8 elements, one bus row, a cycle): last in 33.
+    // Segment: the two words of element j are read in 2j + 1 and 2j + 2 and queued by 2j + 3; a bus row of
+    // 8 elements is 16 values, two cycles: lanes 0-3 in 2j + 3, lanes 4-7 in 2j + 4. Row 31: 65 and 66.
+    const plain = cyclesOf([unitStore(8, vl)], machine)
+    const seg = cyclesOf([{ ...unitStore(8, vl), nf: 2, srcRegs: [[8, 9, 10, 11]] }], machine)
+    expect(plain.cycles).toBe(34)
+    expect(seg.cycles).toBe(67)
+    expect(laneTiming(seg, 0, 0)).toMatchObject({ readStart: 1, readEnd: 64, writeEnd: 65 })
+    expect(laneTiming(seg, 0, 7)).toMatchObject({ readStart: 1, readEnd: 64, writeEnd: 66 })
+  })
+})
+
+describe('segment accesses of every shape finish, no faster than their bus allows (model version 3; fast-check)', () => {
+  it('loads and stores of nf 2..8 fields, EEW 8..64, unit-stride or strided, any queue depth: done, and at least vl x nf x EEW / busBits cycles on the bus', () => {
+    fc.assert(
+      fc.property(
+        fc.record({
+          lanes: fc.constantFrom(1, 3, 4, 8),
+          nf: fc.integer({ min: 2, max: 8 }),
+          eew: fc.constantFrom(8, 16, 32, 64 as const),
+          vl: fc.integer({ min: 1, max: 40 }),
+          store: fc.boolean(),
+          strided: fc.boolean(),
+          operandQueueDepth: fc.integer({ min: 1, max: 4 }),
+        }),
+        ({ lanes, nf, eew, vl, store, strided, operandQueueDepth }) => {
+          const regs = Array.from({ length: nf }, (_, f) => 8 + f)
+          const pattern = strided ? ('strided' as const) : ('unit' as const)
+          const addresses = Float64Array.from({ length: vl }, (_, i) => 0x1000 + i * nf * (eew / 8) * (strided ? 2 : 1))
+          const base = store ? unitStore(8, vl, 0x1000, eew) : unitLoad(8, vl, 0x1000, eew)
+          const op: VectorOp = { ...base, nf, memory: { pattern, isStore: store, addresses }, ...(store ? { srcRegs: [regs] } : { dstRegs: regs }) }
+          const trace = cyclesOf([op], { lanes, vlen: Math.max(64 * lanes, 512), operandQueueDepth })
+          // cyclesOf checks the run ended without error; the bus moves at most 512 / EEW values (gathers: 1) a cycle.
+          const perCycle = strided ? 1 : 512 / eew
+          expect(trace.cycles).toBeGreaterThanOrEqual(Math.ceil((vl * nf) / perCycle))
+        },
+      ),
+      { numRuns: 150 },
+    )
   })
 })
