@@ -145,6 +145,8 @@ test('a teacher records six steps on the ragged tail, presents them, shares them
   await expect(dialog.getByTestId('share-created')).toBeVisible()
   const url = await dialog.getByTestId('share-url').locator('input').inputValue()
   await expect(dialog.getByTestId('share-walkthrough-links')).toContainText(`${url}?walkthrough=1`)
+  await dialog.getByRole('button', { name: 'Close', exact: true }).click()
+  await expect(dialog).toHaveCount(0)
   expect(url).toMatch(/\/s\/[A-Za-z0-9_-]+$/)
 
   // A signed-out student plays it.
@@ -190,6 +192,12 @@ test('a teacher records six steps on the ragged tail, presents them, shares them
   await expect(student.getByTestId('scenario-title')).toHaveText(`${run} ragged tail lecture`, { timeout: 30_000 })
   await expect(student.getByTestId('walkthrough-list')).toContainText(`${run} Why lanes 3 to 7 finish early`)
   await screenshot(student, 'walkthrough-copy')
+
+  // The teacher deletes it: a new version without it; the version the link shares keeps it.
+  await panel.getByRole('button', { name: 'Delete' }).click()
+  await page.getByRole('button', { name: 'Confirm' }).click()
+  await expect(page.getByText(/Removed; saved version 3/)).toBeVisible()
+  await expect(panel.getByTestId('walkthrough-list')).toHaveCount(0)
 
   expect(problems).toEqual([])
   expect(studentProblems).toEqual([])
