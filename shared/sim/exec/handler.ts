@@ -54,6 +54,24 @@ export function requireFpSew(m: ArchState, ins: Instruction): 32 | 64 {
   return sew
 }
 
+/**
+ * V 1.0 section 5.2: a destination group may overlap a source group of
+ * another EEW only in the lowest-numbered part of the source (destination EEW
+ * smaller) or in the highest-numbered part of the destination when the source
+ * EMUL is at least 1 (destination EEW larger); anything else is reserved (QEMU
+ * raises an illegal instruction).
+ */
+export function checkWidthOverlap(ins: Instruction, vd: number, dEmul: number, dEew: number, vs: number, sEmul: number, sEew: number, name: string): void {
+  if (dEew === sEew) return
+  const dRegs = Math.max(1, dEmul)
+  const sRegs = Math.max(1, sEmul)
+  if (vd + dRegs <= vs || vs + sRegs <= vd) return
+  const allowed = dEew < sEew ? vd === vs : sEmul >= 1 && vs === vd + dRegs - sRegs
+  if (!allowed) {
+    throw new ExecFault('overlap', `${ins.op}: the destination v${vd} (EEW ${dEew}) overlaps the source ${name} v${vs} (EEW ${sEew}) where V 1.0 section 5.2 does not allow it`)
+  }
+}
+
 /** V 1.0 section 5.3: a masked instruction's destination may not overlap v0 unless it writes a mask. */
 export function checkMaskOverlap(ins: Instruction, vd: number): void {
   if (ins.operands.vm === false && vd === 0) {

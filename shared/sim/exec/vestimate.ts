@@ -9,7 +9,7 @@
  * input interval (1 + (i + 0.5) / 128; under the square root
  * (1 + (j + 0.5) / 64), doubled when the biased exponent is even), at most 127.
  */
-import { RDN, RTZ, RUP, type RoundingMode } from './fp'
+import { DZ, NV, NX, OF, raiseFlags, RDN, RTZ, RUP, type RoundingMode, signalingNaN, takeFlags } from './fp'
 import type { Handler } from './handler'
 import { checkMaskOverlap, requireFpSew } from './handler'
 import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
@@ -57,12 +57,19 @@ export function rec7(bits: bigint, f: Format, mode: RoundingMode): bigint {
   const expField = (bits >> f.frac) & f.expMask
   const fracField = bits & ((1n << f.frac) - 1n)
   const signBit = sign << BigInt(f.width - 1)
-  if (expField === f.expMask) return fracField === 0n ? signBit : canonicalNaN(f) // 1/inf = 0; NaN
-  if (expField === 0n && fracField === 0n) return signBit | (f.expMask << f.frac) // 1/0 = inf
+  if (expField === f.expMask) {
+    if (fracField !== 0n && signalingNaN(bits, f.width)) raiseFlags(NV)
+    return fracField === 0n ? signBit : canonicalNaN(f) // 1/inf = 0; NaN
+  }
+  if (expField === 0n && fracField === 0n) {
+    raiseFlags(DZ)
+    return signBit | (f.expMask << f.frac) // 1/0 = inf
+  }
   const n = normalize(bits, f)
   const outExp = 2n * f.bias - 1n - n.exp
   if (outExp >= f.expMask) {
     // The reciprocal of a tiny subnormal overflows: infinity or the largest finite value, by mode (13.9).
+    raiseFlags(OF | NX)
     const toMax = mode === RTZ || (mode === RDN && sign === 0n) || (mode === RUP && sign === 1n)
     return toMax ? largest(sign, f) : signBit | (f.expMask << f.frac)
   }
@@ -82,9 +89,18 @@ export function rsqrt7(bits: bigint, f: Format): bigint {
   const expField = (bits >> f.frac) & f.expMask
   const fracField = bits & ((1n << f.frac) - 1n)
   const signBit = sign << BigInt(f.width - 1)
-  if (expField === f.expMask && fracField !== 0n) return canonicalNaN(f)
-  if (expField === 0n && fracField === 0n) return signBit | (f.expMask << f.frac) // 1/sqrt(+-0) = +-inf
-  if (sign === 1n) return canonicalNaN(f) // negative: invalid
+  if (expField === f.expMask && fracField !== 0n) {
+    if (signalingNaN(bits, f.width)) raiseFlags(NV)
+    return canonicalNaN(f)
+  }
+  if (expField === 0n && fracField === 0n) {
+    raiseFlags(DZ)
+    return signBit | (f.expMask << f.frac) // 1/sqrt(+-0) = +-inf
+  }
+  if (sign === 1n) {
+    raiseFlags(NV)
+    return canonicalNaN(f) // negative: invalid
+  }
   if (expField === f.expMask) return 0n // 1/sqrt(+inf) = +0
   const n = normalize(bits, f)
   const index = Number(((n.exp & 1n) << 6n) | (n.frac >> (f.frac - 6n)))
@@ -101,11 +117,14 @@ function estimate(kind: 'rec' | 'rsqrt'): Handler {
     checkMaskOverlap(ins, vd)
     if (m.frm > 4) throw new ExecFault('rounding-mode', `${ins.op}: frm = ${m.frm} is a reserved rounding mode`)
     const f = sew === 64 ? F64 : F32
+    takeFlags()
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(ins.operands.vm, i)) continue
       const x = readElem(m, vs2, sew, i, false)
       writeElem(m, vd, sew, i, kind === 'rec' ? rec7(x, f, m.frm as RoundingMode) : rsqrt7(x, f))
     }
+    // Subnormal results raise no underflow: the estimate loses no precision there (as QEMU).
+    if (m.readsFpFlags) m.fflags |= takeFlags()
     if (rec.on) rec.vector(ins, { dstRegs: regGroup(vd, lmul), srcRegs: [regGroup(vs2, lmul)] })
   }
 }

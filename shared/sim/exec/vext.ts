@@ -9,7 +9,7 @@
  */
 import type { Instruction, Sew } from '../isa/types'
 import type { Handler } from './handler'
-import { checkMaskOverlap, operand, requireVtype } from './handler'
+import { checkMaskOverlap, checkWidthOverlap, operand, requireVtype } from './handler'
 import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
 import { readElem, roundoff, writeElem } from './velem'
 
@@ -63,6 +63,10 @@ function extOp(def: ExtDef, form: Form | undefined): Handler {
     const vs2 = checkGroup(ins.operands.vs2, lmul * def.vs2.width, 'vs2', ins)
     const vs1 = form === 'v' ? checkGroup(ins.operands.vs1, lmul * (def.b?.width ?? 1), 'vs1', ins) : 0
     if (!def.carry && def.dst !== 'mask') checkMaskOverlap(ins, vd)
+    if (def.dst !== 'mask') {
+      checkWidthOverlap(ins, vd, lmul * dstW, dEew, vs2, lmul * def.vs2.width, s2Eew, 'vs2')
+      if (form === 'v') checkWidthOverlap(ins, vd, lmul * dstW, dEew, vs1, lmul * (def.b?.width ?? 1), sew * (def.b?.width ?? 1), 'vs1')
+    }
     if (def.carry && def.dst !== 'mask' && vd === 0) throw new ExecFault('mask-overlap', `${ins.op}: the destination v0 overlaps the carry input v0`)
     const b = def.b
     const k = form && form !== 'v' && b ? scalarOperand(m, ins, form, sew, b) : 0n

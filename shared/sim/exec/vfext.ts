@@ -11,7 +11,7 @@
 import type { Instruction, Sew } from '../isa/types'
 import { arith, BINARY64, floatToInt, fusedMultiplyAdd, intToFloat, NV, RNE, RTZ, type RoundingMode, signalingNaN, takeFlags, toBinary32, BINARY32 } from './fp'
 import type { Handler } from './handler'
-import { checkMaskOverlap, operand, requireVtype } from './handler'
+import { checkMaskOverlap, checkWidthOverlap, operand, requireVtype } from './handler'
 import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
 import { readElem, writeElem } from './velem'
 
@@ -61,6 +61,8 @@ function wideArith(fn: (a: number, b: number, d: number) => number, form: Form, 
     const vv = form === 'vv' || form === 'wv'
     const vs1 = vv ? checkGroup(ins.operands.vs1, lmul, 'vs1', ins) : 0
     checkMaskOverlap(ins, vd)
+    checkWidthOverlap(ins, vd, 2 * lmul, 64, vs2, wideA ? 2 * lmul : lmul, wideA ? 64 : 32, 'vs2')
+    if (vv) checkWidthOverlap(ins, vd, 2 * lmul, 64, vs1, lmul, 32, 'vs1')
     const k = vv ? 0 : m.f32Operand(operand(ins, 'rs1'))
     const flags = m.readsFpFlags
     const kSignaling = flags && !vv && signalingNaN(BigInt(m.f32OperandBits(operand(ins, 'rs1'))), 32)
@@ -97,6 +99,7 @@ function convert(from: Kind, to: Kind, dir: 'widen' | 'narrow', allowed: readonl
     const vd = checkGroup(ins.operands.vd, dir === 'widen' ? 2 * lmul : lmul, 'vd', ins)
     const vs2 = checkGroup(ins.operands.vs2, dir === 'widen' ? lmul : 2 * lmul, 'vs2', ins)
     checkMaskOverlap(ins, vd)
+    checkWidthOverlap(ins, vd, dir === 'widen' ? 2 * lmul : lmul, dstEew, vs2, dir === 'widen' ? lmul : 2 * lmul, srcEew, 'vs2')
     const rm = mode === undefined ? frm(m, ins) : mode
     const flags = m.readsFpFlags
     if (flags) takeFlags()

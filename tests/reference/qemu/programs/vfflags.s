@@ -2,8 +2,8 @@
 # section 13.1, as the scalar instructions do): element-wise add, multiply,
 # divide, min/max, square root, fused multiply-add, quiet and signaling
 # compares, conversions, widening and narrowing arithmetic and conversions,
-# reductions (ordered, unordered, min/max, widening), a signaling NaN scalar
-# operand, a masked-off
+# reductions (ordered, unordered, min/max, widening), the vfrec7/vfrsqrt7
+# estimates, a signaling NaN scalar operand, a masked-off
 # element (no flag) and vl = 0 (no element, no flag). One byte of fflags per case.
     .globl _start
     .text
@@ -401,6 +401,64 @@ _start:
     frflags t0
     sb t0, 0(a4)
     addi a4, a4, 1
+    vsetivli zero, 4, e32, m1, ta, ma
+    addi t2, a2, 96
+    vle32.v v1, (t2)
+    fsflags zero
+    vfrec7.v v3, v1
+    frflags t0
+    sb t0, 0(a4)
+    addi a4, a4, 1
+    addi t2, a2, 96
+    vle32.v v1, (t2)
+    fsflags zero
+    vfrsqrt7.v v3, v1
+    frflags t0
+    sb t0, 0(a4)
+    addi a4, a4, 1
+    addi t2, a2, 32
+    vle32.v v1, (t2)
+    fsflags zero
+    vfrec7.v v3, v1
+    frflags t0
+    sb t0, 0(a4)
+    addi a4, a4, 1
+    addi t2, a2, 48
+    vle32.v v1, (t2)
+    fsflags zero
+    vfrsqrt7.v v3, v1
+    frflags t0
+    sb t0, 0(a4)
+    addi a4, a4, 1
+    addi t2, a2, 0
+    vle32.v v1, (t2)
+    fsflags zero
+    vfrec7.v v3, v1
+    frflags t0
+    sb t0, 0(a4)
+    addi a4, a4, 1
+    vsetivli zero, 2, e64, m1, ta, ma
+    addi t2, a1, 112
+    vle64.v v1, (t2)
+    fsflags zero
+    vfrsqrt7.v v3, v1
+    frflags t0
+    sb t0, 0(a4)
+    addi a4, a4, 1
+    addi t2, a1, 48
+    vle64.v v1, (t2)
+    fsflags zero
+    vfrec7.v v3, v1
+    frflags t0
+    sb t0, 0(a4)
+    addi a4, a4, 1
+    li t3, 1
+    vmv.s.x v1, t3
+    fsflags zero
+    vfrec7.v v3, v1
+    frflags t0
+    sb t0, 0(a4)
+    addi a4, a4, 1
     # write(1, result, result_end - result); exit(0)
     li a7, 64
     li a0, 1
@@ -416,5 +474,5 @@ _start:
     .balign 16
 c64: .dword 0x3FF0000000000000, 0x3C30000000000000, 0x3FF0000000000000, 0x3FF0000000000000, 0x0000000000000000, 0x3FF0000000000000, 0x7FEFFFFFFFFFFFFF, 0x4000000000000000, 0x0170000000000000, 0x39B0000000000000, 0x7FF0000000000001, 0x3FF0000000000000, 0x7FF8000000000000, 0x3FF0000000000000, 0xBFF0000000000000, 0x4000000000000000, 0x400C000000000000, 0x4202A05F20000000, 0x7FF0000000000000, 0x0000000000000000, 0x0020000000000001, 0x0000000000000003
 c32: .word 0x3F800000, 0x30800000, 0x3F800000, 0x3F800000, 0x7F7FFFFF, 0x40000000, 0x3F800000, 0x3F800000, 0x00400001, 0x3F000000, 0x3F800000, 0x3F800000, 0x7F800001, 0x3F800000, 0x3F800000, 0x3F800000, 0x01000001, 0x00000003, 0x00000005, 0x00000007, 0x71800000, 0x0D800000, 0x3F800000, 0x3F800000, 0x7F800000, 0x00000000, 0x3F800000, 0x3F800000
-result: .zero 49
+result: .zero 57
 result_end:
