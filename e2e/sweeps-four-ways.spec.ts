@@ -34,7 +34,7 @@ function startWorker(lines: string[]): Promise<ChildProcess> {
       const parts = buffered.split('\n')
       buffered = parts.pop() ?? ''
       lines.push(...parts)
-      if (parts.some((l) => l.includes('taking chunks'))) resolve(child)
+      if (parts.some((l) => l.includes('taking sweep chunks'))) resolve(child)
     })
     child.on('exit', (code) => reject(new Error(`the worker exited with ${code}`)))
     setTimeout(() => reject(new Error('the worker did not start in 60 s')), 60_000).unref()
