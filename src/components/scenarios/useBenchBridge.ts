@@ -49,5 +49,35 @@ export function useBenchBridge() {
     bench.setView(c.view)
   }
 
-  return { bench, snapshot, content, load }
+  /**
+   * Remembers the Bench as the user has it (program, machine draft, preset,
+   * example, title, view, expectations, walkthroughs) and returns what puts
+   * it back: a page that borrows the Bench (a share link, a lesson) calls it
+   * when it leaves.
+   */
+  function keep(): () => void {
+    const before = {
+      source: bench.source,
+      machineDraft: bench.machineDraft,
+      presetId: bench.presetId,
+      exampleId: bench.exampleId,
+      title: bench.title,
+      view: { ...bench.view },
+      expectations: expectations.list,
+      walkthroughs: walkthroughs.list,
+    }
+    return () => {
+      bench.pause()
+      expectations.setList(before.expectations)
+      walkthroughs.setList(before.walkthroughs)
+      bench.exampleId = before.exampleId
+      bench.title = before.title
+      bench.presetId = before.presetId
+      bench.setSource(before.source)
+      bench.machineDraft = before.machineDraft
+      bench.setView(before.view)
+    }
+  }
+
+  return { bench, snapshot, content, load, keep }
 }
