@@ -16,8 +16,8 @@ export function longStream(): string {
 /** The long stream at another vl (250: a ragged tail, lanes 0 and 1 hold one element more than the others on 8 lanes). */
 export function longStreamAt(vl: number): string {
   const text = longStream()
-  if (!text.includes('li      a0, 256\n')) throw new Error('long-stream.s no longer sets vl with li a0, 256')
-  return text.replace('li      a0, 256\n', `li      a0, ${vl}\n`)
+  if (!text.includes('.equ    AVL, 256\n')) throw new Error('long-stream.s no longer sets its vector length with .equ AVL, 256')
+  return text.replace('.equ    AVL, 256\n', `.equ    AVL, ${vl}\n`)
 }
 
 /** A loop of `body` lines run `times` times at vl 256, e64, m2, after making v2 and v4 hold data. */

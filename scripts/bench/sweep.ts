@@ -20,8 +20,8 @@ import { runOnThreads } from '../../server/cli/sweepThreads'
 import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
 import { longStream } from './programs'
 
-/** The long stream with its vector length as a swept symbol (examples/long-stream.s sets it with li a0, 256). */
-const LONG_STREAM_AVL = longStream().replace('li      a0, 256\n', '.equ    AVL, 256\n    li      a0, AVL\n')
+/** The long stream; its vector length is the symbol AVL (`.equ AVL, 256` in examples/long-stream.s). */
+const LONG_STREAM_AVL = longStream()
 
 const GRIDS: { name: string; definition: SweepDefinition }[] = [
   { name: 'vl curve (512 points)', definition: sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'AVL', spec: '1..256' }, { path: 'issue', spec: 'serial,staggered' }] }) },

@@ -17,7 +17,8 @@ import { longStream } from './programs'
 
 const port = Number(process.env.CHIMELINE_E2E_PORT ?? 3190)
 const base = `http://127.0.0.1:${port}`
-const LONG_STREAM_AVL = longStream().replace('li      a0, 256\n', '.equ    AVL, 256\n    li      a0, AVL\n')
+/** The long stream; its vector length is the symbol AVL (`.equ AVL, 256` in examples/long-stream.s). */
+const LONG_STREAM_AVL = longStream()
 const SWEEPS = [
   { name: 'vl curve (512 points)', program: FMA_CURVE, params: [['AVL', '1..256'], ['issue', 'serial,staggered']], points: 512 },
   { name: 'accumulator curve (128 points)', program: REDUCTION_CURVE, params: [['AVL', '8..256:8'], ['reductionAccumulators', '1,2,4,8']], points: 128 },
