@@ -10,6 +10,7 @@ import { mkdtempSync, readFileSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { fileURLToPath } from 'node:url'
+import { referenceToolsPresent } from '../tools'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { assemble } from '../../../shared/sim/isa/assembler'
 import { encode } from '../../../shared/sim/isa/encoder'
@@ -20,22 +21,7 @@ import type { Instruction } from '../../../shared/sim/isa/types'
 const corpusPath = fileURLToPath(new URL('./corpus.s', import.meta.url))
 const corpus = readFileSync(corpusPath, 'utf8')
 
-function toolPresent(): boolean {
-  try {
-    execFileSync('riscv64-linux-gnu-as', ['--version'], { stdio: 'ignore' })
-    execFileSync('riscv64-linux-gnu-objdump', ['--version'], { stdio: 'ignore' })
-    return true
-  } catch {
-    return false
-  }
-}
-
-const present = toolPresent()
-if (!present) {
-  const msg = 'GNU binutils for RISC-V (riscv64-linux-gnu-as/objdump) is missing: install with `bash scripts/ensure-tools.sh riscv`'
-  if (process.env.CI === 'true') throw new Error(`CI: ${msg}`)
-  console.warn(`\n!!!!! SKIPPING the binutils reference check: ${msg} !!!!!\n`)
-}
+const present = referenceToolsPresent('the binutils reference check', ['riscv64-linux-gnu-as', 'riscv64-linux-gnu-objdump'], 'riscv')
 
 /**
  * objdump text normalised for comparison: whitespace squeezed, its `# ...`

@@ -11,6 +11,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { fileURLToPath } from 'node:url'
+import { referenceToolsPresent } from '../tools'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { decodeFunction, listFunctions } from '../../../server/services/elf/import'
 import { ElfError, readElf } from '../../../server/services/elf/reader'
@@ -19,21 +20,11 @@ import { encode, encodeSized } from '../../../shared/sim/isa/encoder'
 
 const kernels = fileURLToPath(new URL('./kernels.s', import.meta.url))
 
-function toolPresent(): boolean {
-  try {
-    for (const tool of ['as', 'ld', 'objdump', 'nm', 'readelf']) execFileSync(`riscv64-linux-gnu-${tool}`, ['--version'], { stdio: 'ignore' })
-    return true
-  } catch {
-    return false
-  }
-}
-
-const present = toolPresent()
-if (!present) {
-  const msg = 'GNU binutils for RISC-V (riscv64-linux-gnu-as/ld/objdump/nm/readelf) is missing: install with `bash scripts/ensure-tools.sh riscv`'
-  if (process.env.CI === 'true') throw new Error(`CI: ${msg}`)
-  console.warn(`\n!!!!! SKIPPING the ELF reader reference check: ${msg} !!!!!\n`)
-}
+const present = referenceToolsPresent(
+  'the ELF reader reference check',
+  ['as', 'ld', 'objdump', 'nm', 'readelf'].map((tool) => `riscv64-linux-gnu-${tool}`),
+  'riscv',
+)
 
 const run = (tool: string, args: string[]) => execFileSync(`riscv64-linux-gnu-${tool}`, args, { encoding: 'utf8' })
 

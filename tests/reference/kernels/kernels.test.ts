@@ -21,6 +21,7 @@ import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { basename, join } from 'node:path'
 import { promisify } from 'node:util'
+import { referenceToolsPresent } from '../tools'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { assemble } from '../../../shared/sim/isa/assembler'
 import { decodeAt } from '../../../shared/sim/isa/decoder'
@@ -40,24 +41,7 @@ const CLANG = 'clang-16'
 const FLAGS = ['--target=riscv64-unknown-elf', '-march=rv64gcv', '-O2', '-ffreestanding', '-nostdlib', '-S']
 const TOOLS = [CLANG, 'riscv64-linux-gnu-as', 'riscv64-linux-gnu-ld', 'riscv64-linux-gnu-objdump', 'qemu-riscv64']
 
-async function missing(): Promise<string[]> {
-  const out: string[] = []
-  for (const t of TOOLS) {
-    try {
-      await run('sh', ['-c', `command -v ${t}`])
-    } catch {
-      out.push(t)
-    }
-  }
-  return out
-}
-
-const absent = await missing()
-if (absent.length > 0) {
-  const msg = `${absent.join(', ')} missing: install with \`bash scripts/ensure-tools.sh clang riscv\``
-  if (process.env.CI === 'true') throw new Error(`CI: ${msg}`)
-  console.warn(`\n!!!!! SKIPPING the compiled-kernel reference check: ${msg} !!!!!\n`)
-}
+const present = referenceToolsPresent('the compiled-kernel reference check', TOOLS, 'clang riscv')
 
 interface Built {
   /** clang's assembly, exactly as written. */
@@ -84,7 +68,7 @@ function normalise(text: string): string {
   return t.replace(/^(add|and|or|xor|sll|srl|sra)(w?) ([a-z0-9]+),([a-z0-9]+),(-?(0x[0-9a-f]+|[0-9]+))$/, (_m, op: string, w: string, rd: string, rs: string, imm: string) => `${op}i${w} ${rd},${rs},${imm}`)
 }
 
-describe.skipIf(absent.length > 0)('C kernels compiled by clang-16: Chimeline runs the compiler output and prints what QEMU prints', () => {
+describe.skipIf(!present)('C kernels compiled by clang-16: Chimeline runs the compiler output and prints what QEMU prints', () => {
   let dir = ''
   const built = new Map<string, Built>()
 

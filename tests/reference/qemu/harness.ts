@@ -31,19 +31,6 @@ export function corpus(): CorpusProgram[] {
     .map((f) => ({ name: basename(f, '.s'), path: join(PROGRAM_DIR, f), source: readFileSync(join(PROGRAM_DIR, f), 'utf8') }))
 }
 
-/** The tools that are not on PATH. */
-export async function missingTools(): Promise<string[]> {
-  const missing: string[] = []
-  for (const t of TOOLS) {
-    try {
-      await run('sh', ['-c', `command -v ${t}`])
-    } catch {
-      missing.push(t)
-    }
-  }
-  return missing
-}
-
 /** Runs `jobs` with at most `limit` at a time, keeping their order. */
 export async function pool<T>(jobs: (() => Promise<T>)[], limit: number): Promise<T[]> {
   const results: T[] = new Array(jobs.length)

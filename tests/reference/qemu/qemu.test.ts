@@ -7,10 +7,11 @@
 import { beforeAll, describe, expect, it } from 'vitest'
 import { assemble } from '../../../shared/sim/isa/assembler'
 import { execute } from '../../../shared/sim/exec/execute'
-import { corpus, missingTools, type QemuRun, referenceOutputs, VLENS } from './harness'
+import { missingTools } from '../tools'
+import { corpus, type QemuRun, referenceOutputs, TOOLS, VLENS } from './harness'
 
 const programs = corpus()
-const missing = await missingTools()
+const missing = missingTools(TOOLS)
 const inCi = process.env.CI === 'true'
 if (missing.length > 0) {
   console.warn(`\n!!! QEMU reference check SKIPPED: missing ${missing.join(', ')} (run: bash scripts/ensure-tools.sh riscv)\n`)

@@ -11,7 +11,8 @@ import { parseMachine, type MachineInput } from '../../../shared/schemas/machine
 import { execute } from '../../../shared/sim/exec/execute'
 import { assemble } from '../../../shared/sim/isa/assembler'
 import { simulate } from '../../../shared/sim/timing/simulate'
-import { build, missingTools, runQemu, VLENS } from '../../reference/qemu/harness'
+import { missingTools } from '../../reference/tools'
+import { build, runQemu, TOOLS, VLENS } from '../../reference/qemu/harness'
 
 const PATH = 'examples/bank-conflicts.s'
 const source = readFileSync(PATH, 'utf8')
@@ -55,7 +56,7 @@ describe('the bank-conflict demo (examples/bank-conflicts.s)', () => {
   })
 })
 
-const missing = await missingTools()
+const missing = missingTools(TOOLS)
 describe.skipIf(missing.length > 0)('examples/bank-conflicts.s against QEMU user mode', () => {
   const dir = mkdtempSync(join(tmpdir(), 'chimeline-bank-'))
   afterAll(() => rmSync(dir, { recursive: true, force: true }))
