@@ -75,7 +75,8 @@ function firstStall(trace: TimingTrace, reason: number | null): DecidingPoint | 
   return null
 }
 
-function position(trace: TimingTrace, instruction: number): number {
+/** Where instruction `instruction` (its `#`) sits in the trace's list, or -1 when the run has none. */
+export function position(trace: TimingTrace, instruction: number): number {
   const direct = trace.instructions[instruction]
   return direct?.index === instruction ? instruction : trace.instructions.findIndex((i) => i.index === instruction)
 }

@@ -10,17 +10,12 @@
 import type { z } from 'zod'
 import type { baseFactSchema, TraceFact, WalkthroughStep } from '../schemas/walkthrough'
 import { laneTiming, type TimingTrace } from '../sim/trace/types'
-import { metricValue } from '../expectations/evaluate'
+import { metricValue, position } from '../expectations/evaluate'
 
 /** A fact's value, or a sentence saying why the run has none (no such lane, instruction or phase). */
 export type FactValue = { ok: true; value: number } | { ok: false; why: string }
 
 type BaseFact = z.output<typeof baseFactSchema>
-
-function position(trace: TimingTrace, instruction: number): number {
-  const direct = trace.instructions[instruction]
-  return direct?.index === instruction ? instruction : trace.instructions.findIndex((i) => i.index === instruction)
-}
 
 function baseValue(trace: TimingTrace, fact: BaseFact): FactValue {
   switch (fact.kind) {
