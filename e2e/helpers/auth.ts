@@ -16,11 +16,17 @@ export async function fillSignIn(page: Page, email: string, password: string) {
   await page.getByRole('button', { name: 'Sign in' }).click()
 }
 
-/** Opens /signin, signs in and waits for the signed-in shell. */
+/**
+ * Opens /signin, signs in and waits for the signed-in shell and for the
+ * redirect away from /signin: the user menu shows as soon as the session is
+ * set, before the router has loaded the next page, and a click in between is
+ * overridden by that redirect (seen in CI on the Learn link).
+ */
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
   await page.goto('/signin')
   await fillSignIn(page, email, password)
   await expect(page.getByTestId('user-menu')).toBeVisible()
+  await expect(page).not.toHaveURL(/\/signin(\?|$)/)
 }
 
 /** Picks an entry of the user menu (a Naive UI dropdown) by its label. */
