@@ -139,7 +139,7 @@ export function execute(program: Program, options: ExecuteOptions): ExecuteResul
   for (let i = 0; i < code.length; i++) {
     const ins = code[i]!
     const info = opInfo(ins.op)
-    const handler = table[ins.op]
+    const handler = table.get(ins.op)
     if (!info || !handler) return failure('not-executable', `cannot execute ${ins.op}: no semantics for it`, ins.loc, i)
     metas.push(info)
     handlers.push(handler)
