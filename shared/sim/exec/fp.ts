@@ -10,8 +10,9 @@
  *   Math.fround: binary64 has 53 >= 2 x 24 + 2 bits, which makes that double
  *   rounding innocuous for these operations (Figueroa, "When is double rounding
  *   innocuous?", 1995).
- * - Fused multiply-add is computed exactly on BigInt significands and rounded
- *   once (IEEE 754-2008 fusedMultiplyAdd), for both formats.
+ * - Fused multiply-add is rounded once (IEEE 754-2008 fusedMultiplyAdd), for
+ *   both formats: in RNE on common operands by exact transformations in
+ *   binary64 and rounding to odd, otherwise exactly on BigInt significands.
  * - IEEE 754 exception flags (section 7) are raised into an accumulator that
  *   the scalar F/D handlers take after each instruction into fflags: rounding
  *   on the exact path raises inexact, overflow and underflow (tininess
@@ -200,12 +201,118 @@ function overflow(negative: boolean, fmt: FloatFormat, mode: RoundingMode): numb
   return negative ? -v : v
 }
 
+// Views of one binary64 for the round-to-odd step: words[0] is the low half of the bits (little-endian, checked in machine.ts).
+const oddScratch = new Float64Array(1)
+const oddWords = new Uint32Array(oddScratch.buffer)
+
+/**
+ * x rounded to odd (toward zero, then the last significand bit set if that was
+ * inexact), from s = RN(x) and e = x - s != 0 exactly (TwoSum). |x| < |s|
+ * when e and s differ in sign: then truncation is the next value toward zero.
+ */
+function roundToOdd(s: number, e: number): number {
+  oddScratch[0] = s
+  if (e > 0 !== s > 0) {
+    // One ulp toward zero: the magnitude's bits less one (s != 0, so no borrow reaches the sign).
+    if (oddWords[0] === 0) {
+      oddWords[0] = 0xffffffff
+      oddWords[1] = (oddWords[1] as number) - 1
+    } else oddWords[0] = (oddWords[0] as number) - 1
+  }
+  oddWords[0] = (oddWords[0] as number) | 1
+  return oddScratch[0] as number
+}
+
+// Veltkamp's split constant 2^27 + 1 and the ranges where the fast paths below need no exact arithmetic.
+const SPLIT = 134217729
+const FACTOR_MIN = 2 ** -450
+const FACTOR_MAX = 2 ** 450
+const ADDEND_MIN = 2 ** -900
+const ADDEND_MAX = 2 ** 900
+const F32_NORMAL_MIN = 2 ** -126
+const F32_MAX = (2 - 2 ** -23) * 2 ** 127
+
+/**
+ * binary64 a x b + c in RNE on binary64 arithmetic alone (Boldo and Melquiond,
+ * "Emulation of FMA and correctly rounded sums: proved algorithms using
+ * rounding to odd", IEEE Trans. Computers 57(4), 2008; glibc's software fma
+ * does the same): the product exactly as uh + ul (Dekker's TwoProduct with
+ * Veltkamp's split), c + uh exactly as th + tl (Knuth's TwoSum), then
+ * RN(th + RO(tl + ul)). With factors within 2^+-450 and the addend zero or
+ * within 2^+-900 nothing overflows and every partial result is a normal
+ * number (the exact result is a multiple of 2^-1006), which the proof needs.
+ * Raises inexact; NaN: outside those ranges, left to the exact path.
+ */
+function fastFma64(a: number, b: number, c: number): number {
+  const aa = Math.abs(a)
+  const ab = Math.abs(b)
+  const ac = Math.abs(c)
+  if (!(aa >= FACTOR_MIN && aa <= FACTOR_MAX && ab >= FACTOR_MIN && ab <= FACTOR_MAX && (c === 0 || (ac >= ADDEND_MIN && ac <= ADDEND_MAX)))) return NaN
+  const uh = a * b
+  let t = SPLIT * a
+  const ah = t - (t - a)
+  const al = a - ah
+  t = SPLIT * b
+  const bh = t - (t - b)
+  const bl = b - bh
+  const ul = ah * bh - uh + ah * bl + al * bh + al * bl
+  // A nonzero product plus a zero addend of either sign is the product.
+  if (c === 0) {
+    if (ul !== 0) accrued |= NX
+    return uh
+  }
+  const th = c + uh
+  let bb = th - c
+  const tl = c - (th - bb) + (uh - bb)
+  const s = tl + ul
+  bb = s - tl
+  const e = tl - (s - bb) + (ul - bb)
+  const v = e === 0 ? s : roundToOdd(s, e)
+  const z = th + v
+  bb = z - th
+  // Exact only if both the odd rounding and the last sum were (an inexact v means z cannot equal th + (tl + ul)).
+  if (e !== 0 || th - (z - bb) + (v - bb) !== 0) accrued |= NX
+  return z
+}
+
+/**
+ * binary32 a x b + c in RNE: the product of two binary32 values is exact in
+ * binary64, and the sum rounded to odd in binary64 then to binary32 is
+ * correctly rounded, as 53 >= 24 + 2 (Boldo and Melquiond, "When double
+ * rounding is odd", 2005). Results that are zero, not normal or past the
+ * largest binary32 are left to the exact path (NaN), which knows their sign,
+ * underflow and overflow.
+ */
+function fastFma32(a: number, b: number, c: number): number {
+  const p = a * b
+  if (p === 0 || !Number.isFinite(p) || !Number.isFinite(c)) return NaN
+  const s = p + c
+  const bb = s - p
+  const e = p - (s - bb) + (c - bb)
+  const v = e === 0 ? s : roundToOdd(s, e)
+  const r = Math.fround(v)
+  const ar = Math.abs(r)
+  if (!(Math.abs(v) >= F32_NORMAL_MIN && ar <= F32_MAX)) return NaN
+  if (e !== 0 || r !== v) accrued |= NX
+  return r
+}
+
 /**
  * fusedMultiplyAdd(a, b, c) = a x b + c rounded once, in binary64 or binary32
  * (inputs are values of that format). NaN results are returned as NaN; the
- * caller stores the canonical NaN.
+ * caller stores the canonical NaN. Finite RNE operands in the common ranges
+ * take a fast path of binary64 arithmetic; the rest the exact one.
  */
 export function fusedMultiplyAdd(a: number, b: number, c: number, fmt: FloatFormat = BINARY64, mode: RoundingMode = RNE): number {
+  if (mode === RNE) {
+    const r = fmt === BINARY64 ? fastFma64(a, b, c) : fastFma32(a, b, c)
+    if (r === r) return r
+  }
+  return exactFusedMultiplyAdd(a, b, c, fmt, mode)
+}
+
+/** fusedMultiplyAdd on exact BigInt significands, rounded once: every case, every mode. */
+export function exactFusedMultiplyAdd(a: number, b: number, c: number, fmt: FloatFormat = BINARY64, mode: RoundingMode = RNE): number {
   // inf x 0 is invalid even when the addend is a quiet NaN (F extension, fused multiply-add).
   if ((a === 0 && (b === Infinity || b === -Infinity)) || (b === 0 && (a === Infinity || a === -Infinity))) accrued |= NV
   if (Number.isNaN(a) || Number.isNaN(b) || Number.isNaN(c)) return NaN

@@ -6,7 +6,7 @@
  */
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { BINARY32, BINARY64, bitsToF32, bitsToF64, f32ToBits, f64ToBits, fusedMultiplyAdd } from '../../../shared/sim/exec/fp'
+import { BINARY32, BINARY64, bitsToF32, bitsToF64, exactFusedMultiplyAdd, f32ToBits, f64ToBits, fusedMultiplyAdd, NX, takeFlags } from '../../../shared/sim/exec/fp'
 
 const p2 = (e: number): number => 2 ** e
 
@@ -100,6 +100,89 @@ describe('fusedMultiplyAdd in binary32', () => {
         else expect(Object.is(ours, reference)).toBe(true)
       }),
       { numRuns: 3000 },
+    )
+  })
+})
+
+/**
+ * In RNE, common operands take a fast path of binary64 arithmetic (Dekker's
+ * exact product, Knuth's TwoSum and rounding to odd: Boldo and Melquiond,
+ * IEEE Trans. Computers 57(4), 2008). It must give the very bits and flags of
+ * the exact BigInt path, which rounds the exact value once by the rules of
+ * IEEE 754-2008 section 4.3 and is itself checked above and against QEMU.
+ */
+describe('the fast RNE path of fusedMultiplyAdd equals the exact path, bits and flags', () => {
+  const call = (f: typeof fusedMultiplyAdd, a: number, b: number, c: number, fmt = BINARY64) => {
+    takeFlags()
+    const value = f(a, b, c, fmt)
+    return { value, flags: takeFlags() }
+  }
+  const same = (a: number, b: number, c: number, fmt = BINARY64) => {
+    const fast = call(fusedMultiplyAdd, a, b, c, fmt)
+    const exact = call(exactFusedMultiplyAdd, a, b, c, fmt)
+    if (Number.isNaN(exact.value)) expect(fast.value).toBeNaN()
+    else expect(Object.is(fast.value, exact.value), `${a} x ${b} + ${c}: ${fast.value} vs ${exact.value}`).toBe(true)
+    expect(fast.flags).toBe(exact.flags)
+  }
+  // Doubles of any exponent in [lo, hi], any significand and sign.
+  const double = (lo: number, hi: number) =>
+    fc.tuple(fc.boolean(), fc.integer({ min: lo, max: hi }), fc.integer({ min: 0, max: 2 ** 26 - 1 }), fc.integer({ min: 0, max: 2 ** 26 - 1 }))
+      .map(([neg, e, h, l]) => (neg ? -1 : 1) * (1 + (h * 2 ** 26 + l) * 2 ** -52) * 2 ** e)
+
+  it('on random binary64 operands across the exponent range, the fast one\'s edges included', () => {
+    fc.assert(fc.property(double(-1074, 1023), double(-1074, 1023), double(-1074, 1023), (a, b, c) => same(a, b, c)), { numRuns: 4000 })
+    fc.assert(fc.property(double(-470, 470), double(-470, 470), double(-920, 920), (a, b, c) => same(a, b, c)), { numRuns: 4000 })
+  })
+
+  it('when the addend nearly cancels the product (the sum keeps few bits), and with a zero addend', () => {
+    fc.assert(
+      fc.property(double(-60, 60), double(-60, 60), fc.integer({ min: -3, max: 3 }), (a, b, k) => {
+        const p = a * b
+        same(a, b, -p)
+        same(a, b, -(p + k * Math.abs(p) * 2 ** -52))
+        same(a, b, 0)
+        same(a, b, -0)
+      }),
+      { numRuns: 3000 },
+    )
+  })
+
+  it('(2^-53 (1+2^-27)) x (1-2^-27) + (1+2^-52) is 1+2^-52: the round-to-odd step, without which the sum lands on a tie and rounds up', () => {
+    // Exact: 1 + 2^-52 + 2^-53 - 2^-107, just below the midpoint 1 + 2^-52 + 2^-53 of the
+    // neighbours 1 + 2^-52 and 1 + 2^-51, so RN gives 1 + 2^-52. The product rounded alone is
+    // 2^-53, and 1 + 2^-52 + 2^-53 is a tie that goes to the even 1 + 2^-51.
+    const a = p2(-53) * (1 + p2(-27))
+    const b = 1 - p2(-27)
+    const c = 1 + p2(-52)
+    expect(fusedMultiplyAdd(a, b, c)).toBe(1 + p2(-52))
+    expect(a * b + c).toBe(1 + p2(-51))
+    same(a, b, c)
+  })
+
+  it('near ties: (2^-53 (1+2^-m)) x (1-2^-m) + (1 + n 2^-52), either sign', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 27, max: 52 }), fc.integer({ min: 0, max: 2 ** 20 }), fc.boolean(), (m, n, neg) => {
+        const s = neg ? -1 : 1
+        same(s * p2(-53) * (1 + p2(-m)), 1 - p2(-m), s * (1 + n * p2(-52)))
+        same(s * p2(-53) * (1 + p2(-m)), 1 + p2(-m), s * (1 + n * p2(-52)))
+      }),
+      { numRuns: 2000 },
+    )
+  })
+
+  it('raises inexact exactly when the result is not a x b + c: 3 x 5 + 1 is exact, 0.1 x 3 + 0 is not', () => {
+    expect(call(fusedMultiplyAdd, 3, 5, 1)).toEqual({ value: 16, flags: 0 })
+    expect(call(fusedMultiplyAdd, 0.1, 3, 0).flags).toBe(NX)
+  })
+
+  it('on random binary32 operands, near cancellation included', () => {
+    const f32 = fc.integer({ min: 0, max: 0xffffffff }).map((bits) => bitsToF32(bits)).filter((x) => Number.isFinite(x))
+    fc.assert(
+      fc.property(f32, f32, f32, (a, b, c) => {
+        same(a, b, c, BINARY32)
+        same(a, b, -Math.fround(a * b), BINARY32)
+      }),
+      { numRuns: 4000 },
     )
   })
 })
