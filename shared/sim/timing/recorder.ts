@@ -17,6 +17,8 @@ type Column = Int32Array | Uint8Array | Uint16Array | Uint32Array
 const CHUNK_BITS = 16
 const CHUNK = 1 << CHUNK_BITS
 const LOW = CHUNK - 1
+/** Rows of the first chunk before it grows. */
+const FIRST_ROWS = 256
 
 /**
  * Rows in fixed-size chunks, a row's columns side by side (one chunk lookup
@@ -38,10 +40,20 @@ class Columns {
   /** A new row starting at cycle `start`; returns its index. */
   push(start: number): number {
     const i = this.count++
-    if ((i & LOW) === 0) this.chunks.push(new Int32Array(CHUNK * this.width))
+    const at = (i & LOW) * this.width
+    let chunk = this.chunks[i >>> CHUNK_BITS]
+    if (chunk === undefined) {
+      // The first chunk starts small and doubles (a short run, e.g. a sweep point, should not clear a whole chunk); later ones are whole.
+      chunk = new Int32Array((i === 0 ? FIRST_ROWS : CHUNK) * this.width)
+      this.chunks.push(chunk)
+    } else if (at >= chunk.length) {
+      const grown = new Int32Array(Math.min(CHUNK * this.width, chunk.length * 2))
+      grown.set(chunk)
+      this.chunks[i >>> CHUNK_BITS] = chunk = grown
+    }
     if (start < this.lastStart) this.sorted = false
     this.lastStart = start
-    ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width] = start
+    chunk[at] = start
     return i
   }
   /** Columns 1 to 5 of row i at once (one chunk lookup): the rest of a row when its span closes. */
