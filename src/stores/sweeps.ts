@@ -40,6 +40,13 @@ export function configureSweepWorkers(factory: (count: number) => PoolWorkers): 
 /** Workers a sweep gets: one per core the browser reports, no more than its points. */
 export const poolSize = (points: number) => Math.max(1, Math.min(points, globalThis.navigator?.hardwareConcurrency || 2))
 
+/**
+ * Points land many times a second; the plot, the table and the progress take
+ * them in batches at most this often (the first point at once), so that the
+ * page's thread stays free to hand the Workers their next points.
+ */
+const FLUSH_EVERY_MS = 150
+
 export const useSweepsStore = defineStore('sweeps', () => {
   const program = ref('')
   const machine = ref<Record<string, unknown>>(structuredClone(defaultMachine) as unknown as Record<string, unknown>)
@@ -127,26 +134,52 @@ export const useSweepsStore = defineStore('sweeps', () => {
     totalMs.value = null
     status.value = 'running'
     const t0 = performance.now()
-    const workers = makeWorkers(poolSize(planned))
+    const workers = warm ?? makeWorkers(poolSize(planned))
+    let latest: SweepProgress | null = null
+    let timer: ReturnType<typeof setTimeout> | null = null
+    const flush = () => {
+      if (timer) clearTimeout(timer)
+      timer = null
+      triggerRef(points)
+      if (latest) progress.value = latest
+    }
     try {
       await loadPool(workers.runners, def.definition)
       const run = runPool(workers.runners, { planned, timeLimitMs: resolved.sweep.limits.timeLimitMs, order: programOrder(resolved.sweep, planned) }, {
         onPoint(point, p) {
-          firstPointMs.value ??= performance.now() - t0
           points.value[point.index] = point
-          triggerRef(points)
-          progress.value = p
+          latest = p
+          if (firstPointMs.value === null) {
+            firstPointMs.value = performance.now() - t0
+            flush()
+          } else timer ??= setTimeout(flush, FLUSH_EVERY_MS)
         },
       })
       current = { run, close: workers.close }
       const end = await run.finished
+      flush()
       totalMs.value = performance.now() - t0
       status.value = end.reason === 'done' ? (pointsLimitMessage(resolved.sweep) ? 'stopped' : 'done') : end.reason === 'cancelled' ? 'cancelled' : 'stopped'
       message.value = end.message ?? pointsLimitMessage(resolved.sweep)
     } finally {
-      workers.close()
+      if (timer) clearTimeout(timer)
+      if (workers !== warm) workers.close()
       current = null
     }
+  }
+
+  // Workers started ahead of a run while the Sweeps page is open, so that the first point does not wait for a Worker to load the simulator.
+  let warm: PoolWorkers | null = null
+  function warmUp(): void {
+    warm ??= makeWorkers(poolSize(Number.MAX_SAFE_INTEGER))
+  }
+  /** Lets the page's Workers go (a run under way finishes on them first). */
+  function releaseWorkers(): void {
+    const w = warm
+    warm = null
+    if (!w) return
+    if (current) void current.run.finished.then(() => w.close())
+    else w.close()
   }
 
   function pause(): void {
@@ -239,6 +272,6 @@ export const useSweepsStore = defineStore('sweeps', () => {
   return {
     program, machine, parameters, maxPoints, scenarioId, status, issues, message, points, arrived, progress, sweep, firstPointMs, totalMs, symbols, parameterNames,
     saved, savedId, apiError, following,
-    fromBench, start, pause, resume, cancel, addParameter, removeParameter, loadSaved, save, open, runOnServer, stopFollowing,
+    fromBench, start, warmUp, releaseWorkers, pause, resume, cancel, addParameter, removeParameter, loadSaved, save, open, runOnServer, stopFollowing,
   }
 })

@@ -1,8 +1,11 @@
 /**
  * Runs a sweep on a pool of point runners (Comlink-wrapped Workers in the
- * app, in-process services in tests): each runner takes the next point index
- * as soon as it is free, so results stream back as they finish, in whatever
- * order. Pause stops handing out points (those running finish), resume goes
+ * app, in-process services in tests), one point at a time, so results stream
+ * back as they finish, in whatever order. Each runner works through its own
+ * contiguous share of the order (one program's points stay together on one
+ * runner, which assembles and executes that program once; taking turns point
+ * by point, every runner prepared every program); a runner whose share is
+ * done takes the later half of the largest share left. Pause stops handing out points (those running finish), resume goes
  * on, cancel ends the sweep keeping the points done. The time limit counts
  * running time only, not time paused.
  */
@@ -55,7 +58,6 @@ export async function loadPool(runners: PointRunnerPort[], definition: SweepDefi
 
 export function runPool(runners: PointRunnerPort[], options: SweepPoolOptions, callbacks: SweepPoolCallbacks): SweepPoolRun {
   const now = options.now ?? (() => performance.now())
-  let next = 0
   let done = 0
   let paused = false
   let stop: SweepEnd | null = null
@@ -70,16 +72,35 @@ export function runPool(runners: PointRunnerPort[], options: SweepPoolOptions, c
     return { done, planned: options.planned, elapsedMs: ms, rate, remainingMs: rate ? ((options.planned - done) * 1000) / rate : null }
   }
 
-  async function lane(runner: PointRunnerPort): Promise<void> {
+  // Runner r's share is positions next..end-1 of the order.
+  const count = runners.length
+  const shares = runners.map((_, r) => ({ next: Math.floor((r * options.planned) / count), end: Math.floor(((r + 1) * options.planned) / count) }))
+  /** The next position for runner r, or -1 when no share has a point left to give. */
+  function claim(r: number): number {
+    const own = shares[r]!
+    if (own.next >= own.end) {
+      let largest: { next: number; end: number } | null = null
+      for (const s of shares) if (s.end - s.next >= 2 && (!largest || s.end - s.next > largest.end - largest.next)) largest = s
+      if (!largest) return -1
+      const mid = largest.next + Math.ceil((largest.end - largest.next) / 2)
+      own.next = mid
+      own.end = largest.end
+      largest.end = mid
+    }
+    return own.next++
+  }
+
+  async function lane(runner: PointRunnerPort, r: number): Promise<void> {
     for (;;) {
       while (paused && !stop) await new Promise<void>((resolve) => wake.push(resolve))
-      if (stop || next >= options.planned) return
+      if (stop) return
       if (elapsed() > options.timeLimitMs) {
         stop ??= { reason: 'time-limit', message: `the sweep reached its time limit of ${options.timeLimitMs / 1000} s after ${done} of ${options.planned} points; the points done are kept` }
         return
       }
-      const index = options.order?.[next] ?? next
-      next++
+      const at = claim(r)
+      if (at < 0) return
+      const index = options.order?.[at] ?? at
       const point = await runner.run(index)
       done++
       callbacks.onPoint(point, progress())

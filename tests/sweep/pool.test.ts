@@ -50,20 +50,42 @@ describe('sweep Worker pool', () => {
     let seen = 0
     const run = runPool([gated(), gated()], { planned: 12, timeLimitMs: 60_000 }, { onPoint: () => seen++ })
     await new Promise((resolve) => setTimeout(resolve, 0))
-    expect(started).toEqual([0, 1])
+    // Each runner starts its own half of the 12 points.
+    expect(started).toEqual([0, 6])
     run.pause()
     await finishAll()
     // The two points in flight land; no new one starts while paused.
     expect(seen).toBe(2)
-    expect(started).toEqual([0, 1])
+    expect(started).toEqual([0, 6])
     run.resume()
     await new Promise((resolve) => setTimeout(resolve, 0))
-    expect(started).toEqual([0, 1, 2, 3])
+    expect(started).toEqual([0, 6, 1, 7])
     run.cancel()
     await finishAll()
     const end = await run.finished
     expect(end).toEqual({ reason: 'cancelled', message: 'cancelled after 2 of 12 points; the points done are kept' })
     expect(seen).toBe(4)
+  })
+
+  it('a runner keeps to its own share of the order, then takes the later half of the largest share left', async () => {
+    const service = createSweepService()
+    service.load(definition)
+    const fast: number[] = []
+    const slow: number[] = []
+    let release: (() => void) | null = null
+    const quick: PointRunnerPort = { load: () => null, run: (i) => new Promise((resolve) => { fast.push(i); setTimeout(() => resolve(service.run(i)), 0) }) }
+    // The slow runner's first point lands only when the fast one has run out of points to take.
+    const held: PointRunnerPort = {
+      load: () => null,
+      run: (i) => new Promise((resolve) => { slow.push(i); if (slow.length === 1) release = () => resolve(service.run(i)); else resolve(service.run(i)) }),
+    }
+    const run = runPool([quick, held], { planned: 12, timeLimitMs: 60_000 }, { onPoint: () => {} })
+    for (let k = 0; k < 20; k++) await new Promise((resolve) => setTimeout(resolve, 0))
+    // Shares 0..5 and 6..11. With 7..11 left in the slow share: 10-11 taken, then 9, then 8; 7 stays (one point is not split).
+    expect(fast).toEqual([0, 1, 2, 3, 4, 5, 10, 11, 9, 8])
+    ;(release as unknown as () => void)()
+    expect(await run.finished).toEqual({ reason: 'done', message: null })
+    expect(slow).toEqual([6, 7])
   })
 
   it('stops at the time limit, counting running time only', async () => {
