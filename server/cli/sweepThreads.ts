@@ -23,22 +23,32 @@ function chunks(order: readonly number[], workers: number): number[][] {
 
 const tsxLoader = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href
 
-export async function runOnThreads(definition: SweepDefinition, sweep: ResolvedSweep, workers: number): Promise<{ points: SweepPointResult[]; stopped: string | null }> {
-  const planned = plannedPoints(sweep)
-  const pool = new Piscina<SweepChunkTask, SweepPointResult[]>({
+/** A pool of sweep threads, each with the tsx loader: starting one takes about a second (the loader compiles the simulator). */
+export function startSweepThreads(workers: number): Piscina<SweepChunkTask, SweepPointResult[]> {
+  return new Piscina<SweepChunkTask, SweepPointResult[]>({
     filename: new URL('./sweepWorker.ts', import.meta.url).href,
-    minThreads: Math.min(workers, planned),
-    maxThreads: Math.min(workers, planned),
+    minThreads: workers,
+    maxThreads: workers,
     execArgv: ['--import', tsxLoader],
   })
+}
+
+/** Runs a sweep on a started pool of `workers` threads: its points in chunks, all queued at once, so that a free thread takes the next. */
+export async function runOnPool(pool: Piscina<SweepChunkTask, SweepPointResult[]>, workers: number, definition: SweepDefinition, sweep: ResolvedSweep): Promise<{ points: SweepPointResult[]; stopped: string | null }> {
+  const planned = plannedPoints(sweep)
   const deadline = Date.now() + sweep.limits.timeLimitMs
+  const parts = await Promise.all(chunks(programOrder(sweep, planned), workers).map((indexes) => pool.run({ definition, indexes, deadline })))
+  const points = parts.flat().sort((a, b) => a.index - b.index)
+  const stopped = points.length < planned ? timeLimitMessage(sweep, points.length) : pointsLimitMessage(sweep)
+  return { points, stopped }
+}
+
+export async function runOnThreads(definition: SweepDefinition, sweep: ResolvedSweep, workers: number): Promise<{ points: SweepPointResult[]; stopped: string | null }> {
+  const count = Math.min(workers, plannedPoints(sweep))
+  const pool = startSweepThreads(count)
   try {
-    const parts = await Promise.all(chunks(programOrder(sweep, planned), workers).map((indexes) => pool.run({ definition, indexes, deadline })))
-    const points = parts.flat().sort((a, b) => a.index - b.index)
-    const stopped = points.length < planned ? timeLimitMessage(sweep, points.length) : pointsLimitMessage(sweep)
-    return { points, stopped }
+    return await runOnPool(pool, count, definition, sweep)
   } finally {
     await pool.destroy()
   }
 }
-
