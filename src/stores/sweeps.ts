@@ -28,7 +28,10 @@ interface PoolWorkers {
 
 const browserWorkers = (count: number): PoolWorkers => {
   const workers = Array.from({ length: count }, (_, i) => new Worker(new URL('../workers/sweep.worker.ts', import.meta.url), { type: 'module', name: `chimeline-sweep-${i}` }))
-  return { runners: workers.map((w) => Comlink.wrap<SweepService>(w)), close: () => workers.forEach((w) => w.terminate()) }
+  const runners = workers.map((w) => Comlink.wrap<SweepService>(w))
+  // Each Worker compiles the simulator on a small sweep of its own while the page waits for the user.
+  for (const r of runners) void r.warm()
+  return { runners, close: () => workers.forEach((w) => w.terminate()) }
 }
 
 let makeWorkers: (count: number) => PoolWorkers = browserWorkers

@@ -31,6 +31,10 @@ describe('sweep Worker pool', () => {
     expect(got.sort((a, b) => a.index - b.index)).toEqual(runSweep(r.sweep).points)
   })
 
+  it("a Worker's warm-up sweep resolves and runs (it would otherwise fail silently in the page)", () => {
+    expect(() => createSweepService().warm()).not.toThrow()
+  })
+
   it('answers a definition with bad values by its issues', async () => {
     const bad = sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'lanes', spec: '0,1' }] })
     expect(await loadPool([asyncRunner()], bad)).toEqual([{ field: 'parameters.0.spec', message: 'lanes=0: 0 is outside the range 1..64' }])
