@@ -6,7 +6,7 @@
  * Each runs on one thread in this process (the yardstick: lane-cycles per
  * second of the single-thread engine, measured in the same run), then on 1
  * and 2 worker threads as the CLI runs it. The process and the threads are
- * warmed (each runs four points of the grid's program, warmUpOf) before the
+ * warmed (each runs sixteen points of the grid's program, warmUpOf) before the
  * clock starts, as the server's long-lived workers are; the threads' start-up
  * is printed apart. Parallel
  * efficiency = lane-cycles per second per worker / the single-thread rate. Figures vary with the load
@@ -18,7 +18,8 @@ import { isDeepStrictEqual } from 'node:util'
 import { defaultMachine } from '../../shared/schemas/machine'
 import { sweepDefinitionSchema, type SweepDefinition, type SweepPointResult } from '../../shared/schemas/sweep'
 import { resolveSweep, type ResolvedSweep } from '../../shared/sweep/resolve'
-import { runSweep } from '../../shared/sweep/runSweep'
+import { plannedPoints, runSweep } from '../../shared/sweep/runSweep'
+import { programOrder } from '../../shared/sweep/order'
 import { runOnPool, startSweepThreads } from '../../server/cli/sweepThreads'
 import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
 import { longStream } from './programs'
@@ -33,13 +34,15 @@ const GRIDS: { name: string; definition: SweepDefinition }[] = [
 ]
 
 /**
- * Points of a grid's own program at other vector lengths, run before the
+ * Sixteen points of a grid's own program (AVL = 7..256:16), run before the
  * clock starts, in this process and on each thread alike: the tsx loader
  * compiles the simulator and V8 optimises the code paths the grid takes. A
  * thread keeps only the programs of the definition it ran last, so the timed
  * grid prepares all of its own.
  */
-const warmUpOf = (d: SweepDefinition): SweepDefinition => sweepDefinitionSchema.parse({ ...d, parameters: [{ path: 'AVL', spec: '12,36,60,84' }] })
+const warmUpOf = (d: SweepDefinition): SweepDefinition => sweepDefinitionSchema.parse({ ...d, parameters: [{ path: 'AVL', spec: WARM_UP_AVL }] })
+const WARM_UP_AVL = '7..256:16'
+const WARM_UP_POINTS = 16
 
 const laneCycles = (points: SweepPointResult[]) => points.reduce((n, p) => n + (p.figures?.cycles ?? 0) * defaultMachine.lanes, 0)
 const fmt = (x: number, d = 2) => x.toFixed(d)
@@ -49,6 +52,23 @@ function resolve(d: SweepDefinition): ResolvedSweep {
   if (!r.ok) throw new Error(r.issues.map((i) => i.message).join('; '))
   return r.sweep
 }
+
+/**
+ * What two threads of this work get from the machine: each of the two runs the
+ * whole grid at once (a definition with another point limit, so that neither
+ * finds the programs the split run prepared), against one thread's time for
+ * the grid alone. Their ratio bounds the two-thread efficiency whatever the
+ * split: shared caches, memory and the host's cores, not the sweep's code.
+ */
+async function ceiling(pool: ReturnType<typeof startSweepThreads>, definition: SweepDefinition, oneThreadS: number): Promise<string> {
+  const copy = sweepDefinitionSchema.parse({ ...definition, limits: { ...definition.limits, maxPoints: (definition.limits?.maxPoints ?? 10_000) + 1 } })
+  const indexes = programOrder(resolve(copy), plannedPoints(resolve(copy)))
+  const t0 = performance.now()
+  await Promise.all([0, 1].map(() => pool.run({ definition: copy, indexes, deadline: Date.now() + 600_000 })))
+  const both = (performance.now() - t0) / 1000
+  return `two whole copies at once ${fmt(both)} s against ${fmt(oneThreadS)} s for one: two threads get ${fmt((2 * oneThreadS) / both)}x one thread's rate, an efficiency ceiling of ${fmt(oneThreadS / both)}`
+}
+const ceilings: string[] = []
 
 const loadBefore = loadavg()[0] ?? 0
 console.log('| sweep | runner | start-up s | wall s | first point ms | points/s | lane-cycles/s per worker | efficiency |')
@@ -65,20 +85,24 @@ for (const g of GRIDS) {
   if (failed.length) throw new Error(`${g.name}: ${failed.length} points failed, e.g. ${failed[0]?.error?.message}`)
   const rate = laneCycles(single.points) / singleS
   console.log(`| ${g.name} | 1 thread in process | | ${fmt(singleS)} | ${fmt(first ?? 0, 0)} | ${fmt(single.points.length / singleS, 1)} | ${fmt(rate / 1e6)} M | 1 |`)
+  let oneThreadS = 0
   for (const workers of [1, 2]) {
     const t0 = performance.now()
     const pool = startSweepThreads(workers)
     try {
-      await Promise.all(Array.from({ length: workers }, () => pool.run({ definition: warmUp, indexes: [0, 1, 2, 3], deadline: Date.now() + 600_000 })))
+      await Promise.all(Array.from({ length: workers }, () => pool.run({ definition: warmUp, indexes: Array.from({ length: WARM_UP_POINTS }, (_, i) => i), deadline: Date.now() + 600_000 })))
       const t1 = performance.now()
       const threaded = await runOnPool(pool, workers, g.definition, sweep)
       const s = (performance.now() - t1) / 1000
       if (!isDeepStrictEqual(threaded.points, single.points)) throw new Error(`${g.name}: the ${workers}-thread figures differ from the single thread's`)
       const perWorker = laneCycles(threaded.points) / s / workers
       console.log(`| ${g.name} | ${workers} worker thread${workers > 1 ? 's' : ''} | ${fmt((t1 - t0) / 1000)} | ${fmt(s)} | | ${fmt(threaded.points.length / s, 1)} | ${fmt(perWorker / 1e6)} M | ${fmt(perWorker / rate)} |`)
+      if (workers === 1) oneThreadS = s
+      else ceilings.push(`${g.name}: ${await ceiling(pool, g.definition, oneThreadS)}`)
     } finally {
       await pool.destroy()
     }
   }
 }
-console.log(`\nload average (1 min): ${fmt(loadBefore)} before, ${fmt(loadavg()[0] ?? 0)} after; start-up: starting the threads (tsx loader) and their four warm-up points, before the clock`)
+console.log(`\n${ceilings.join('\n')}`)
+console.log(`\nload average (1 min): ${fmt(loadBefore)} before, ${fmt(loadavg()[0] ?? 0)} after; start-up: starting the threads (tsx loader) and their sixteen warm-up points, before the clock`)

@@ -15,7 +15,7 @@ import type { SweepChunkTask } from './sweepWorker'
 /** Point indexes in chunks, in program order (shared/sweep/order.ts), so that a thread prepares each program of its chunk once. */
 function chunks(order: readonly number[], workers: number): number[][] {
   const count = order.length
-  const size = Math.max(1, Math.min(32, Math.ceil(count / (workers * 8))))
+  const size = Math.max(1, Math.min(32, Math.ceil(count / (workers * 32))))
   const out: number[][] = []
   for (let start = 0; start < count; start += size) out.push(order.slice(start, start + size))
   return out
