@@ -29,20 +29,18 @@ export async function startBoss(databaseUrl: string): Promise<PgBoss> {
 }
 
 export interface SweepQueue {
-  enqueue(sweepId: string, planned: number): Promise<void>
+  /** Queues the points in chunks of SWEEP_CHUNK_POINTS taken along `order` (shared/sweep/order.ts: one program's points together, so that a worker prepares it once). */
+  enqueue(sweepId: string, order: readonly number[]): Promise<void>
   close(): Promise<void>
 }
 
 export function createSweepQueue(databaseUrl: string): SweepQueue {
   let boss: Promise<PgBoss> | null = null
   return {
-    async enqueue(sweepId, planned) {
+    async enqueue(sweepId, order) {
       const b = await (boss ??= startBoss(databaseUrl))
       const jobs: { name: string; data: SweepChunkJob }[] = []
-      for (let start = 0; start < planned; start += SWEEP_CHUNK_POINTS) {
-        const indexes = Array.from({ length: Math.min(SWEEP_CHUNK_POINTS, planned - start) }, (_, k) => start + k)
-        jobs.push({ name: SWEEP_QUEUE, data: { sweepId, indexes } })
-      }
+      for (let start = 0; start < order.length; start += SWEEP_CHUNK_POINTS) jobs.push({ name: SWEEP_QUEUE, data: { sweepId, indexes: order.slice(start, start + SWEEP_CHUNK_POINTS) } })
       await b.insert(jobs)
     },
     async close() {

@@ -14,6 +14,7 @@ import {
   type SweepSummary,
 } from '../../shared/schemas/sweep'
 import { pointValues, resolveSweep } from '../../shared/sweep/resolve'
+import { programOrder } from '../../shared/sweep/order'
 import { plannedPoints } from '../../shared/sweep/runSweep'
 import type { AppContext } from '../context'
 import { ApiError, errors } from '../http/errors'
@@ -99,7 +100,7 @@ export async function createSweep(ctx: AppContext, user: User, workspaceId: stri
     throw new ApiError(429, 'rate_limited', `This sweep's ${planned} points would take the workspace past its ${SWEEP_SERVER_POINTS_PER_DAY} server points a day (${today} used in the last 24 hours)`, undefined, 3600)
   }
   const s = await Sweep.create({ workspaceId, scenarioId: body.scenarioId, versionId, title: body.title, definition: body.definition, runner: 'server', status: 'queued', planned, message: null, createdById: user.id })
-  await ctx.sweeps.enqueue(s.id, planned)
+  await ctx.sweeps.enqueue(s.id, programOrder(resolved.sweep, planned))
   return summary(s, 0, await versionNumbers([versionId]))
 }
 

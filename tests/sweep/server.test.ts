@@ -7,6 +7,7 @@
  * stored once.
  */
 import request from 'supertest'
+import { QueryTypes } from 'sequelize'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { sharedScenarioResponseSchema } from '../../shared/schemas/share-link'
 import { sweepDefinitionSchema, type SweepPointResult } from '../../shared/schemas/sweep'
@@ -52,6 +53,12 @@ describe('server sweeps', () => {
     expect(created.status).toBe(201)
     expect(created.body.sweep).toMatchObject({ status: 'queued', planned: 40, done: 0, runner: 'server' })
     const id = created.body.sweep.id as string
+    // Chunks follow program order: with issue swept slowest, index order would put each AVL's two points in different chunks.
+    const jobs = await runtime.ctx.sequelize.query<{ data: { indexes: number[] } }>("SELECT data FROM pgboss.job WHERE name = 'sweep-chunks' AND data->>'sweepId' = :id", { replacements: { id }, type: QueryTypes.SELECT })
+    const chunkOfAvl = new Map<number, Set<number>>()
+    jobs.forEach((j, k) => j.data.indexes.forEach((i) => chunkOfAvl.set(i % 20, (chunkOfAvl.get(i % 20) ?? new Set()).add(k))))
+    expect(jobs.flatMap((j) => j.data.indexes).sort((a, b) => a - b)).toEqual(Array.from({ length: 40 }, (_, i) => i))
+    expect([...chunkOfAvl.values()].every((chunks) => chunks.size === 1)).toBe(true)
     for (let i = 0; i < 2; i++) workers.push(await startSweepWorker({ databaseUrl: runtime.ctx.config.databaseUrl, sequelize: runtime.ctx.sequelize, logger: runtime.ctx.logger }))
     let sweep: { status: string; points: SweepPointResult[] } = { status: 'queued', points: [] }
     for (let i = 0; i < 240 && sweep.status !== 'done'; i++) {

@@ -1,52 +1,65 @@
 /**
  * Vector floating point for SEW 32 (binary32) and SEW 64 (binary64): RISC-V V
- * 1.0 section 13, round to nearest even, canonical NaN results. When the
+ * 1.0 section 13, canonical NaN results. Add, subtract, multiply, divide, the
+ * fused multiply-adds and square root round in the dynamic rounding mode
+ * (frm, V 1.0 section 13.1; a reserved frm is an illegal instruction), on
+ * fp.ts's exact path unless it is round to nearest even. When the
  * program can read fflags (ArchState.readsFpFlags), the element-wise
  * arithmetic, FMA, square root, compares, min/max and single-width
  * conversions accrue IEEE 754 exception flags as the scalar instructions do
  * (V 1.0 section 13.1), through fp.ts's exact path.
  */
 import type { Instruction } from '../isa/types'
-import { arith, BINARY32, BINARY64, floatToInt, type FloatFormat, fusedMultiplyAdd as fma, intToFloat, maximumNumber, minimumNumber, NV, RNE, signalingNaN, takeFlags } from './fp'
+import { arith, BINARY32, BINARY64, floatToInt, type FloatFormat, fusedMultiplyAdd as fma, intToFloat, maximumNumber, minimumNumber, NV, RNE, type RoundingMode, signalingNaN, takeFlags } from './fp'
+import { ExecFault } from './machine'
 import type { Handler } from './handler'
 import { checkMaskOverlap, operand, requireFpSew } from './handler'
 import { checkGroup, type ArchState, regGroup } from './machine'
 import { copyOrMerge, writeMaskBits } from './vint'
 
 type Form = 'vv' | 'vf'
-/** a = vs2[i], b = vs1[i] or f[rs1], d = vd[i]; returns the result rounded to fmt. */
-type FpFn = (a: number, b: number, d: number, fmt: FloatFormat) => number
+/** a = vs2[i], b = vs1[i] or f[rs1], d = vd[i]; returns the result rounded to fmt in `mode`. */
+type FpFn = (a: number, b: number, d: number, fmt: FloatFormat, mode: RoundingMode) => number
 
 interface FpDef {
+  /** The result in round to nearest even (fast), or in `mode` where it takes one. */
   fn: FpFn
-  /** The same result through fp.ts's exact path, which raises the exception flags (when fn's fast path does not). */
+  /** The result in `mode` through fp.ts's exact path, which raises the exception flags (when fn's fast path does not). */
   exact?: FpFn
   forms: Form[]
   readsDest?: boolean
+  /** vfmin and vfmax do not round. */
+  exactResult?: boolean
+}
+
+/** The dynamic rounding mode of a vector FP instruction that rounds (V 1.0 section 13.1): frm, where 5 to 7 are reserved. */
+export function vectorRoundingMode(m: ArchState, ins: Instruction): RoundingMode {
+  if (m.frm > 4) throw new ExecFault('rounding-mode', `${ins.op}: frm = ${m.frm} is a reserved rounding mode; set rne, rtz, rdn, rup or rmm`)
+  return m.frm as RoundingMode
 }
 
 const round = (fmt: FloatFormat, x: number): number => (fmt === BINARY32 ? Math.fround(x) : x)
 
 const fmaForms: Form[] = ['vv', 'vf']
 const FP_OPS: Record<string, FpDef> = {
-  vfadd: { fn: (a, b, _d, f) => round(f, a + b), exact: (a, b, _d, f) => arith('add', a, b, f, RNE, true), forms: ['vv', 'vf'] },
-  vfsub: { fn: (a, b, _d, f) => round(f, a - b), exact: (a, b, _d, f) => arith('sub', a, b, f, RNE, true), forms: ['vv', 'vf'] },
-  vfrsub: { fn: (a, b, _d, f) => round(f, b - a), exact: (a, b, _d, f) => arith('sub', b, a, f, RNE, true), forms: ['vf'] },
-  vfmul: { fn: (a, b, _d, f) => round(f, a * b), exact: (a, b, _d, f) => arith('mul', a, b, f, RNE, true), forms: ['vv', 'vf'] },
-  vfdiv: { fn: (a, b, _d, f) => round(f, a / b), exact: (a, b, _d, f) => arith('div', a, b, f, RNE, true), forms: ['vv', 'vf'] },
-  vfrdiv: { fn: (a, b, _d, f) => round(f, b / a), exact: (a, b, _d, f) => arith('div', b, a, f, RNE, true), forms: ['vf'] },
-  vfmin: { fn: (a, b) => minimumNumber(a, b), forms: ['vv', 'vf'] },
-  vfmax: { fn: (a, b) => maximumNumber(a, b), forms: ['vv', 'vf'] },
+  vfadd: { fn: (a, b, _d, f) => round(f, a + b), exact: (a, b, _d, f, r) => arith('add', a, b, f, r, true), forms: ['vv', 'vf'] },
+  vfsub: { fn: (a, b, _d, f) => round(f, a - b), exact: (a, b, _d, f, r) => arith('sub', a, b, f, r, true), forms: ['vv', 'vf'] },
+  vfrsub: { fn: (a, b, _d, f) => round(f, b - a), exact: (a, b, _d, f, r) => arith('sub', b, a, f, r, true), forms: ['vf'] },
+  vfmul: { fn: (a, b, _d, f) => round(f, a * b), exact: (a, b, _d, f, r) => arith('mul', a, b, f, r, true), forms: ['vv', 'vf'] },
+  vfdiv: { fn: (a, b, _d, f) => round(f, a / b), exact: (a, b, _d, f, r) => arith('div', a, b, f, r, true), forms: ['vv', 'vf'] },
+  vfrdiv: { fn: (a, b, _d, f) => round(f, b / a), exact: (a, b, _d, f, r) => arith('div', b, a, f, r, true), forms: ['vf'] },
+  vfmin: { fn: (a, b) => minimumNumber(a, b), forms: ['vv', 'vf'], exactResult: true },
+  vfmax: { fn: (a, b) => maximumNumber(a, b), forms: ['vv', 'vf'], exactResult: true },
   // V 1.0 section 13.6; the negations apply to the product and the addend
   // before the single rounding, as -(vs1 x vs2) - vd is defined.
-  vfmacc: { fn: (a, b, d, f) => fma(b, a, d, f), forms: fmaForms, readsDest: true },
-  vfnmacc: { fn: (a, b, d, f) => fma(-b, a, -d, f), forms: fmaForms, readsDest: true },
-  vfmsac: { fn: (a, b, d, f) => fma(b, a, -d, f), forms: fmaForms, readsDest: true },
-  vfnmsac: { fn: (a, b, d, f) => fma(-b, a, d, f), forms: fmaForms, readsDest: true },
-  vfmadd: { fn: (a, b, d, f) => fma(b, d, a, f), forms: fmaForms, readsDest: true },
-  vfnmadd: { fn: (a, b, d, f) => fma(-b, d, -a, f), forms: fmaForms, readsDest: true },
-  vfmsub: { fn: (a, b, d, f) => fma(b, d, -a, f), forms: fmaForms, readsDest: true },
-  vfnmsub: { fn: (a, b, d, f) => fma(-b, d, a, f), forms: fmaForms, readsDest: true },
+  vfmacc: { fn: (a, b, d, f, r) => fma(b, a, d, f, r), forms: fmaForms, readsDest: true },
+  vfnmacc: { fn: (a, b, d, f, r) => fma(-b, a, -d, f, r), forms: fmaForms, readsDest: true },
+  vfmsac: { fn: (a, b, d, f, r) => fma(b, a, -d, f, r), forms: fmaForms, readsDest: true },
+  vfnmsac: { fn: (a, b, d, f, r) => fma(-b, a, d, f, r), forms: fmaForms, readsDest: true },
+  vfmadd: { fn: (a, b, d, f, r) => fma(b, d, a, f, r), forms: fmaForms, readsDest: true },
+  vfnmadd: { fn: (a, b, d, f, r) => fma(-b, d, -a, f, r), forms: fmaForms, readsDest: true },
+  vfmsub: { fn: (a, b, d, f, r) => fma(b, d, -a, f, r), forms: fmaForms, readsDest: true },
+  vfnmsub: { fn: (a, b, d, f, r) => fma(-b, d, a, f, r), forms: fmaForms, readsDest: true },
 }
 
 /** The f[rs1] operand at SEW (binary32 values must be NaN-boxed). */
@@ -81,13 +94,14 @@ function fpOp(def: FpDef, form: Form): Handler {
     const s2 = m.base(vs2, sew)
     const s1 = m.base(vs1, sew)
     const flags = m.readsFpFlags
-    const fn = (flags && def.exact) || def.fn
+    const mode = def.exactResult ? RNE : vectorRoundingMode(m, ins)
+    const fn = ((flags || mode !== RNE) && def.exact) || def.fn
     if (flags) takeFlags()
     const kSignaling = flags && form === 'vf' && signalingNaN(fScalarBits(m, ins, sew), sew)
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(vm, i)) continue
       if (flags && (kSignaling || signalingAt(m, s2 + i, sew) || (form === 'vv' && signalingAt(m, s1 + i, sew)) || (def.readsDest && signalingAt(m, d + i, sew)))) m.fflags |= NV
-      const r = fn(v[s2 + i]!, form === 'vv' ? v[s1 + i]! : k, def.readsDest ? v[d + i]! : 0, fmt)
+      const r = fn(v[s2 + i]!, form === 'vv' ? v[s1 + i]! : k, def.readsDest ? v[d + i]! : 0, fmt, mode)
       if (sew === 64) m.storeF64(d + i, r)
       else m.storeF32(d + i, r)
     }
@@ -118,12 +132,18 @@ function unaryOp(body: (m: ArchState, sew: 32 | 64, d: number, s2: number, i: nu
   }
 }
 
-const vfsqrt = unaryOp((m, sew, d, s) => {
-  if (!m.readsFpFlags) return sew === 64 ? m.storeF64(d, Math.sqrt(m.f64[s]!)) : m.storeF32(d, Math.fround(Math.sqrt(m.f32[s]!)))
-  if (signalingAt(m, s, sew)) m.fflags |= NV
-  const r = arith('sqrt', sew === 64 ? m.f64[s]! : m.f32[s]!, 0, sew === 64 ? BINARY64 : BINARY32, RNE, true)
+const sqrtElements = unaryOp((m, sew, d, s) => {
+  const mode = m.frm as RoundingMode
+  if (!m.readsFpFlags && mode === RNE) return sew === 64 ? m.storeF64(d, Math.sqrt(m.f64[s]!)) : m.storeF32(d, Math.fround(Math.sqrt(m.f32[s]!)))
+  if (m.readsFpFlags && signalingAt(m, s, sew)) m.fflags |= NV
+  const r = arith('sqrt', sew === 64 ? m.f64[s]! : m.f32[s]!, 0, sew === 64 ? BINARY64 : BINARY32, mode, true)
   return sew === 64 ? m.storeF64(d, r) : m.storeF32(d, r)
 })
+/** vfsqrt.v: a reserved frm is refused before any element, as for the binary operations. */
+const vfsqrt: Handler = (m, ins, rec) => {
+  vectorRoundingMode(m, ins)
+  sqrtElements(m, ins, rec)
+}
 
 /** vfcvt.{x,xu}.f.v and the rtz forms: saturating, NaN gives the largest integer. */
 function toInt(signed: boolean, truncate: boolean): Handler {

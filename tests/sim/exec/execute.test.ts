@@ -161,6 +161,21 @@ describe('results', () => {
     expect(Array.from(r.v[1]!.subarray(0, 6))).toEqual([10, 9, 10, 9, 9, 9])
   })
 
+  it('a vector FP instruction that rounds refuses a reserved frm (RISC-V V 1.0 section 13.1: illegal instruction), vfmax does not round', () => {
+    const text = (op: string) => `
+      li a0, 2
+      vsetvli t0, a0, e64, m1, ta, ma
+      li t1, 5
+      fsrm t1
+      ${op}`
+    const refused = execute(program(text('vfadd.vv v1, v2, v3')), { vlen: 128 })
+    expect(refused.ok).toBe(false)
+    if (!refused.ok) expect(refused.error).toMatchObject({ code: 'rounding-mode', line: 6 })
+    const sqrt = execute(program(text('vfsqrt.v v1, v2')), { vlen: 128 })
+    expect(sqrt.ok).toBe(false)
+    expect(execute(program(text('vfmax.vv v1, v2, v3')), { vlen: 128 }).ok).toBe(true)
+  })
+
   it('every instruction of the isa table has semantics, and nothing else does', () => {
     const table = handlerTable(() => 0, { write: () => undefined }, () => undefined)
     expect([...table.keys()].sort()).toEqual(OPS.map((o) => o.op).sort())
