@@ -5,6 +5,7 @@
  */
 import type { Instruction, Sew } from '../isa/types'
 import type { MemoryPattern } from './stream'
+import type { RoundingMode } from './fp'
 import { ExecFault, type ArchState } from './machine'
 
 export interface VectorEvent {
@@ -42,6 +43,12 @@ export function requireVtype(m: ArchState, ins: Instruction): void {
       `illegal vtype use: ${ins.op} executed while vtype is invalid (vill); set a supported SEW/LMUL with vsetvli first`,
     )
   }
+}
+
+/** The dynamic rounding mode of a vector FP instruction that rounds (V 1.0 section 13.1): frm, where 5 to 7 are reserved (an illegal instruction). */
+export function vectorRoundingMode(m: ArchState, ins: Instruction): RoundingMode {
+  if (m.frm > 4) throw new ExecFault('rounding-mode', `${ins.op}: frm = ${m.frm} is a reserved rounding mode; set rne, rtz, rdn, rup or rmm`)
+  return m.frm as RoundingMode
 }
 
 /** FP vector instructions need SEW 32 or 64 (no half precision). */

@@ -11,14 +11,9 @@
 import type { Instruction, Sew } from '../isa/types'
 import { arith, BINARY64, floatToInt, fusedMultiplyAdd, intToFloat, NV, RNE, RTZ, type RoundingMode, signalingNaN, takeFlags, toBinary32, BINARY32 } from './fp'
 import type { Handler } from './handler'
-import { checkMaskOverlap, checkWidthOverlap, operand, requireVtype } from './handler'
+import { checkMaskOverlap, checkWidthOverlap, operand, requireVtype, vectorRoundingMode } from './handler'
 import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
 import { readElem, writeElem } from './velem'
-
-function frm(m: ArchState, ins: Instruction): RoundingMode {
-  if (m.frm > 4) throw new ExecFault('rounding-mode', `${ins.op}: frm = ${m.frm} is a reserved rounding mode`)
-  return m.frm as RoundingMode
-}
 
 function readF(m: ArchState, reg: number, eew: 32 | 64, i: number): number {
   return eew === 64 ? m.f64[m.base(reg, 64) + i]! : m.f32[m.base(reg, 32) + i]!
@@ -47,13 +42,18 @@ function widths(m: ArchState, ins: Instruction, allowed: readonly Sew[]): Sew {
 
 type Form = 'vv' | 'vf' | 'wv' | 'wf'
 
+/** a = vs2[i], b = vs1[i] or f[rs1], d = vd[i]: the binary64 result rounded in `mode`. */
+type WideFn = (a: number, b: number, d: number, mode: RoundingMode) => number
+
 /**
  * vfwadd/vfwsub/vfwmul (.vv .vf .wv .wf) and vfwmacc & co: binary32 operands,
- * binary64 results; `exact` computes the same result raising its flags.
+ * binary64 results rounded in frm; `fn` is the fast result in round to
+ * nearest even, `exact` the same in any mode raising its flags.
  */
-function wideArith(fn: (a: number, b: number, d: number) => number, form: Form, readsVd: boolean, exact: (a: number, b: number, d: number) => number = fn): Handler {
+function wideArith(fn: WideFn, form: Form, readsVd: boolean, exact: WideFn = fn): Handler {
   return (m, ins, rec) => {
     widths(m, ins, [32])
+    const mode = vectorRoundingMode(m, ins)
     const lmul = m.vtype.lmul
     const wideA = form === 'wv' || form === 'wf'
     const vd = checkGroup(ins.operands.vd, 2 * lmul, 'vd', ins)
@@ -72,7 +72,7 @@ function wideArith(fn: (a: number, b: number, d: number) => number, form: Form, 
       const a = readF(m, vs2, wideA ? 64 : 32, i)
       const b = vv ? readF(m, vs1, 32, i) : k
       if (flags && (kSignaling || signalingF(m, vs2, wideA ? 64 : 32, i) || (vv && signalingF(m, vs1, 32, i)) || (readsVd && signalingF(m, vd, 64, i)))) m.fflags |= NV
-      writeF(m, vd, 64, i, (flags ? exact : fn)(a, b, readsVd ? readF(m, vd, 64, i) : 0))
+      writeF(m, vd, 64, i, (flags || mode !== RNE ? exact : fn)(a, b, readsVd ? readF(m, vd, 64, i) : 0, mode))
     }
     if (flags) m.fflags |= takeFlags()
     if (rec.on) {
@@ -100,7 +100,7 @@ function convert(from: Kind, to: Kind, dir: 'widen' | 'narrow', allowed: readonl
     const vs2 = checkGroup(ins.operands.vs2, dir === 'widen' ? lmul : 2 * lmul, 'vs2', ins)
     checkMaskOverlap(ins, vd)
     checkWidthOverlap(ins, vd, dir === 'widen' ? 2 * lmul : lmul, dstEew, vs2, dir === 'widen' ? lmul : 2 * lmul, srcEew, 'vs2')
-    const rm = mode === undefined ? frm(m, ins) : mode
+    const rm = mode === undefined ? vectorRoundingMode(m, ins) : mode
     const flags = m.readsFpFlags
     if (flags) takeFlags()
     for (let i = 0; i < m.vl; i++) {
@@ -192,16 +192,16 @@ export const fpExtHandlers: Record<string, Handler> = {
   'vfncvt.rtz.xu.f.w': convert('f', 'xu', 'narrow', [16, 32], RTZ),
 }
 for (const form of ['vv', 'vf'] as const) {
-  fpExtHandlers[`vfwadd.${form}`] = wideArith((a, b) => a + b, form, false, (a, b) => arith('add', a, b, BINARY64, RNE, true))
-  fpExtHandlers[`vfwsub.${form}`] = wideArith((a, b) => a - b, form, false, (a, b) => arith('sub', a, b, BINARY64, RNE, true))
-  // binary32 x binary32 is exact in binary64 (24 + 24 < 53 bits): one rounding, at the add.
+  fpExtHandlers[`vfwadd.${form}`] = wideArith((a, b) => a + b, form, false, (a, b, _d, r) => arith('add', a, b, BINARY64, r, true))
+  fpExtHandlers[`vfwsub.${form}`] = wideArith((a, b) => a - b, form, false, (a, b, _d, r) => arith('sub', a, b, BINARY64, r, true))
+  // binary32 x binary32 is exact in binary64 (24 + 24 < 53 bits): nothing to round, in any mode.
   fpExtHandlers[`vfwmul.${form}`] = wideArith((a, b) => a * b, form, false)
-  fpExtHandlers[`vfwmacc.${form}`] = wideArith((a, b, d) => fusedMultiplyAdd(b, a, d), form, true)
-  fpExtHandlers[`vfwnmacc.${form}`] = wideArith((a, b, d) => fusedMultiplyAdd(-b, a, -d), form, true)
-  fpExtHandlers[`vfwmsac.${form}`] = wideArith((a, b, d) => fusedMultiplyAdd(b, a, -d), form, true)
-  fpExtHandlers[`vfwnmsac.${form}`] = wideArith((a, b, d) => fusedMultiplyAdd(-b, a, d), form, true)
+  fpExtHandlers[`vfwmacc.${form}`] = wideArith((a, b, d, r) => fusedMultiplyAdd(b, a, d, BINARY64, r), form, true)
+  fpExtHandlers[`vfwnmacc.${form}`] = wideArith((a, b, d, r) => fusedMultiplyAdd(-b, a, -d, BINARY64, r), form, true)
+  fpExtHandlers[`vfwmsac.${form}`] = wideArith((a, b, d, r) => fusedMultiplyAdd(b, a, -d, BINARY64, r), form, true)
+  fpExtHandlers[`vfwnmsac.${form}`] = wideArith((a, b, d, r) => fusedMultiplyAdd(-b, a, d, BINARY64, r), form, true)
 }
 for (const form of ['wv', 'wf'] as const) {
-  fpExtHandlers[`vfwadd.${form}`] = wideArith((a, b) => a + b, form, false, (a, b) => arith('add', a, b, BINARY64, RNE, true))
-  fpExtHandlers[`vfwsub.${form}`] = wideArith((a, b) => a - b, form, false, (a, b) => arith('sub', a, b, BINARY64, RNE, true))
+  fpExtHandlers[`vfwadd.${form}`] = wideArith((a, b) => a + b, form, false, (a, b, _d, r) => arith('add', a, b, BINARY64, r, true))
+  fpExtHandlers[`vfwsub.${form}`] = wideArith((a, b) => a - b, form, false, (a, b, _d, r) => arith('sub', a, b, BINARY64, r, true))
 }

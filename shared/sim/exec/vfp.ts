@@ -11,9 +11,8 @@
  */
 import type { Instruction } from '../isa/types'
 import { arith, BINARY32, BINARY64, floatToInt, type FloatFormat, fusedMultiplyAdd as fma, intToFloat, maximumNumber, minimumNumber, NV, RNE, type RoundingMode, signalingNaN, takeFlags } from './fp'
-import { ExecFault } from './machine'
 import type { Handler } from './handler'
-import { checkMaskOverlap, operand, requireFpSew } from './handler'
+import { checkMaskOverlap, operand, requireFpSew, vectorRoundingMode } from './handler'
 import { checkGroup, type ArchState, regGroup } from './machine'
 import { copyOrMerge, writeMaskBits } from './vint'
 
@@ -30,12 +29,6 @@ interface FpDef {
   readsDest?: boolean
   /** vfmin and vfmax do not round. */
   exactResult?: boolean
-}
-
-/** The dynamic rounding mode of a vector FP instruction that rounds (V 1.0 section 13.1): frm, where 5 to 7 are reserved. */
-export function vectorRoundingMode(m: ArchState, ins: Instruction): RoundingMode {
-  if (m.frm > 4) throw new ExecFault('rounding-mode', `${ins.op}: frm = ${m.frm} is a reserved rounding mode; set rne, rtz, rdn, rup or rmm`)
-  return m.frm as RoundingMode
 }
 
 const round = (fmt: FloatFormat, x: number): number => (fmt === BINARY32 ? Math.fround(x) : x)

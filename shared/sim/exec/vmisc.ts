@@ -5,7 +5,7 @@
  */
 import { arith, BINARY64, NV, RNE, signalingNaN, takeFlags } from './fp'
 import type { Handler } from './handler'
-import { checkMaskOverlap, requireVtype } from './handler'
+import { checkMaskOverlap, requireVtype, vectorRoundingMode } from './handler'
 import { checkGroup, ExecFault, regGroup } from './machine'
 import { readElem, writeElem } from './velem'
 
@@ -65,7 +65,7 @@ function wideIntReduction(signed: boolean): Handler {
 /**
  * vfwred[u/o]sum.vs: binary32 elements added to a binary64 start value in
  * element order (as QEMU does for both; the unordered form may use any order).
- * Each addition rounds once in binary64.
+ * Each addition rounds once in binary64, in frm.
  */
 const wideFpReduction: Handler = (m, ins, rec) => {
   requireVtype(m, ins)
@@ -74,6 +74,7 @@ const wideFpReduction: Handler = (m, ins, rec) => {
   const vd = checkGroup(ins.operands.vd, 1, 'vd', ins)
   const vs2 = checkGroup(ins.operands.vs2, lmul, 'vs2', ins)
   const vs1 = checkGroup(ins.operands.vs1, 1, 'vs1', ins)
+  const mode = vectorRoundingMode(m, ins)
   if (m.vl > 0) {
     let acc = m.f64[m.base(vs1, 64)]!
     let active = 0
@@ -84,7 +85,7 @@ const wideFpReduction: Handler = (m, ins, rec) => {
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(ins.operands.vm, i)) continue
       // With flags wanted the addition goes through fp.ts's exact path, which raises them.
-      acc = flags ? arith('add', acc, m.f32[s2 + i]!, BINARY64, RNE, true) : acc + m.f32[s2 + i]!
+      acc = flags || mode !== RNE ? arith('add', acc, m.f32[s2 + i]!, BINARY64, mode, true) : acc + m.f32[s2 + i]!
       if (flags) snan ||= signalingNaN(BigInt(m.u32[s2 + i]!), 32)
       active++
     }

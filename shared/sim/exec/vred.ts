@@ -5,7 +5,7 @@
  */
 import { arith, BINARY32, BINARY64, maximumNumber, minimumNumber, NV, RNE, signalingNaN, takeFlags } from './fp'
 import type { Handler } from './handler'
-import { requireFpSew, requireVtype } from './handler'
+import { requireFpSew, requireVtype, vectorRoundingMode } from './handler'
 import { checkGroup, type ArchState, regGroup } from './machine'
 
 type NumOp = (a: number, b: number) => number
@@ -62,12 +62,14 @@ function fpReduction(kind: FpReductionKind): Handler {
     const sew = requireFpSew(m, ins)
     const lmul = m.vtype.lmul
     const { vd, vs2, vs1 } = operands(m, ins)
+    // The sums round in frm (a reserved one is refused even with vl = 0); max and min do not round.
+    const mode = kind === 'max' || kind === 'min' ? RNE : vectorRoundingMode(m, ins)
     if (m.vl > 0) {
       const v = sew === 64 ? m.f64 : m.f32
-      // With flags wanted, each addition goes through fp.ts's exact path, which raises them.
+      // With flags wanted or another mode, each addition goes through fp.ts's exact path, which raises them.
       const flags = m.readsFpFlags
       const fmt = sew === 64 ? BINARY64 : BINARY32
-      const add = flags ? (a: number, b: number) => arith('add', a, b, fmt, RNE, true)
+      const add = flags || mode !== RNE ? (a: number, b: number) => arith('add', a, b, fmt, mode, true)
         : sew === 64 ? (a: number, b: number) => a + b : (a: number, b: number) => Math.fround(a + b)
       if (flags) takeFlags()
       const combine = kind === 'max' ? maximumNumber : kind === 'min' ? minimumNumber : add
