@@ -132,35 +132,42 @@ const sqrtElements = unaryOp((m, sew, d, s) => {
   const r = arith('sqrt', sew === 64 ? m.f64[s]! : m.f32[s]!, 0, sew === 64 ? BINARY64 : BINARY32, mode, true)
   return sew === 64 ? m.storeF64(d, r) : m.storeF32(d, r)
 })
-/** vfsqrt.v: a reserved frm is refused before any element, as for the binary operations. */
-const vfsqrt: Handler = (m, ins, rec) => {
-  vectorRoundingMode(m, ins)
-  sqrtElements(m, ins, rec)
+/** A unary handler whose elements round in frm: a reserved frm is refused before any element, as for the binary operations. */
+function inFrm(elements: Handler): Handler {
+  return (m, ins, rec) => {
+    vectorRoundingMode(m, ins)
+    elements(m, ins, rec)
+  }
 }
 
-/** vfcvt.{x,xu}.f.v and the rtz forms: saturating, NaN gives the largest integer. */
+const vfsqrt = inFrm(sqrtElements)
+
+/** vfcvt.{x,xu}.f.v in frm and the rtz forms: saturating, NaN gives the largest integer. */
 function toInt(signed: boolean, truncate: boolean): Handler {
-  return unaryOp((m, sew, d, s) => {
-    if (sew === 64) m.u64[d] = BigInt.asUintN(64, floatToInt(m.f64[s]!, 64, signed, truncate))
-    else m.u32[d] = Number(BigInt.asUintN(32, floatToInt(m.f32[s]!, 32, signed, truncate)))
+  const elements = unaryOp((m, sew, d, s) => {
+    const mode = m.frm as RoundingMode
+    if (sew === 64) m.u64[d] = BigInt.asUintN(64, floatToInt(m.f64[s]!, 64, signed, truncate, mode))
+    else m.u32[d] = Number(BigInt.asUintN(32, floatToInt(m.f32[s]!, 32, signed, truncate, mode)))
   })
+  return truncate ? elements : inFrm(elements)
 }
 
 /**
- * vfcvt.f.{x,xu}.v: a 32-bit integer is exact in a double, so Math.fround rounds
- * once; Number(bigint) rounds a 64-bit integer to nearest even (ECMA-262, "the
- * Number value for x").
+ * vfcvt.f.{x,xu}.v in frm. In round to nearest even a 32-bit integer is exact
+ * in a double, so Math.fround rounds once, and Number(bigint) rounds a 64-bit
+ * integer to nearest even (ECMA-262, "the Number value for x").
  */
 function fromInt(signed: boolean): Handler {
-  return unaryOp((m, sew, d, s) => {
-    // With flags wanted, intToFloat rounds the same way and raises inexact.
-    if (m.readsFpFlags) {
-      const r = intToFloat(sew === 64 ? (signed ? m.i64[s]! : m.u64[s]!) : BigInt(signed ? m.i32[s]! : m.u32[s]!), sew === 64 ? BINARY64 : BINARY32, RNE)
+  return inFrm(unaryOp((m, sew, d, s) => {
+    const mode = m.frm as RoundingMode
+    // With flags wanted or another mode, intToFloat rounds exactly (and raises inexact).
+    if (m.readsFpFlags || mode !== RNE) {
+      const r = intToFloat(sew === 64 ? (signed ? m.i64[s]! : m.u64[s]!) : BigInt(signed ? m.i32[s]! : m.u32[s]!), sew === 64 ? BINARY64 : BINARY32, mode)
       if (sew === 64) m.f64[d] = r
       else m.f32[d] = r
     } else if (sew === 64) m.f64[d] = Number(signed ? m.i64[s]! : m.u64[s]!)
     else m.f32[d] = Math.fround(signed ? m.i32[s]! : m.u32[s]!)
-  })
+  }))
 }
 
 /** vfsgnj, vfsgnjn, vfsgnjx: sign bit only, no canonicalisation (V 1.0 section 13.12). */

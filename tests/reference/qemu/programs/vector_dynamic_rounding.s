@@ -1,7 +1,7 @@
 # Vector FP in each dynamic rounding mode (frm: RISC-V V 1.0 section 13.1, F
 # extension "Rounding modes"): vfadd, vfsub, vfmul, vfdiv, vfmacc and vfsqrt
 # at e64, vfadd, vfmul and vfmacc at e32, vfwadd and vfwmacc, and the sums
-# vfredosum, vfredusum and vfwredosum, once per mode (rne, rtz, rdn, rup,
+# vfredosum, vfredusum and vfwredosum, vfcvt.x.f.v and vfcvt.f.x.v, once per mode (rne, rtz, rdn, rup,
 # rmm), on operands whose results are inexact (0.1 + 0.2, 1/3, sqrt 2, a sum
 # past the largest finite value, a subnormal sum), so that the modes differ
 # in their last bits and in overflow (to infinity or the largest finite).
@@ -78,14 +78,24 @@ modes:
     vfredusum.vs v16, v8, v20
     vfmv.f.s fa0, v16
     fsd fa0, 8(s0)
+    addi s0, s0, 16
+    # Single-width conversions: D to integers, and integers past 2^53 to binary64.
+    vfcvt.x.f.v v16, v8
+    vse64.v v16, (s0)
+    addi s0, s0, 64
+    la a1, I
+    vle64.v v12, (a1)
+    vfcvt.f.x.v v16, v12
+    vse64.v v16, (s0)
+    addi s0, s0, 64
     vsetvli t0, a0, e32, m2, ta, ma
     la a1, DF
     vle32.v v8, (a1)
     vfwredosum.vs v16, v8, v20
     vsetvli t0, a0, e64, m1, ta, ma
     vfmv.f.s fa0, v16
-    fsd fa0, 16(s0)
-    addi s0, s0, 24
+    fsd fa0, 0(s0)
+    addi s0, s0, 8
     addi s1, s1, 1
     blt s1, s2, modes
 
@@ -110,8 +120,9 @@ BF: .float 0.2, 3.0, 3.0, 3.0, 3.0e38, 7.0, 0.3, 1.0e-7
 CF: .float 0.3, -1.0, 1.0e-30, -0.5, -3.0e38, 0.1, 1.0e-45, 1.0
 D:  .double 0.1, 0.2, 0.3, 0.3333333333333333, 1e-3, 7.0, -0.7, 1e10
 E:  .double 1.0
+I:  .dword 9007199254740993, -9007199254740993, 9007199254740995, 3, -3, 18014398509481985, 0x7fffffffffffffff, -1
 DF: .float 0.1, 0.2, 0.3, 0.33333334, 1e-3, 7.0, -0.7, 1e10
     .balign 8
 result:
-out: .zero 3160
+out: .zero 3800
 result_end:
