@@ -5,9 +5,10 @@
  * contiguous share of the order (one program's points stay together on one
  * runner, which assembles and executes that program once; taking turns point
  * by point, every runner prepared every program); a runner whose share is
- * done takes the later half of the largest share left. Pause stops handing out points (those running finish), resume goes
- * on, cancel ends the sweep keeping the points done. The time limit counts
- * running time only, not time paused.
+ * done takes the later half of the largest share left. Pause stops handing
+ * out points (those running finish), resume goes on, cancel ends the sweep
+ * keeping the points done. The time limit counts running time only, not time
+ * paused.
  */
 import type { SweepDefinition, SweepPointResult } from '@shared/schemas/sweep'
 import type { SweepDefinitionIssue } from '@shared/sweep/resolve'
