@@ -31,6 +31,21 @@ async function createLink(page: Page): Promise<string> {
 }
 
 test.describe('views on the Bench', () => {
+  test('a page change is not undone by the Bench writing its view to the URL while the next page loads', async ({ page }) => {
+    await signIn(page, DEMO.editor)
+    await page.goto('/bench')
+    await expect(chart(page)).toBeVisible({ timeout: 60_000 })
+    // The Learn page's code arrives 1.5 s late, as on a slow machine; meanwhile the view changes.
+    await page.route(/\/assets\/LearnView-[^/]*\.js$/, async (route) => {
+      await new Promise((resolve) => setTimeout(resolve, 1500))
+      await route.continue()
+    })
+    await page.getByRole('link', { name: 'Learn', exact: true }).first().click()
+    await chart(page).getByRole('button', { name: 'Zoom in' }).click()
+    await expect(page).toHaveURL(/\/learn$/, { timeout: 10_000 })
+    await expect(page.getByTestId('lesson-list')).toBeVisible()
+  })
+
   test('after a zoom the view saves, shares and reopens in whole cycles', async ({ page }) => {
     const problems = watchConsole(page)
     const run = `e2e${Date.now().toString(36)}`
