@@ -14,6 +14,7 @@ import { pointsLimitMessage, plannedPoints } from '@shared/sweep/runSweep'
 import { symbolDefinitions } from '@shared/sweep/symbols'
 import * as Comlink from 'comlink'
 import { ApiError } from '@/api'
+import { defaultParameters } from '@/lib/sweeps/defaults'
 import { useAuthStore } from '@/stores/auth'
 import { useWorkspaceStore } from '@/stores/workspace'
 import { loadPool, runPool, type PointRunnerPort, type SweepPoolRun, type SweepProgress } from '@/workers/sweepPool'
@@ -106,8 +107,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
     program.value = text
     // The Bench's machine is a reactive proxy, which structuredClone refuses; it is plain JSON.
     machine.value = JSON.parse(JSON.stringify(benchMachine)) as Record<string, unknown>
-    const avl = symbolDefinitions(text).find((d) => d.name === 'AVL')
-    parameters.value = avl ? [{ path: 'AVL', spec: '1..256' }, { path: 'issue', spec: 'serial,staggered' }] : [{ path: 'lanes', spec: '1,2,4,8,16' }]
+    parameters.value = defaultParameters(text)
   }
 
   function definition(): { ok: true; definition: SweepDefinition } | { ok: false; issues: SweepDefinitionIssue[] } {
