@@ -11,8 +11,8 @@
  */
 import { DZ, NV, NX, OF, raiseFlags, RDN, RTZ, RUP, type RoundingMode, signalingNaN, takeFlags } from './fp'
 import type { Handler } from './handler'
-import { checkMaskOverlap, requireFpSew } from './handler'
-import { checkGroup, ExecFault, type ArchState, regGroup } from './machine'
+import { checkMaskOverlap, requireFpSew, vectorRoundingMode } from './handler'
+import { checkGroup, type ArchState, regGroup } from './machine'
 import { readElem, writeElem } from './velem'
 
 const REC7 = Array.from({ length: 128 }, (_, i) => Math.min(127, Math.floor((2 / (1 + (i + 0.5) / 128) - 1) * 128 + 0.5)))
@@ -115,13 +115,13 @@ function estimate(kind: 'rec' | 'rsqrt'): Handler {
     const vd = checkGroup(ins.operands.vd, lmul, 'vd', ins)
     const vs2 = checkGroup(ins.operands.vs2, lmul, 'vs2', ins)
     checkMaskOverlap(ins, vd)
-    if (m.frm > 4) throw new ExecFault('rounding-mode', `${ins.op}: frm = ${m.frm} is a reserved rounding mode`)
+    const mode = vectorRoundingMode(m, ins)
     const f = sew === 64 ? F64 : F32
     takeFlags()
     for (let i = 0; i < m.vl; i++) {
       if (!m.active(ins.operands.vm, i)) continue
       const x = readElem(m, vs2, sew, i, false)
-      writeElem(m, vd, sew, i, kind === 'rec' ? rec7(x, f, m.frm as RoundingMode) : rsqrt7(x, f))
+      writeElem(m, vd, sew, i, kind === 'rec' ? rec7(x, f, mode) : rsqrt7(x, f))
     }
     // Subnormal results raise no underflow: the estimate loses no precision there (as QEMU).
     if (m.readsFpFlags) m.fflags |= takeFlags()

@@ -1,9 +1,10 @@
 /**
  * Vector floating point for SEW 32 (binary32) and SEW 64 (binary64): RISC-V V
  * 1.0 section 13, canonical NaN results. Add, subtract, multiply, divide, the
- * fused multiply-adds and square root round in the dynamic rounding mode
- * (frm, V 1.0 section 13.1; a reserved frm is an illegal instruction), on
- * fp.ts's exact path unless it is round to nearest even. When the
+ * fused multiply-adds, square root and the single-width conversions round in
+ * the dynamic rounding mode (frm, V 1.0 section 13.1; a reserved frm is an
+ * illegal instruction), on fp.ts's exact path unless it is round to nearest
+ * even. When the
  * program can read fflags (ArchState.readsFpFlags), the element-wise
  * arithmetic, FMA, square root, compares, min/max and single-width
  * conversions accrue IEEE 754 exception flags as the scalar instructions do
@@ -108,48 +109,41 @@ function fpOp(def: FpDef, form: Form): Handler {
   }
 }
 
-/** Element-wise unary operation on vs2, with integer or FP views chosen by the caller. */
-function unaryOp(body: (m: ArchState, sew: 32 | 64, d: number, s2: number, i: number) => void): Handler {
+/**
+ * Element-wise unary operation on vs2, with integer or FP views chosen by the
+ * caller. With `rounds`, the body gets frm (a reserved one is refused before
+ * any element, as for the binary operations); otherwise round to nearest even.
+ */
+function unaryOp(body: (m: ArchState, sew: 32 | 64, d: number, s2: number, i: number, mode: RoundingMode) => void, rounds = false): Handler {
   return (m, ins, rec) => {
     const sew = requireFpSew(m, ins)
     const lmul = m.vtype.lmul
     const vd = checkGroup(ins.operands.vd, lmul, 'vd', ins)
     const vs2 = checkGroup(ins.operands.vs2, lmul, 'vs2', ins)
     checkMaskOverlap(ins, vd)
+    const mode = rounds ? vectorRoundingMode(m, ins) : RNE
     const d = m.base(vd, sew)
     const s2 = m.base(vs2, sew)
     if (m.readsFpFlags) takeFlags()
-    for (let i = 0; i < m.vl; i++) if (m.active(ins.operands.vm, i)) body(m, sew, d + i, s2 + i, i)
+    for (let i = 0; i < m.vl; i++) if (m.active(ins.operands.vm, i)) body(m, sew, d + i, s2 + i, i, mode)
     if (m.readsFpFlags) m.fflags |= takeFlags()
     if (rec.on) rec.vector(ins, { dstRegs: regGroup(vd, lmul), srcRegs: [regGroup(vs2, lmul)] })
   }
 }
 
-const sqrtElements = unaryOp((m, sew, d, s) => {
-  const mode = m.frm as RoundingMode
+const vfsqrt = unaryOp((m, sew, d, s, _i, mode) => {
   if (!m.readsFpFlags && mode === RNE) return sew === 64 ? m.storeF64(d, Math.sqrt(m.f64[s]!)) : m.storeF32(d, Math.fround(Math.sqrt(m.f32[s]!)))
   if (m.readsFpFlags && signalingAt(m, s, sew)) m.fflags |= NV
   const r = arith('sqrt', sew === 64 ? m.f64[s]! : m.f32[s]!, 0, sew === 64 ? BINARY64 : BINARY32, mode, true)
   return sew === 64 ? m.storeF64(d, r) : m.storeF32(d, r)
-})
-/** A unary handler whose elements round in frm: a reserved frm is refused before any element, as for the binary operations. */
-function inFrm(elements: Handler): Handler {
-  return (m, ins, rec) => {
-    vectorRoundingMode(m, ins)
-    elements(m, ins, rec)
-  }
-}
-
-const vfsqrt = inFrm(sqrtElements)
+}, true)
 
 /** vfcvt.{x,xu}.f.v in frm and the rtz forms: saturating, NaN gives the largest integer. */
 function toInt(signed: boolean, truncate: boolean): Handler {
-  const elements = unaryOp((m, sew, d, s) => {
-    const mode = m.frm as RoundingMode
+  return unaryOp((m, sew, d, s, _i, mode) => {
     if (sew === 64) m.u64[d] = BigInt.asUintN(64, floatToInt(m.f64[s]!, 64, signed, truncate, mode))
     else m.u32[d] = Number(BigInt.asUintN(32, floatToInt(m.f32[s]!, 32, signed, truncate, mode)))
-  })
-  return truncate ? elements : inFrm(elements)
+  }, !truncate)
 }
 
 /**
@@ -158,8 +152,7 @@ function toInt(signed: boolean, truncate: boolean): Handler {
  * integer to nearest even (ECMA-262, "the Number value for x").
  */
 function fromInt(signed: boolean): Handler {
-  return inFrm(unaryOp((m, sew, d, s) => {
-    const mode = m.frm as RoundingMode
+  return unaryOp((m, sew, d, s, _i, mode) => {
     // With flags wanted or another mode, intToFloat rounds exactly (and raises inexact).
     if (m.readsFpFlags || mode !== RNE) {
       const r = intToFloat(sew === 64 ? (signed ? m.i64[s]! : m.u64[s]!) : BigInt(signed ? m.i32[s]! : m.u32[s]!), sew === 64 ? BINARY64 : BINARY32, mode)
@@ -167,7 +160,7 @@ function fromInt(signed: boolean): Handler {
       else m.f32[d] = r
     } else if (sew === 64) m.f64[d] = Number(signed ? m.i64[s]! : m.u64[s]!)
     else m.f32[d] = Math.fround(signed ? m.i32[s]! : m.u32[s]!)
-  }))
+  }, true)
 }
 
 /** vfsgnj, vfsgnjn, vfsgnjx: sign bit only, no canonicalisation (V 1.0 section 13.12). */
