@@ -16,7 +16,7 @@ test('a vl curve from the Bench: Sweep this, run on the Worker pool, plot, table
   const problems = watchConsole(page)
   await signIn(page, DEMO.editor)
   await page.goto('/bench')
-  // The Bench writes its view to the URL 250 ms after a run; a navigation started before that is cancelled by it.
+  // Wait for the Bench's first run (it writes cycle=0 into the URL once settled), so Sweep this carries a finished scenario.
   await expect(page).toHaveURL(/cycle=0/, { timeout: 30_000 })
   await page.getByTestId('sweep-this').click()
   await expect(page).toHaveURL(/\/sweeps$/)

@@ -19,8 +19,8 @@ export async function fillSignIn(page: Page, email: string, password: string) {
 /**
  * Opens /signin, signs in and waits for the signed-in shell and for the
  * redirect away from /signin: the user menu shows as soon as the session is
- * set, before the router has loaded the next page, and a click in between is
- * overridden by that redirect (seen in CI on the Learn link).
+ * set, before the router has loaded the next page, so a test that clicks at
+ * once would race that redirect.
  */
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
   await page.goto('/signin')
