@@ -1,12 +1,14 @@
 /**
  * What a sweep Worker exposes through Comlink, kept apart from the Worker
  * entry so that tests can call it directly: load a definition once, then run
- * its points one index at a time (the pool feeds them). The Worker keeps the
+ * its points a batch of indexes at a time (the pool feeds them), timing each
+ * batch so that the pool can size the next. The Worker keeps the
  * programs it assembled for the sweep, so a swept machine field assembles once.
  */
-import { sweepDefinitionSchema, type SweepDefinition, type SweepPointResult } from '@shared/schemas/sweep'
+import { sweepDefinitionSchema, type SweepDefinition } from '@shared/schemas/sweep'
 import { resolveSweep, type SweepDefinitionIssue } from '@shared/sweep/resolve'
 import { createPointRunner } from '@shared/sweep/runPoint'
+import type { PointBatch } from './sweepPool'
 
 /** A two-point sweep a Worker runs once when it starts, so that the first point of a real sweep finds the simulator's code compiled. */
 const WARM_UP: SweepDefinition = sweepDefinitionSchema.parse({
@@ -38,9 +40,12 @@ export function createSweepService() {
       runner = r.ok ? createPointRunner(r.sweep) : null
       return r.ok ? null : r.issues
     },
-    run(index: number): SweepPointResult {
-      if (!runner) throw new Error('no sweep loaded')
-      return runner.run(index)
+    runBatch(indexes: number[]): PointBatch {
+      const loaded = runner
+      if (!loaded) throw new Error('no sweep loaded')
+      const t0 = performance.now()
+      const points = indexes.map((i) => loaded.run(i))
+      return { points, ms: performance.now() - t0 }
     },
   }
 }
