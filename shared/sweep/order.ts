@@ -14,9 +14,13 @@
 import { pointValues, type ResolvedSweep } from './resolve'
 
 export function programOrder(sweep: ResolvedSweep, planned: number): number[] {
+  return programGroups(sweep, planned).flat()
+}
+
+/** The points of each program, in the order above (one group when no parameter changes the program). */
+export function programGroups(sweep: ResolvedSweep, planned: number): number[][] {
   const keyed = sweep.parameters.map((p, k) => (p.kind === 'symbol' || p.path === 'vlen' ? k : -1)).filter((k) => k >= 0)
-  // Nothing changes the program: index order is already program order.
-  if (keyed.length === 0) return Array.from({ length: planned }, (_, i) => i)
+  if (keyed.length === 0) return planned > 0 ? [Array.from({ length: planned }, (_, i) => i)] : []
   const groups = new Map<string, number[]>()
   for (let i = 0; i < planned; i++) {
     const values = pointValues(sweep, i)
@@ -25,5 +29,5 @@ export function programOrder(sweep: ResolvedSweep, planned: number): number[] {
     if (g) g.push(i)
     else groups.set(key, [i])
   }
-  return [...groups.values()].flat()
+  return [...groups.values()]
 }

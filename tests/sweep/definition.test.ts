@@ -4,7 +4,8 @@ import { parseSpec } from '../../shared/sweep/spec'
 import { pointValues, resolveSweep } from '../../shared/sweep/resolve'
 import { symbolDefinitions, withSymbols } from '../../shared/sweep/symbols'
 import { sweepCsvHeader } from '../../shared/sweep/csv'
-import { programOrder } from '../../shared/sweep/order'
+import { programGroups, programOrder } from '../../shared/sweep/order'
+import { chunks } from '../../server/cli/sweepThreads'
 import { runSweep } from '../../shared/sweep/runSweep'
 import { runPipeline } from '../../shared/sim/run'
 import { figuresOf } from '../../shared/sweep/figures'
@@ -141,5 +142,22 @@ describe('program order (shared/sweep/order.ts)', () => {
     const m = resolveSweep(sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'issue', spec: 'serial,staggered' }, { path: 'lanes', spec: '2,4' }] }))
     if (!m.ok) throw new Error('unresolved')
     expect(programOrder(m.sweep, 4)).toEqual([0, 1, 2, 3])
+    expect(programGroups(m.sweep, 4)).toEqual([[0, 1, 2, 3]])
+  })
+
+  it("the CLI's thread chunks keep each program whole, and cut only a program of more than 32 points", () => {
+    // The heavy grid's shape: 32 programs (AVL) of 3 points (issue); 2 threads want chunks of ceil(96 / 64) = 2 points.
+    const groups = Array.from({ length: 32 }, (_, a) => [a, a + 32, a + 64])
+    const cut = chunks(groups, 2)
+    expect(cut).toEqual(groups)
+    // 130 programs of one point on 2 threads: ceil(130 / 64) = 3 a chunk, the last one short.
+    const single = chunks(Array.from({ length: 130 }, (_, i) => [i]), 2)
+    expect(single.slice(0, 2)).toEqual([[0, 1, 2], [3, 4, 5]])
+    expect(single).toHaveLength(44)
+    expect(single.at(-1)).toEqual([129])
+    // One program of 100 points (a machine field swept alone): chunks of ceil(100 / 64) = 2.
+    const one = chunks([Array.from({ length: 100 }, (_, i) => i)], 2)
+    expect(one).toHaveLength(50)
+    expect(one.flat()).toEqual(Array.from({ length: 100 }, (_, i) => i))
   })
 })
