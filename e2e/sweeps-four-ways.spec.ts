@@ -1,8 +1,8 @@
 /**
  * Issue 16: the same point gives the same figures in the browser's Worker
  * pool, on the server's sweep workers, from the CLI and in a single Bench
- * run. One grid (AVL 1..40 x issue serial, staggered: 80 points, five chunks
- * of 16) runs in all four: the pool in Chromium (saved, so its points are
+ * run. One grid (AVL 1..40 x issue serial, staggered: 80 points, chunks of
+ * three programs) runs in all four: the pool in Chromium (saved, so its points are
  * read back as the page computed them), two `npm run worker` processes on the
  * test database (each must take chunks: a large grid on two worker
  * processes), the `sweep` command line, and points opened on the Bench.

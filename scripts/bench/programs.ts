@@ -13,6 +13,11 @@ export function longStream(): string {
   return readFileSync(longStreamPath, 'utf8')
 }
 
+/** Issue 16's heavy grid: the long stream (its vector length is the symbol AVL) at AVL = 8..256:8 x the three issue policies, 96 points. */
+export function heavyGrid() {
+  return { program: longStream(), parameters: [{ path: 'AVL', spec: '8..256:8' }, { path: 'issue', spec: 'serial,lockstep,staggered' }] }
+}
+
 /** The long stream at another vl (250: a ragged tail, lanes 0 and 1 hold one element more than the others on 8 lanes). */
 export function longStreamAt(vl: number): string {
   const text = longStream()

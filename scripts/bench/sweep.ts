@@ -26,15 +26,12 @@ import { plannedPoints, runSweep } from '../../shared/sweep/runSweep'
 import { programOrder } from '../../shared/sweep/order'
 import { runOnPool, startSweepThreads } from '../../server/cli/sweepThreads'
 import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
-import { longStream } from './programs'
-
-/** The long stream; its vector length is the symbol AVL (`.equ AVL, 256` in examples/long-stream.s). */
-const LONG_STREAM_AVL = longStream()
+import { heavyGrid } from './programs'
 
 const GRIDS: { name: string; definition: SweepDefinition }[] = [
   { name: 'vl curve (512 points)', definition: sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'AVL', spec: '1..256' }, { path: 'issue', spec: 'serial,staggered' }] }) },
   { name: 'accumulator curve (128 points)', definition: sweepDefinitionSchema.parse({ program: REDUCTION_CURVE, parameters: [{ path: 'AVL', spec: '8..256:8' }, { path: 'reductionAccumulators', spec: '1,2,4,8' }] }) },
-  { name: 'heavy grid (96 points)', definition: sweepDefinitionSchema.parse({ program: LONG_STREAM_AVL, parameters: [{ path: 'AVL', spec: '8..256:8' }, { path: 'issue', spec: 'serial,lockstep,staggered' }] }) },
+  { name: 'heavy grid (96 points)', definition: sweepDefinitionSchema.parse(heavyGrid()) },
 ]
 
 /**

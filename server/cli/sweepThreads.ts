@@ -7,41 +7,13 @@ import { createRequire } from 'node:module'
 import { pathToFileURL } from 'node:url'
 import { Piscina } from 'piscina'
 import type { SweepDefinition, SweepPointResult } from '../../shared/schemas/sweep'
-import { programGroups } from '../../shared/sweep/order'
+import { chunkPrograms, programGroups } from '../../shared/sweep/order'
 import type { ResolvedSweep } from '../../shared/sweep/resolve'
 import { plannedPoints, pointsLimitMessage, timeLimitMessage } from '../../shared/sweep/runSweep'
 import type { SweepChunkTask } from './sweepWorker'
 
-/** Points of the largest chunk. */
-const MAX_CHUNK = 32
-
-/**
- * Point indexes in chunks of about `count / (32 x workers)` points, in
- * program order (shared/sweep/order.ts), made of whole programs: a program
- * split over two chunks may be prepared by two threads (the heavy grid's
- * 1,000-instruction programs, three points each, were split every other time
- * at two points a chunk). Only a program of more than MAX_CHUNK points (a
- * swept machine field alone) is cut, into chunks of the usual size.
- */
-export function chunks(groups: readonly number[][], workers: number): number[][] {
-  const count = groups.reduce((n, g) => n + g.length, 0)
-  const size = Math.max(1, Math.min(MAX_CHUNK, Math.ceil(count / (workers * 32))))
-  const out: number[][] = []
-  let open: number[] = []
-  for (const g of groups) {
-    if (g.length > MAX_CHUNK) {
-      for (let start = 0; start < g.length; start += size) out.push(g.slice(start, start + size))
-      continue
-    }
-    open.push(...g)
-    if (open.length >= size) {
-      out.push(open)
-      open = []
-    }
-  }
-  if (open.length > 0) out.push(open)
-  return out
-}
+/** About 32 chunks a thread (at most 32 points each): small enough that the threads end together. */
+export const threadChunkSize = (points: number, workers: number) => Math.max(1, Math.min(32, Math.ceil(points / (workers * 32))))
 
 const tsxLoader = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href
 
@@ -59,7 +31,7 @@ export function startSweepThreads(workers: number): Piscina<SweepChunkTask, Swee
 export async function runOnPool(pool: Piscina<SweepChunkTask, SweepPointResult[]>, workers: number, definition: SweepDefinition, sweep: ResolvedSweep): Promise<{ points: SweepPointResult[]; stopped: string | null }> {
   const planned = plannedPoints(sweep)
   const deadline = Date.now() + sweep.limits.timeLimitMs
-  const parts = await Promise.all(chunks(programGroups(sweep, planned), workers).map((indexes) => pool.run({ definition, indexes, deadline })))
+  const parts = await Promise.all(chunkPrograms(programGroups(sweep, planned), threadChunkSize(planned, workers)).map((indexes) => pool.run({ definition, indexes, deadline })))
   const points = parts.flat().sort((a, b) => a.index - b.index)
   const stopped = points.length < planned ? timeLimitMessage(sweep, points.length) : pointsLimitMessage(sweep)
   return { points, stopped }

@@ -9,8 +9,22 @@
 import PgBoss from 'pg-boss'
 
 export const SWEEP_QUEUE = 'sweep-chunks'
-/** Points a job carries: small enough that a cancel is seen soon, large enough that queue overhead stays small. */
-export const SWEEP_CHUNK_POINTS = 16
+/**
+ * PostgreSQL NOTIFY channel raised once a sweep's chunks are queued: an idle
+ * worker LISTENs and fetches at once instead of at its next poll (pg-boss
+ * polls every 0.5 s at the most often; polling still covers a lost listener).
+ */
+export const SWEEP_QUEUED_CHANNEL = 'chimeline_sweep_chunks'
+/** The most points a job carries: a cancel is seen soon. */
+const SWEEP_CHUNK_POINTS = 16
+
+/**
+ * Points a job carries for a sweep of `points`: about a 32nd of the sweep, so
+ * that two or more workers end close together (the heavy grid's 96 points in
+ * six chunks of 16 left one worker idle for most of the last, up to 0.45 s),
+ * at most SWEEP_CHUNK_POINTS.
+ */
+export const serverChunkSize = (points: number) => Math.max(1, Math.min(SWEEP_CHUNK_POINTS, Math.ceil(points / 16)))
 
 export interface SweepChunkJob {
   sweepId: string
@@ -29,19 +43,18 @@ export async function startBoss(databaseUrl: string): Promise<PgBoss> {
 }
 
 export interface SweepQueue {
-  /** Queues the points in chunks of SWEEP_CHUNK_POINTS taken along `order` (shared/sweep/order.ts: one program's points together, so that a worker prepares it once). */
-  enqueue(sweepId: string, order: readonly number[]): Promise<void>
+  /** Queues the chunks, one job each (shared/sweep/order.ts chunkPrograms: whole programs, so that a worker prepares each once). */
+  enqueue(sweepId: string, chunks: readonly number[][]): Promise<void>
   close(): Promise<void>
 }
 
 export function createSweepQueue(databaseUrl: string): SweepQueue {
   let boss: Promise<PgBoss> | null = null
   return {
-    async enqueue(sweepId, order) {
+    async enqueue(sweepId, chunks) {
       const b = await (boss ??= startBoss(databaseUrl))
-      const jobs: { name: string; data: SweepChunkJob }[] = []
-      for (let start = 0; start < order.length; start += SWEEP_CHUNK_POINTS) jobs.push({ name: SWEEP_QUEUE, data: { sweepId, indexes: order.slice(start, start + SWEEP_CHUNK_POINTS) } })
-      await b.insert(jobs)
+      await b.insert(chunks.map((indexes) => ({ name: SWEEP_QUEUE, data: { sweepId, indexes } })))
+      await b.getDb().executeSql(`NOTIFY ${SWEEP_QUEUED_CHANNEL}`, [])
     },
     async close() {
       if (boss) await (await boss).stop({ graceful: false, wait: true })

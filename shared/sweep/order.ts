@@ -31,3 +31,32 @@ export function programGroups(sweep: ResolvedSweep, planned: number): number[][]
   }
   return [...groups.values()]
 }
+
+/** Points of the largest program a chunk keeps whole; a larger one (a machine field swept alone) is cut. */
+const WHOLE_PROGRAM_POINTS = 32
+
+/**
+ * Point indexes in chunks of about `size` points, in program order, made of
+ * whole programs: a program split over two chunks may be prepared by two
+ * runners (the heavy grid's 1,000-instruction programs, three points each,
+ * were split every other time at two points a chunk). Only a program of more
+ * than WHOLE_PROGRAM_POINTS points is cut, into chunks of `size`. The CLI's
+ * threads and the server's queue take their chunks from here.
+ */
+export function chunkPrograms(groups: readonly number[][], size: number): number[][] {
+  const out: number[][] = []
+  let open: number[] = []
+  for (const g of groups) {
+    if (g.length > WHOLE_PROGRAM_POINTS) {
+      for (let start = 0; start < g.length; start += size) out.push(g.slice(start, start + size))
+      continue
+    }
+    open.push(...g)
+    if (open.length >= size) {
+      out.push(open)
+      open = []
+    }
+  }
+  if (open.length > 0) out.push(open)
+  return out
+}

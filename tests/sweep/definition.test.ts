@@ -4,8 +4,9 @@ import { parseSpec } from '../../shared/sweep/spec'
 import { pointValues, resolveSweep } from '../../shared/sweep/resolve'
 import { symbolDefinitions, withSymbols } from '../../shared/sweep/symbols'
 import { sweepCsvHeader } from '../../shared/sweep/csv'
-import { programGroups, programOrder } from '../../shared/sweep/order'
-import { chunks } from '../../server/cli/sweepThreads'
+import { chunkPrograms, programGroups, programOrder } from '../../shared/sweep/order'
+import { threadChunkSize } from '../../server/cli/sweepThreads'
+import { serverChunkSize } from '../../server/services/sweeps-queue'
 import { runSweep } from '../../shared/sweep/runSweep'
 import { runPipeline } from '../../shared/sim/run'
 import { figuresOf } from '../../shared/sweep/figures'
@@ -145,19 +146,24 @@ describe('program order (shared/sweep/order.ts)', () => {
     expect(programGroups(m.sweep, 4)).toEqual([[0, 1, 2, 3]])
   })
 
-  it("the CLI's thread chunks keep each program whole, and cut only a program of more than 32 points", () => {
-    // The heavy grid's shape: 32 programs (AVL) of 3 points (issue); 2 threads want chunks of ceil(96 / 64) = 2 points.
+  it('chunks keep each program whole, and cut only a program of more than 32 points (the CLI threads and the server queue)', () => {
+    // The heavy grid's shape: 32 programs (AVL) of 3 points (issue); two CLI threads want chunks of ceil(96 / 64) = 2 points.
     const groups = Array.from({ length: 32 }, (_, a) => [a, a + 32, a + 64])
-    const cut = chunks(groups, 2)
-    expect(cut).toEqual(groups)
-    // 130 programs of one point on 2 threads: ceil(130 / 64) = 3 a chunk, the last one short.
-    const single = chunks(Array.from({ length: 130 }, (_, i) => [i]), 2)
+    expect(threadChunkSize(96, 2)).toBe(2)
+    expect(chunkPrograms(groups, 2)).toEqual(groups)
+    // The server's queue: ceil(96 / 32) = 3 points a chunk, one program each.
+    expect(serverChunkSize(96)).toBe(3)
+    expect(chunkPrograms(groups, serverChunkSize(96))).toEqual(groups)
+    // 130 programs of one point, chunks of 3: the last one short.
+    const single = chunkPrograms(Array.from({ length: 130 }, (_, i) => [i]), 3)
     expect(single.slice(0, 2)).toEqual([[0, 1, 2], [3, 4, 5]])
     expect(single).toHaveLength(44)
     expect(single.at(-1)).toEqual([129])
-    // One program of 100 points (a machine field swept alone): chunks of ceil(100 / 64) = 2.
-    const one = chunks([Array.from({ length: 100 }, (_, i) => i)], 2)
+    // One program of 100 points (a machine field swept alone), chunks of 2: cut.
+    const one = chunkPrograms([Array.from({ length: 100 }, (_, i) => i)], 2)
     expect(one).toHaveLength(50)
     expect(one.flat()).toEqual(Array.from({ length: 100 }, (_, i) => i))
+    // The server's chunk size: a 32nd of the sweep, 1 to 16 points.
+    expect([serverChunkSize(10), serverChunkSize(512), serverChunkSize(200_000)]).toEqual([1, 16, 16])
   })
 })
