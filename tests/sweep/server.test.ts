@@ -6,6 +6,7 @@
  * owners and editors run and cancel, outsiders get 404); a repeated point is
  * stored once.
  */
+import pg from 'pg'
 import request from 'supertest'
 import { QueryTypes } from 'sequelize'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
@@ -16,6 +17,7 @@ import { runSweep } from '../../shared/sweep/runSweep'
 import { ScenarioVersion, Sweep } from '../../server/models'
 import type { Runtime } from '../../server/runtime'
 import { insertPoints } from '../../server/services/sweeps'
+import { SWEEP_QUEUED_CHANNEL } from '../../server/services/sweeps-queue'
 import { startSweepWorker, type SweepWorker } from '../../server/worker-sweeps'
 import { buildUser, buildWorkspace, startTestServer, type BuiltUser } from '../server/helpers'
 import { content } from '../server/scenario-helpers'
@@ -68,6 +70,20 @@ describe('server sweeps', () => {
     expect(sweep.status).toBe('done')
     expect(sweep.points).toEqual(sequential())
   }, 180_000)
+
+  it('announces queued chunks on the channel idle workers listen on, so that none waits for its next poll', async () => {
+    const listener = new pg.Client({ connectionString: runtime.ctx.config.databaseUrl })
+    await listener.connect()
+    try {
+      await listener.query(`LISTEN ${SWEEP_QUEUED_CHANNEL}`)
+      const heard = new Promise<string>((resolve) => listener.on('notification', (n) => resolve(n.channel)))
+      const created = await api().post(`/api/workspaces/${ws}/sweeps`).set(editor.auth).send({ title: 'notified', runner: 'server', definition: { ...definition, parameters: [{ path: 'AVL', spec: '1,2' }] } })
+      expect(created.status).toBe(201)
+      expect(await heard).toBe(SWEEP_QUEUED_CHANNEL)
+    } finally {
+      await listener.end()
+    }
+  })
 
   it('stores a repeated point once (a retried chunk)', async () => {
     const created = await api().post(`/api/workspaces/${ws}/sweeps`).set(editor.auth).send({ title: 'saved', runner: 'browser', definition, points: sequential().slice(0, 3) })
