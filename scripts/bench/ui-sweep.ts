@@ -6,11 +6,14 @@
  * client, starts the test server (scripts/serve-test.ts) on CHIMELINE_E2E_PORT
  * (default 3190), signs in as the demo editor and runs each sweep from the
  * Sweeps page, 1.5 s after filling its form (the Workers the page starts
- * when it opens are then warm, as when a user fills the form by hand). Not a
- * timed test: it prints the figures.
+ * when it opens are then warm, as when a user fills the form by hand). Each
+ * sweep also runs, just after, on a page whose navigator reports one core
+ * (one Worker): the single-thread rate of the same run in the same browser,
+ * for the pool's parallel efficiency. Not a timed test: it prints the figures.
  */
 import { spawn } from 'node:child_process'
 import { loadavg } from 'node:os'
+import type { Page } from '@playwright/test'
 import { launchChromium } from './browser'
 import { build } from 'vite'
 import { DEMO, DEMO_PASSWORD } from '../../e2e/helpers/auth'
@@ -45,17 +48,21 @@ const server = spawn('node_modules/.bin/tsx', ['scripts/serve-test.ts'], { env: 
 try {
   await waitForHealth(60_000)
   const browser = await launchChromium()
-  const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } })
-  await page.goto(`${base}/signin`)
-  await page.getByLabel('E-mail').fill(DEMO.editor)
-  await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD)
-  await page.getByRole('button', { name: 'Sign in' }).click()
-  await page.getByTestId('user-menu').waitFor({ timeout: 60_000 })
-  const cores = await page.evaluate(() => navigator.hardwareConcurrency)
-  const loadBefore = loadavg()[0] ?? 0
-  console.log(`| sweep | Workers | wall s | first point ms | points/s |`)
-  console.log(`| --- | ---: | ---: | ---: | ---: |`)
-  for (const s of SWEEPS) {
+  /** A signed-in page; `cores` set: the page's navigator reports that many cores, so the pool starts that many Workers. */
+  async function signedInPage(cores?: number): Promise<Page> {
+    const context = await browser.newContext({ viewport: { width: 1440, height: 1000 } })
+    const page = await context.newPage()
+    // An init script redefining navigator.hardwareConcurrency did not take in the app's pages; the DevTools protocol's override does.
+    if (cores !== undefined) await (await context.newCDPSession(page)).send('Emulation.setHardwareConcurrencyOverride', { hardwareConcurrency: cores })
+    await page.goto(`${base}/signin`)
+    await page.getByLabel('E-mail').fill(DEMO.editor)
+    await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD)
+    await page.getByRole('button', { name: 'Sign in' }).click()
+    await page.getByTestId('user-menu').waitFor({ timeout: 60_000 })
+    return page
+  }
+  /** Runs one sweep from the Sweeps page; its wall and first-point milliseconds as the page measured them. */
+  async function runSweep(page: Page, s: (typeof SWEEPS)[number]): Promise<{ total: number; first: number }> {
     await page.goto(`${base}/sweeps`)
     await page.getByTestId('sweep-program').locator('textarea').fill(s.program)
     for (const [k, [path, spec]] of s.params.entries()) {
@@ -68,9 +75,22 @@ try {
     await page.getByTestId('sweep-run').click()
     const results = page.getByTestId('sweep-results')
     await page.waitForFunction(() => document.querySelector('[data-testid="sweep-results"]')?.getAttribute('data-total-ms'), null, { timeout: 600_000 })
-    const total = Number(await results.getAttribute('data-total-ms'))
-    const first = Number(await results.getAttribute('data-first-ms'))
-    console.log(`| ${s.name} | ${Math.min(cores, s.points)} | ${(total / 1000).toFixed(2)} | ${first.toFixed(0)} | ${((s.points * 1000) / total).toFixed(1)} |`)
+    return { total: Number(await results.getAttribute('data-total-ms')), first: Number(await results.getAttribute('data-first-ms')) }
+  }
+  const pool = await signedInPage()
+  const single = await signedInPage(1)
+  const cores = await pool.evaluate(() => navigator.hardwareConcurrency)
+  if ((await single.evaluate(() => navigator.hardwareConcurrency)) !== 1) throw new Error('the one-Worker page reports more than one core')
+  const loadBefore = loadavg()[0] ?? 0
+  console.log(`| sweep | Workers | wall s | first point ms | points/s | wall s on 1 Worker | efficiency |`)
+  console.log(`| --- | ---: | ---: | ---: | ---: | ---: | ---: |`)
+  for (const s of SWEEPS) {
+    const workers = Math.min(cores, s.points)
+    const all = await runSweep(pool, s)
+    const one = await runSweep(single, s)
+    // The same grid, the same lane-cycles: per-Worker rate over the one Worker's rate is its wall time over theirs, per Worker.
+    const efficiency = one.total / (workers * all.total)
+    console.log(`| ${s.name} | ${workers} | ${(all.total / 1000).toFixed(2)} | ${all.first.toFixed(0)} | ${((s.points * 1000) / all.total).toFixed(1)} | ${(one.total / 1000).toFixed(2)} | ${efficiency.toFixed(2)} |`)
   }
   console.log(`\nload average (1 min): ${loadBefore.toFixed(2)} before, ${(loadavg()[0] ?? 0).toFixed(2)} after`)
   await browser.close()

@@ -6,6 +6,7 @@
 import type { Machine } from '../../schemas/machine'
 import { STALL_RANK } from '../trace/types'
 import type { Derived } from './config'
+import { Arena } from './arena'
 import type { Inst } from './inst'
 import { UNIT_COUNT, UNITS } from './config'
 import type { SpanRecorder } from './recorder'
@@ -58,6 +59,8 @@ export class Ctx {
   /** Per lane: the instructions started and not finished there, oldest first (kept by Inst). */
   readonly laneActive: Inst[][]
   sink!: CompletionSink
+  /** The typed arrays of the run's instructions (arena.ts). */
+  readonly arena = new Arena()
 
   constructor(
     readonly d: Derived,

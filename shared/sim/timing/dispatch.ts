@@ -52,7 +52,7 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
   const ren = ctx.ren
   const src: Int32Array[] = []
   for (const g of op.srcRegs) {
-    const phys = new Int32Array(g.length)
+    const phys = ctx.arena.i32(g.length)
     for (let k = 0; k < g.length; k++) {
       const p = ren.lookup(g[k] ?? 0)
       phys[k] = p
@@ -64,8 +64,8 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
   if (mask) ren.addReader(mask[0] ?? 0)
   const inst = makeInst(ctx, op, src, mask)
   const n = op.dstRegs.length
-  const dst = new Int32Array(n)
-  const old = new Int32Array(n)
+  const dst = ctx.arena.i32(n)
+  const old = ctx.arena.i32(n)
   for (let k = 0; k < n; k++) {
     const [p, o] = ren.rename(op.dstRegs[k] ?? 0)
     ctx.rf.invalidate(p)

@@ -6,6 +6,7 @@
 import type { VectorOp } from '../exec/stream'
 import { LANE_FIELD_COUNT as FIELD_COUNT, NO_CYCLE as NULL_CYCLE, REASON } from '../trace/types'
 import { laneElements } from './config'
+import type { Arena } from './arena'
 import type { Ctx } from './context'
 
 const F_ELEMENTS = 0
@@ -40,14 +41,18 @@ export class Operand {
     readonly group: Int32Array,
     readonly bits: number,
     lanes: number,
+    arena: Arena,
   ) {
-    this.words = new Int32Array(lanes)
-    this.readCnt = new Int32Array(lanes)
-    this.cons = new Int32Array(lanes)
+    this.words = arena.i32(lanes)
+    this.readCnt = arena.i32(lanes)
+    this.cons = arena.i32(lanes)
   }
 }
 
 type Queue = 'arith' | 'mem'
+
+/** The destination and results of an instruction before dispatch sets them (never written). */
+const NONE = new Int32Array(0)
 
 export abstract class Inst {
   readonly seq: number
@@ -56,13 +61,13 @@ export abstract class Inst {
   readonly n: Int32Array
   readonly beats: Int32Array
   readonly srcs: Operand[] = []
-  dst: Int32Array = new Int32Array(0)
-  oldDst: Int32Array = new Int32Array(0)
+  dst: Int32Array = NONE
+  oldDst: Int32Array = NONE
   /** Words each lane writes to `dst`, and has written. */
   readonly dstWords: Int32Array
   readonly wrCnt: Int32Array
   /** [lane][word]: cycle the result asks for a write port; -1 while not computed. */
-  protected readyAt: Int32Array = new Int32Array(0)
+  protected readyAt: Int32Array = NONE
   protected maxDstWords = 0
   /** Writes a lane may do for this instruction in one cycle. */
   protected writesPerCycle = 1
@@ -94,16 +99,17 @@ export abstract class Inst {
   ) {
     this.seq = op.seq
     const L = (this.L = ctx.L)
-    this.n = new Int32Array(L)
-    this.beats = new Int32Array(L)
-    this.dstWords = new Int32Array(L)
-    this.wrCnt = new Int32Array(L)
-    this.started = new Uint8Array(L)
-    this.readDone = new Uint8Array(L)
-    this.laneDone = new Uint8Array(L)
-    this.tookSlot = new Uint8Array(L)
-    this.noteCycle = new Int32Array(L).fill(-1)
-    this.noteReason = new Int8Array(L)
+    const arena = ctx.arena
+    this.n = arena.i32(L)
+    this.beats = arena.i32(L)
+    this.dstWords = arena.i32(L)
+    this.wrCnt = arena.i32(L)
+    this.started = arena.u8(L)
+    this.readDone = arena.u8(L)
+    this.laneDone = arena.u8(L)
+    this.tookSlot = arena.u8(L)
+    this.noteCycle = arena.i32(L).fill(-1)
+    this.noteReason = arena.i8(L)
     this.base = op.seq * L * LANE_FIELD_COUNT
     this.chaining = ctx.m.chaining
   }
@@ -113,11 +119,11 @@ export abstract class Inst {
     let max = 0
     for (let l = 0; l < this.L; l++) max = Math.max(max, this.dstWords[l] ?? 0)
     this.maxDstWords = max
-    this.readyAt = new Int32Array(this.L * max).fill(-1)
+    this.readyAt = this.ctx.arena.i32(this.L * max).fill(-1)
   }
 
   addSource(group: Int32Array, bits: number, wordsOf: (lane: number) => number): Operand {
-    const o = new Operand(group, bits, this.L)
+    const o = new Operand(group, bits, this.L, this.ctx.arena)
     for (let l = 0; l < this.L; l++) o.words[l] = wordsOf(l)
     this.srcs.push(o)
     return o

@@ -61,8 +61,8 @@ export abstract class MemInst extends Inst {
     }
     this.lo = lo
     this.hi = hi
-    this.laneBeats = new Int32Array(L)
-    this.lastCycle = new Int32Array(L).fill(-1)
+    this.laneBeats = ctx.arena.i32(L)
+    this.lastCycle = ctx.arena.i32(L).fill(-1)
   }
 
   get isStore(): boolean {
@@ -220,7 +220,7 @@ export class StoreInst extends MemInst {
     }
     if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
     this.allocResults()
-    this.sentCount = new Int32Array(this.L)
+    this.sentCount = this.ctx.arena.i32(this.L)
     this.writeCounts()
   }
 

@@ -55,8 +55,8 @@ export class PermutationInst extends Inst {
     this.pkWord = []
     this.pkDst = []
     this.pkDstWord = []
-    this.waiting = new Int32Array(L * this.maxDstWords)
-    this.arrival = new Int32Array(L * this.maxDstWords)
+    this.waiting = ctx.arena.i32(L * this.maxDstWords)
+    this.arrival = ctx.arena.i32(L * this.maxDstWords)
     for (let a = 0; a < L; a++) {
       const row = (rows[a] as [number, number, number][]).sort((x, y) => x[0] - y[0])
       this.pkWord.push(Int32Array.from(row, (r) => r[0]))
@@ -64,8 +64,8 @@ export class PermutationInst extends Inst {
       this.pkDstWord.push(Int32Array.from(row, (r) => r[2]))
       for (const [, b, dw] of row) this.waiting[b * this.maxDstWords + dw] = (this.waiting[b * this.maxDstWords + dw] ?? 0) + 1
     }
-    this.pkNext = new Int32Array(L)
-    this.sent = new Int32Array(L)
+    this.pkNext = ctx.arena.i32(L)
+    this.sent = ctx.arena.i32(L)
     this.writeCounts()
   }
 

@@ -71,15 +71,16 @@ export class ReductionInst extends Inst {
     for (let l = 0; l < L; l++) this.beats[l] = Math.ceil((this.n[l] ?? 0) / this.epc)
     this.dstWords[0] = op.vl > 0 ? 1 : 0
     this.allocResults()
-    this.beatDone = new Int32Array(L)
-    this.acc = new Int32Array(L * this.A).fill(-1)
-    this.partials = new Int32Array(L)
-    this.laneValue = new Int32Array(L).fill(-1)
+    const arena = ctx.arena
+    this.beatDone = arena.i32(L)
+    this.acc = arena.i32(L * this.A).fill(-1)
+    this.partials = arena.i32(L)
+    this.laneValue = arena.i32(L).fill(-1)
     this.tree = ctx.m.interLane === 'tree'
     this.levels = Math.ceil(Math.log2(Math.max(1, this.activeLanes())))
-    this.tLevel = new Int8Array(this.tree ? L : 0)
-    this.tVal = new Int32Array(this.tree ? L : 0).fill(-1)
-    this.tIn = new Int32Array(this.tree ? L * this.levels : 0).fill(-1)
+    this.tLevel = arena.i8(this.tree ? L : 0)
+    this.tVal = arena.i32(this.tree ? L : 0).fill(-1)
+    this.tIn = arena.i32(this.tree ? L * this.levels : 0).fill(-1)
     this.writeCounts()
   }
 
@@ -332,7 +333,7 @@ export class OrderedReductionInst extends Inst {
     if (vs2) this.addSource(vs2, op.sew, (l) => wordsFor(this.n[l] ?? 0, op.sew))
     if (vs1) this.addSource(vs1, op.sew, (l) => (l === 0 && op.vl > 0 ? 1 : 0))
     if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
-    this.lastOfLane = new Int32Array(L).fill(-1)
+    this.lastOfLane = ctx.arena.i32(L).fill(-1)
     for (let l = 0; l < L; l++) {
       // One element a beat: the order forbids folding elements together.
       this.beats[l] = this.n[l] ?? 0
@@ -340,7 +341,7 @@ export class OrderedReductionInst extends Inst {
     }
     this.dstWords[0] = op.vl > 0 ? 1 : 0
     this.allocResults()
-    this.beatDone = new Int32Array(L)
+    this.beatDone = ctx.arena.i32(L)
     this.writeCounts()
   }
 

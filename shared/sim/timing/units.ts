@@ -53,7 +53,7 @@ export class UnitInst extends Inst {
       this.dstWords[l] = wordsFor(this.n[l] ?? 0, this.dstBits)
     }
     this.writesPerCycle = Math.max(1, Math.ceil((this.epc * this.dstBits) / 64))
-    this.beatDone = new Int32Array(this.L)
+    this.beatDone = ctx.arena.i32(this.L)
     this.allocResults()
     this.writeCounts()
   }

@@ -1,0 +1,50 @@
+/**
+ * Typed arrays for one run's instructions, carved from shared buffers of
+ * 64 KiB. A run builds thousands of instructions with about two dozen small
+ * per-lane arrays each (29,000 for one point of the 1,000-instruction long
+ * stream), and a typed array with a buffer of its own is an allocation
+ * outside the JavaScript heap, slow to make and to free: about 0.8 us each in
+ * Node, and in Chromium's Workers the allocations of different Workers take
+ * turns, so that two sweep Workers ran no faster than one. A view on a shared
+ * buffer is a small object on the heap. A buffer goes once no view on it is
+ * left; instructions are dropped in the order they were made, so a long run
+ * still holds only the buffers of the instructions around those in flight.
+ */
+const CHUNK_BYTES = 1 << 16
+/** Requests above this take a buffer of their own rather than waste the rest of a chunk. */
+const OWN_BUFFER_BYTES = CHUNK_BYTES / 4
+
+export class Arena {
+  private buffer = new ArrayBuffer(0)
+  private at = 0
+
+  /** `bytes` at an offset that is a multiple of `align` (a power of two): the buffer and the offset. */
+  private take(bytes: number, align: number): [ArrayBuffer, number] {
+    if (bytes > OWN_BUFFER_BYTES) return [new ArrayBuffer(bytes), 0]
+    let at = (this.at + align - 1) & -align
+    if (at + bytes > this.buffer.byteLength) {
+      this.buffer = new ArrayBuffer(CHUNK_BYTES)
+      at = 0
+    }
+    this.at = at + bytes
+    return [this.buffer, at]
+  }
+
+  /** A zeroed Int32Array of n elements. */
+  i32(n: number): Int32Array {
+    const [buffer, at] = this.take(n * 4, 4)
+    return new Int32Array(buffer, at, n)
+  }
+
+  /** A zeroed Uint8Array of n elements. */
+  u8(n: number): Uint8Array {
+    const [buffer, at] = this.take(n, 1)
+    return new Uint8Array(buffer, at, n)
+  }
+
+  /** A zeroed Int8Array of n elements. */
+  i8(n: number): Int8Array {
+    const [buffer, at] = this.take(n, 1)
+    return new Int8Array(buffer, at, n)
+  }
+}
