@@ -19,10 +19,11 @@ export const SWEEP_QUEUED_CHANNEL = 'chimeline_sweep_chunks'
 const SWEEP_CHUNK_POINTS = 16
 
 /**
- * Points a job carries for a sweep of `points`: about a 32nd of the sweep, so
+ * Points a job carries for a sweep of `points`: about a 16th of the sweep, so
  * that two or more workers end close together (the heavy grid's 96 points in
- * six chunks of 16 left one worker idle for most of the last, up to 0.45 s),
- * at most SWEEP_CHUNK_POINTS.
+ * six chunks of 16 left one worker idle for most of the last, up to 0.45 s;
+ * a 32nd, one program a chunk there, measured no better: each chunk costs
+ * the queue a few queries), at most SWEEP_CHUNK_POINTS.
  */
 export const serverChunkSize = (points: number) => Math.max(1, Math.min(SWEEP_CHUNK_POINTS, Math.ceil(points / 16)))
 

@@ -151,9 +151,9 @@ describe('program order (shared/sweep/order.ts)', () => {
     const groups = Array.from({ length: 32 }, (_, a) => [a, a + 32, a + 64])
     expect(threadChunkSize(96, 2)).toBe(2)
     expect(chunkPrograms(groups, 2)).toEqual(groups)
-    // The server's queue: ceil(96 / 32) = 3 points a chunk, one program each.
-    expect(serverChunkSize(96)).toBe(3)
-    expect(chunkPrograms(groups, serverChunkSize(96))).toEqual(groups)
+    // The server's queue: ceil(96 / 16) = 6 points a chunk, two programs each.
+    expect(serverChunkSize(96)).toBe(6)
+    expect(chunkPrograms(groups, serverChunkSize(96))).toEqual(Array.from({ length: 16 }, (_, k) => [...(groups[2 * k] ?? []), ...(groups[2 * k + 1] ?? [])]))
     // 130 programs of one point, chunks of 3: the last one short.
     const single = chunkPrograms(Array.from({ length: 130 }, (_, i) => [i]), 3)
     expect(single.slice(0, 2)).toEqual([[0, 1, 2], [3, 4, 5]])
@@ -163,7 +163,7 @@ describe('program order (shared/sweep/order.ts)', () => {
     const one = chunkPrograms([Array.from({ length: 100 }, (_, i) => i)], 2)
     expect(one).toHaveLength(50)
     expect(one.flat()).toEqual(Array.from({ length: 100 }, (_, i) => i))
-    // The server's chunk size: a 32nd of the sweep, 1 to 16 points.
-    expect([serverChunkSize(10), serverChunkSize(512), serverChunkSize(200_000)]).toEqual([1, 16, 16])
+    // The server's chunk size: a 16th of the sweep, 1 to 16 points.
+    expect([serverChunkSize(10), serverChunkSize(100), serverChunkSize(512), serverChunkSize(200_000)]).toEqual([1, 7, 16, 16])
   })
 })
