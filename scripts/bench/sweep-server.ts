@@ -22,9 +22,7 @@ import { spawn, type ChildProcess } from 'node:child_process'
 import { loadavg } from 'node:os'
 import { isDeepStrictEqual } from 'node:util'
 import { QueryTypes } from 'sequelize'
-import { defaultMachine } from '../../shared/schemas/machine'
 import { sweepDefinitionSchema, type SweepDefinition, type SweepPointResult } from '../../shared/schemas/sweep'
-import { resolveSweep, type ResolvedSweep } from '../../shared/sweep/resolve'
 import { runSweep } from '../../shared/sweep/runSweep'
 import { loadConfig } from '../../server/config'
 import { databaseUrl, testCluster } from '../../server/db/cluster'
@@ -34,21 +32,13 @@ import { seedDemo } from '../../server/services/demo-seed'
 import { createSweep, getSweep } from '../../server/services/sweeps'
 import { prepareCluster } from '../db'
 import { heavyGrid } from './programs'
+import { copyOf, laneCycles, resolveOrThrow } from './sweep-helpers'
 
 const TITLE = 'bench:sweep:server'
 /** Timed runs per worker count, each right after its own single-thread yardstick. */
 const ROUNDS = 3
 const grid = sweepDefinitionSchema.parse(heavyGrid())
-/** The grid under another definition (its point limit raised by k): no process finds programs another sweep prepared. */
-const copyOf = (d: SweepDefinition, k: number): SweepDefinition => sweepDefinitionSchema.parse({ ...d, limits: { ...d.limits, maxPoints: (d.limits?.maxPoints ?? 10_000) + k } })
-const laneCycles = (points: SweepPointResult[]) => points.reduce((n, p) => n + (p.figures?.cycles ?? 0) * defaultMachine.lanes, 0)
 const fmt = (x: number, d = 2) => x.toFixed(d)
-
-function resolve(d: SweepDefinition): ResolvedSweep {
-  const r = resolveSweep(d)
-  if (!r.ok) throw new Error(r.issues.map((i) => i.message).join('; '))
-  return r.sweep
-}
 
 const url = await prepareCluster(testCluster)
 const config = loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: url, SMTP_URL: '', SMTP_SINK_PORT: '0', LOG_LEVEL: 'warn' })
@@ -91,8 +81,8 @@ async function runOnWorkers(definition: SweepDefinition): Promise<{ wallMs: numb
 
 const children: ChildProcess[] = []
 try {
-  const sweep = resolve(grid)
-  runSweep(resolve(copyOf(grid, 2)))
+  const sweep = resolveOrThrow(grid)
+  runSweep(resolveOrThrow(copyOf(grid, 2)))
   /** The single-thread rate, timed right before each worker run: the shared machine's load moves within seconds. */
   const singleRate = (): { s: number; rate: number; points: SweepPointResult[] } => {
     const t0 = performance.now()

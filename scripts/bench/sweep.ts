@@ -19,14 +19,13 @@
  */
 import { loadavg } from 'node:os'
 import { isDeepStrictEqual } from 'node:util'
-import { defaultMachine } from '../../shared/schemas/machine'
-import { sweepDefinitionSchema, type SweepDefinition, type SweepPointResult } from '../../shared/schemas/sweep'
-import { resolveSweep, type ResolvedSweep } from '../../shared/sweep/resolve'
+import { sweepDefinitionSchema, type SweepDefinition } from '../../shared/schemas/sweep'
 import { plannedPoints, runSweep } from '../../shared/sweep/runSweep'
 import { programOrder } from '../../shared/sweep/order'
 import { runOnPool, startSweepThreads } from '../../server/cli/sweepThreads'
 import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
 import { heavyGrid } from './programs'
+import { copyOf, laneCycles, resolveOrThrow } from './sweep-helpers'
 
 const GRIDS: { name: string; definition: SweepDefinition }[] = [
   { name: 'vl curve (512 points)', definition: sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'AVL', spec: '1..256' }, { path: 'issue', spec: 'serial,staggered' }] }) },
@@ -34,22 +33,9 @@ const GRIDS: { name: string; definition: SweepDefinition }[] = [
   { name: 'heavy grid (96 points)', definition: sweepDefinitionSchema.parse(heavyGrid()) },
 ]
 
-/**
- * The grid under another definition (a point limit raised by k): a thread
- * keeps only the programs of the definition it ran last, so neither the timed
- * grid nor a copy finds programs another one prepared.
- */
-const copyOf = (d: SweepDefinition, k: number): SweepDefinition => sweepDefinitionSchema.parse({ ...d, limits: { ...d.limits, maxPoints: (d.limits?.maxPoints ?? 10_000) + k } })
 const WARM_UP = 2
 
-const laneCycles = (points: SweepPointResult[]) => points.reduce((n, p) => n + (p.figures?.cycles ?? 0) * defaultMachine.lanes, 0)
 const fmt = (x: number, d = 2) => x.toFixed(d)
-
-function resolve(d: SweepDefinition): ResolvedSweep {
-  const r = resolveSweep(d)
-  if (!r.ok) throw new Error(r.issues.map((i) => i.message).join('; '))
-  return r.sweep
-}
 
 /**
  * What two threads of this work get from the machine: each of the two runs the
@@ -60,7 +46,7 @@ function resolve(d: SweepDefinition): ResolvedSweep {
  */
 async function ceiling(pool: ReturnType<typeof startSweepThreads>, definition: SweepDefinition, oneThreadS: number): Promise<string> {
   const copy = copyOf(definition, 1)
-  const indexes = programOrder(resolve(copy), plannedPoints(resolve(copy)))
+  const indexes = programOrder(resolveOrThrow(copy), plannedPoints(resolveOrThrow(copy)))
   const t0 = performance.now()
   await Promise.all([0, 1].map(() => pool.run({ definition: copy, indexes, deadline: Date.now() + 600_000 })))
   const both = (performance.now() - t0) / 1000
@@ -72,10 +58,10 @@ const loadBefore = loadavg()[0] ?? 0
 console.log('| sweep | runner | start-up s | wall s | first point ms | points/s | lane-cycles/s per worker | efficiency |')
 console.log('| --- | --- | ---: | ---: | ---: | ---: | ---: | ---: |')
 for (const g of GRIDS) {
-  const sweep = resolve(g.definition)
+  const sweep = resolveOrThrow(g.definition)
   const warmUp = copyOf(g.definition, WARM_UP)
-  const warmIndexes = programOrder(resolve(warmUp), plannedPoints(resolve(warmUp)))
-  runSweep(resolve(warmUp))
+  const warmIndexes = programOrder(resolveOrThrow(warmUp), plannedPoints(resolveOrThrow(warmUp)))
+  runSweep(resolveOrThrow(warmUp))
   let first: number | null = null
   const t0 = performance.now()
   const single = runSweep(sweep, { onPoint: () => (first ??= performance.now() - t0) })
