@@ -42,17 +42,22 @@ cd "$work/repo"
 
 step "npm install && npm start (the first start), then sign in and load the Bench in Chromium"
 npm install --no-audit --no-fund
+# Job control on for this one job: a background job of a script without it ignores SIGINT (POSIX), so the
+# Ctrl-C below never reached the app (the run waited for it forever); with it the job is its own process group.
+set -m
 npm start > "$work/start.log" 2>&1 &
 app=$!
+set +m
 for _ in $(seq 1 600); do
   curl -fsS "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break
   kill -0 $app 2>/dev/null || { cat "$work/start.log"; echo "check:fresh: npm start exited" >&2; exit 1; }
   sleep 1
 done
 share_url="$(grep -o 'http://[^ ]*/s/[A-Za-z0-9_-]*' "$work/start.log" | head -1 || true)"
-[ -n "$share_url" ] || { cat "$work/start.log"; echo "check:fresh: npm start printed no demo share link" >&2; kill $app; exit 1; }
-npx tsx scripts/smoke-browser.ts "http://127.0.0.1:$PORT" "$share_url" || { kill $app; exit 1; }
-kill -INT $app; wait $app || true
+[ -n "$share_url" ] || { cat "$work/start.log"; echo "check:fresh: npm start printed no demo share link" >&2; kill -- -$app; exit 1; }
+npx tsx scripts/smoke-browser.ts "http://127.0.0.1:$PORT" "$share_url" || { kill -- -$app; exit 1; }
+# Ctrl-C as a terminal sends it: to the app's whole process group.
+kill -INT -- -$app; wait $app || true
 
 step "npm install && npm test"
 npm install --no-audit --no-fund && npm test
