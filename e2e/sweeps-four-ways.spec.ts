@@ -7,12 +7,13 @@
  * test database (each must take chunks: a large grid on two worker
  * processes), the `sweep` command line, and points opened on the Bench.
  */
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process'
+import { spawnSync, type ChildProcess } from 'node:child_process'
 import { mkdtempSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { expect, test, type APIRequestContext } from '@playwright/test'
 import { databaseUrl, testCluster } from '../server/db/cluster'
+import { startWorkerProcess } from '../scripts/worker-process'
 import type { SweepPointResult } from '../shared/schemas/sweep'
 import { FMA_CURVE } from '../tests/sweep/programs'
 import { accessToken, workspaceId } from './helpers/api'
@@ -20,26 +21,6 @@ import { DEMO, signIn, watchConsole } from './helpers/auth'
 
 const definition = { program: FMA_CURVE, machine: {}, parameters: [{ path: 'AVL', spec: '1..40' }, { path: 'issue', spec: 'serial,staggered' }] }
 const PLANNED = 80
-
-/** A sweep worker process on the e2e server's database; resolves once it takes chunks. Its log lines are kept. */
-function startWorker(lines: string[]): Promise<ChildProcess> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/worker.ts'], {
-    env: { ...process.env, DATABASE_URL: databaseUrl(testCluster), NODE_ENV: 'test', LOG_LEVEL: 'info' },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  })
-  return new Promise((resolve, reject) => {
-    let buffered = ''
-    child.stdout!.on('data', (d: Buffer) => {
-      buffered += d.toString()
-      const parts = buffered.split('\n')
-      buffered = parts.pop() ?? ''
-      lines.push(...parts)
-      if (parts.some((l) => l.includes('taking sweep chunks'))) resolve(child)
-    })
-    child.on('exit', (code) => reject(new Error(`the worker exited with ${code}`)))
-    setTimeout(() => reject(new Error('the worker did not start in 60 s')), 60_000).unref()
-  })
-}
 
 async function api<T>(request: APIRequestContext, token: string, method: 'get' | 'post', path: string, data?: object): Promise<T> {
   const res = await request[method](path, { headers: { Authorization: `Bearer ${token}` }, data })
@@ -82,7 +63,7 @@ test('one grid, four runners, the same figures: Worker pool, two server worker p
 
   // 2. Two sweep worker processes on the same database take the chunks of a server sweep.
   const lines: string[] = []
-  workers.push(...(await Promise.all([startWorker(lines), startWorker(lines)])))
+  workers.push(...(await Promise.all([startWorkerProcess(databaseUrl(testCluster), lines), startWorkerProcess(databaseUrl(testCluster), lines)])))
   const queued = await api<{ sweep: { id: string } }>(request, token, 'post', base, { title: 'four runners (server)', runner: 'server', definition })
   let server: { status: string; points: SweepPointResult[] } = { status: 'queued', points: [] }
   for (let i = 0; i < 240 && server.status !== 'done'; i++) {

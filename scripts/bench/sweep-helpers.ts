@@ -1,7 +1,9 @@
 /** What the sweep benchmarks (sweep.ts, sweep-server.ts) share. */
 import { defaultMachine } from '../../shared/schemas/machine'
 import { sweepDefinitionSchema, type SweepDefinition, type SweepPointResult } from '../../shared/schemas/sweep'
+import { programOrder } from '../../shared/sweep/order'
 import { resolveSweep, type ResolvedSweep } from '../../shared/sweep/resolve'
+import { plannedPoints } from '../../shared/sweep/runSweep'
 
 /**
  * The grid under another definition (its point limit raised by k): a runner
@@ -18,3 +20,6 @@ export function resolveOrThrow(d: SweepDefinition): ResolvedSweep {
   if (!r.ok) throw new Error(r.issues.map((i) => i.message).join('; '))
   return r.sweep
 }
+
+/** Every point of a resolved sweep, in the order runners take them. */
+export const allPoints = (sweep: ResolvedSweep): number[] => programOrder(sweep, plannedPoints(sweep))

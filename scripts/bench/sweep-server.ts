@@ -18,7 +18,7 @@
  * to the last one finished (pg-boss's own start and completion times): the
  * workers' parallel work. The points must equal the single thread's.
  */
-import { spawn, type ChildProcess } from 'node:child_process'
+import type { ChildProcess } from 'node:child_process'
 import { loadavg } from 'node:os'
 import { isDeepStrictEqual } from 'node:util'
 import { QueryTypes } from 'sequelize'
@@ -31,6 +31,7 @@ import { createRuntime } from '../../server/runtime'
 import { seedDemo } from '../../server/services/demo-seed'
 import { createSweep, getSweep } from '../../server/services/sweeps'
 import { prepareCluster } from '../db'
+import { startWorkerProcess } from '../worker-process'
 import { heavyGrid } from './programs'
 import { copyOf, laneCycles, resolveOrThrow } from './sweep-helpers'
 
@@ -44,20 +45,6 @@ const url = await prepareCluster(testCluster)
 const config = loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: url, SMTP_URL: '', SMTP_SINK_PORT: '0', LOG_LEVEL: 'warn' })
 const runtime = await createRuntime(config)
 const { workspace, owner } = await seedDemo(runtime.ctx.sequelize)
-
-/** A worker process on the test database; resolves once it takes chunks. */
-function startWorker(): Promise<ChildProcess> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/worker.ts'], {
-    env: { ...process.env, DATABASE_URL: databaseUrl(testCluster), NODE_ENV: 'test', LOG_LEVEL: 'info', SMTP_URL: '', SMTP_SINK_PORT: '0' },
-    stdio: ['ignore', 'pipe', 'inherit'],
-  })
-  return new Promise((resolve, reject) => {
-    child.stdout!.on('data', (d: Buffer) => {
-      if (d.toString().includes('taking sweep chunks')) resolve(child)
-    })
-    child.on('exit', (code) => reject(new Error(`a worker exited with ${code}`)))
-  })
-}
 
 /** Queues a server sweep and waits for it: ms from queue to done, and from the first chunk taken to the last finished. */
 async function runOnWorkers(definition: SweepDefinition): Promise<{ wallMs: number; workingMs: number; points: SweepPointResult[] }> {
@@ -95,7 +82,7 @@ try {
   console.log('| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: |')
   const medians: string[] = []
   for (const [k, workers] of [1, 2].entries()) {
-    while (children.length < workers) children.push(await startWorker())
+    while (children.length < workers) children.push(await startWorkerProcess(databaseUrl(testCluster)))
     // Warm every process, the new one included: each takes chunks of a copy until the copy is done.
     await runOnWorkers(copyOf(grid, 3 + k))
     const ratios: number[] = []

@@ -20,12 +20,11 @@
 import { loadavg } from 'node:os'
 import { isDeepStrictEqual } from 'node:util'
 import { sweepDefinitionSchema, type SweepDefinition } from '../../shared/schemas/sweep'
-import { plannedPoints, runSweep } from '../../shared/sweep/runSweep'
-import { programOrder } from '../../shared/sweep/order'
+import { runSweep } from '../../shared/sweep/runSweep'
 import { runOnPool, startSweepThreads } from '../../server/cli/sweepThreads'
 import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
 import { heavyGrid } from './programs'
-import { copyOf, laneCycles, resolveOrThrow } from './sweep-helpers'
+import { allPoints, copyOf, laneCycles, resolveOrThrow } from './sweep-helpers'
 
 const GRIDS: { name: string; definition: SweepDefinition }[] = [
   { name: 'vl curve (512 points)', definition: sweepDefinitionSchema.parse({ program: FMA_CURVE, parameters: [{ path: 'AVL', spec: '1..256' }, { path: 'issue', spec: 'serial,staggered' }] }) },
@@ -46,7 +45,7 @@ const fmt = (x: number, d = 2) => x.toFixed(d)
  */
 async function ceiling(pool: ReturnType<typeof startSweepThreads>, definition: SweepDefinition, oneThreadS: number): Promise<string> {
   const copy = copyOf(definition, 1)
-  const indexes = programOrder(resolveOrThrow(copy), plannedPoints(resolveOrThrow(copy)))
+  const indexes = allPoints(resolveOrThrow(copy))
   const t0 = performance.now()
   await Promise.all([0, 1].map(() => pool.run({ definition: copy, indexes, deadline: Date.now() + 600_000 })))
   const both = (performance.now() - t0) / 1000
@@ -60,8 +59,9 @@ console.log('| --- | --- | ---: | ---: | ---: | ---: | ---: | ---: |')
 for (const g of GRIDS) {
   const sweep = resolveOrThrow(g.definition)
   const warmUp = copyOf(g.definition, WARM_UP)
-  const warmIndexes = programOrder(resolveOrThrow(warmUp), plannedPoints(resolveOrThrow(warmUp)))
-  runSweep(resolveOrThrow(warmUp))
+  const warmSweep = resolveOrThrow(warmUp)
+  const warmIndexes = allPoints(warmSweep)
+  runSweep(warmSweep)
   let first: number | null = null
   const t0 = performance.now()
   const single = runSweep(sweep, { onPoint: () => (first ??= performance.now() - t0) })
