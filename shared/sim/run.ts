@@ -27,8 +27,8 @@ import type { DynamicStream } from './exec/stream'
 import { isValidVlen } from './exec/vtype'
 import { registerGroupsOf, type RegisterGroups } from './registerGroups'
 import { machineReductionOrder } from './timing/reduction-order'
-import { advance, createTimingState, finish } from './timing/simulate'
-import type { SimulateOptions, TimingTrace } from './trace/types'
+import { advance, createTimingState, finish, finishMetrics } from './timing/simulate'
+import type { Metrics, SimulateOptions, TimingTrace } from './trace/types'
 
 export type RunStage = 'machine' | 'assemble' | 'execute' | 'simulate'
 
@@ -189,15 +189,22 @@ export function prepareRun(input: { program: string | Program }, options: Prepar
   return { ok: true, prepared }
 }
 
-/** Times a prepared run on a machine as a generator that yields progress between batches of cycles. */
-export function* timePreparedSteps(prepared: PreparedRun, machineInput: unknown, options: TimeOptions = {}): Generator<RunProgress, RunResult, void> {
+/** The machine to time a preparation on: valid, and of the preparation's VLEN. */
+function checkPreparedMachine(prepared: PreparedRun, machineInput: unknown): { ok: true; machine: Machine } | { ok: false; error: RunError } {
   const checked = checkMachine(machineInput)
   if (!checked.ok) return { ok: false, error: machineError(checked.issues) }
-  const machine = checked.machine
-  if (machine.vlen !== prepared.vlen) {
-    const issue = { field: 'vlen', message: `VLEN ${machine.vlen} differs from the ${prepared.vlen} the program was executed at; prepare it again at this VLEN` }
+  if (checked.machine.vlen !== prepared.vlen) {
+    const issue = { field: 'vlen', message: `VLEN ${checked.machine.vlen} differs from the ${prepared.vlen} the program was executed at; prepare it again at this VLEN` }
     return { ok: false, error: machineError([issue]) }
   }
+  return { ok: true, machine: checked.machine }
+}
+
+/** Times a prepared run on a machine as a generator that yields progress between batches of cycles. */
+export function* timePreparedSteps(prepared: PreparedRun, machineInput: unknown, options: TimeOptions = {}): Generator<RunProgress, RunResult, void> {
+  const checked = checkPreparedMachine(prepared, machineInput)
+  if (!checked.ok) return checked
+  const machine = checked.machine
   const { stream, registers, program, functional } = prepared
   const total = stream.ops.length
   const state = createTimingState(stream, machine, options.timing)
@@ -214,6 +221,21 @@ export function* timePreparedSteps(prepared: PreparedRun, machineInput: unknown,
  */
 export function timePrepared(prepared: PreparedRun, machine: unknown, options: TimeOptions = {}): RunResult {
   return drain(timePreparedSteps(prepared, machine, options))
+}
+
+/**
+ * Times a prepared run on a machine and keeps only its metrics (no trace):
+ * what a sweep point needs, without building the per-instruction records,
+ * spans and phase times a trace holds. The metrics equal timePrepared's.
+ */
+export function timePreparedMetrics(prepared: PreparedRun, machineInput: unknown, options: SimulateOptions = {}): { ok: true; metrics: Metrics } | { ok: false; error: RunError } {
+  const checked = checkPreparedMachine(prepared, machineInput)
+  if (!checked.ok) return checked
+  const state = createTimingState(prepared.stream, checked.machine, options)
+  while (advance(state, DEFAULT_BATCH_CYCLES));
+  const { metrics, error } = finishMetrics(state)
+  if (error) return { ok: false, error: { stage: 'simulate', code: error.code, message: error.message } }
+  return { ok: true, metrics }
 }
 
 /** The pipeline as a generator: yields progress between batches of cycles, returns the result. */

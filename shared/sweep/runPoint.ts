@@ -5,13 +5,14 @@
  *
  * A PointRunner assembles and executes each distinct (program text, VLEN)
  * once (prepareRun) and re-times the prepared stream for every machine
- * (timePrepared): a swept machine field other than vlen never executes again.
+ * (timePreparedMetrics, which builds the metrics and no trace): a swept
+ * machine field other than vlen never executes again.
  * It keeps the last PREPARED_CACHE preparations; points come in index order,
  * the first parameter slowest, so a small cache serves a whole grid.
  */
 import { checkMachine } from '../schemas/machine'
 import type { SweepPointResult, SweepValue } from '../schemas/sweep'
-import { prepareRun, timePrepared, type PrepareResult, type RunError } from '../sim/run'
+import { prepareRun, timePreparedMetrics, type PrepareResult, type RunError } from '../sim/run'
 import { figuresOf } from './figures'
 import { pointInput, pointValues, type ResolvedSweep } from './resolve'
 import { withSymbols } from './symbols'
@@ -55,9 +56,9 @@ export function createPointRunner(sweep: ResolvedSweep) {
       }
       const p = prepare(pointProgram(sweep, values), machine.machine.vlen)
       if (!p.ok) return failed(p.error)
-      const r = timePrepared(p.prepared, machine.machine, { timing: { cycleLimit: sweep.limits.cycleLimit, recordUsage: false } })
+      const r = timePreparedMetrics(p.prepared, machine.machine, { cycleLimit: sweep.limits.cycleLimit, recordUsage: false })
       if (!r.ok) return failed(r.error)
-      return { index, values, status: 'ok', figures: figuresOf(r.trace.metrics), error: null }
+      return { index, values, status: 'ok', figures: figuresOf(r.metrics), error: null }
     },
   }
 }

@@ -7,7 +7,7 @@
  */
 import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
-import { prepareRun, runPipeline, timePrepared, type PreparedRun } from '../../shared/sim/run'
+import { prepareRun, runPipeline, timePrepared, timePreparedMetrics, type PreparedRun } from '../../shared/sim/run'
 import { readDump } from '../../shared/sim/exec/dump'
 import { elementSum, machine as orderMachine, machineSum, program as sumProgram } from './fpOrderFixture'
 
@@ -29,6 +29,28 @@ describe('prepareRun + timePrepared', () => {
       expect(again.trace).toEqual(once.trace)
       expect(again.functional).toEqual(once.functional)
     }
+  })
+
+  it('give a sweep point the metrics of the full trace, with and without alike lanes timed once, and the same errors', () => {
+    // Alike lanes (saxpy at vl 256 on 8 lanes: one timed lane), a ragged tail (5 lanes: classes), reductions over the ring (every lane timed), a cycle limit.
+    const reduction = readFileSync(new URL('../../examples/reduction.s', import.meta.url), 'utf8')
+    const cases: [string, object][] = [
+      [saxpy, { lanes: 8 }],
+      [saxpy, { lanes: 5, rfBanks: 3 }],
+      [saxpy, { lanes: 8, identicalLanes: false }],
+      [reduction, { lanes: 8, reductionAccumulators: 2 }],
+    ]
+    for (const [text, machine] of cases) {
+      const p = prepared(text, 8192)
+      const { identicalLanes, ...m } = machine as { identicalLanes?: boolean }
+      const timing = identicalLanes === false ? { identicalLanes: false, recordUsage: false } : { recordUsage: false }
+      const full = timePrepared(p, m, { timing })
+      const figures = timePreparedMetrics(p, m, timing)
+      if (!full.ok || !figures.ok) throw new Error('run failed')
+      expect(figures.metrics).toEqual(full.trace.metrics)
+    }
+    const cut = timePreparedMetrics(prepared(saxpy, 8192), { lanes: 8 }, { cycleLimit: 50 })
+    expect(cut.ok || cut.error).toEqual({ stage: 'simulate', code: 'cycle-limit', message: 'the run exceeded the cycle limit of 50 cycles' })
   })
 
   it('leave the prepared stream as it was (one preparation serves many timings)', () => {

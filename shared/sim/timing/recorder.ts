@@ -21,77 +21,86 @@ const LOW = CHUNK - 1
 const FIRST_ROWS = 256
 
 /**
- * Rows in fixed-size chunks, a row's columns side by side (one chunk lookup
- * and one cache line per row written): appending never copies what is already
- * stored, and `column` builds one exact-size column at a time, so that a long
- * run never holds its spans twice over (the chunks go once the last column is
- * built). Every column is stored as Int32 (one element type keeps each store
- * site monomorphic, which matters at a few stores per simulated cycle) and
- * takes its trace type only in `column`.
+ * Rows in fixed-size chunks, each chunk column by column (column k of a chunk
+ * of `cap` rows is chunk[k x cap ...]): appending never copies what is already
+ * stored but a growing first chunk, and `column` copies each chunk's part of a
+ * column as one contiguous block, then builds one exact-size column at a time,
+ * so that a long run never holds its spans twice over (the chunks go once the
+ * last column is built). Every column is stored as Int32 (one element type
+ * keeps each store site monomorphic, which matters at a few stores per
+ * simulated cycle) and takes its trace type only in `column`.
  */
 class Columns {
   private chunks: Int32Array[] = []
+  /** Rows the first chunk holds (it starts small and doubles to CHUNK); every later chunk holds CHUNK. */
+  private firstCap = FIRST_ROWS
   count = 0
   /** Whether rows were opened in order of their start cycle (column 0). */
   sorted = true
   private lastStart = 0
   private built = 0
   constructor(private readonly width: number) {}
+  private capOf(i: number): number {
+    return i < CHUNK ? this.firstCap : CHUNK
+  }
   /** A new row starting at cycle `start`; returns its index. */
   push(start: number): number {
     const i = this.count++
-    const at = (i & LOW) * this.width
+    const r = i & LOW
     let chunk = this.chunks[i >>> CHUNK_BITS]
     if (chunk === undefined) {
-      // The first chunk starts small and doubles (a short run, e.g. a sweep point, should not clear a whole chunk); later ones are whole.
+      // A short run (a sweep point) should not clear a whole chunk: the first one starts small.
       chunk = new Int32Array((i === 0 ? FIRST_ROWS : CHUNK) * this.width)
       this.chunks.push(chunk)
-    } else if (at >= chunk.length) {
-      const grown = new Int32Array(Math.min(CHUNK * this.width, chunk.length * 2))
-      grown.set(chunk)
-      this.chunks[i >>> CHUNK_BITS] = chunk = grown
+    } else if (i < CHUNK && r >= this.firstCap) {
+      const cap = this.firstCap
+      const grown = new Int32Array(cap * 2 * this.width)
+      for (let k = 0; k < this.width; k++) grown.set(chunk.subarray(k * cap, k * cap + cap), k * cap * 2)
+      this.chunks[0] = chunk = grown
+      this.firstCap = cap * 2
     }
     if (start < this.lastStart) this.sorted = false
     this.lastStart = start
-    chunk[at] = start
+    chunk[r] = start
     return i
   }
   /** Columns 1 to 5 of row i at once (one chunk lookup): the rest of a row when its span closes. */
   setRest(i: number, a: number, b: number, c: number, d: number, e: number): void {
     const chunk = this.chunks[i >>> CHUNK_BITS] as Int32Array
-    const at = (i & LOW) * this.width
-    chunk[at + 1] = a
-    chunk[at + 2] = b
-    chunk[at + 3] = c
-    chunk[at + 4] = d
-    if (this.width > 5) chunk[at + 5] = e
+    const cap = this.capOf(i)
+    const r = i & LOW
+    chunk[cap + r] = a
+    chunk[2 * cap + r] = b
+    chunk[3 * cap + r] = c
+    chunk[4 * cap + r] = d
+    if (this.width > 5) chunk[5 * cap + r] = e
   }
   set(k: number, i: number, v: number): void {
-    ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width + k] = v
+    ;(this.chunks[i >>> CHUNK_BITS] as Int32Array)[k * this.capOf(i) + (i & LOW)] = v
   }
   get(k: number, i: number): number {
-    return (this.chunks[i >>> CHUNK_BITS] as Int32Array)[(i & LOW) * this.width + k] ?? 0
+    return (this.chunks[i >>> CHUNK_BITS] as Int32Array)[k * this.capOf(i) + (i & LOW)] ?? 0
   }
   /** Column k in row order `idx` (null: as stored), as a `Make`; the chunks go once every column is built. */
   column<T extends Column>(k: number, idx: Uint32Array | null, Make: new (n: number) => T): T {
     const n = this.count
     const out = new Make(n)
-    const w = this.width
     const chunks = this.chunks
     if (idx === null) {
-      // Chunk by chunk: one lookup per chunk, a strided walk inside it.
+      // One block copy per chunk (set converts Int32 to the column's type as an element store would).
       for (let ci = 0, i = 0; i < n; ci++) {
-        const chunk = chunks[ci] as Int32Array
-        const end = Math.min(n, i + CHUNK)
-        for (let at = k; i < end; i++, at += w) out[i] = chunk[at] as number
+        const cap = this.capOf(i)
+        const rows = Math.min(n - i, cap)
+        out.set((chunks[ci] as Int32Array).subarray(k * cap, k * cap + rows), i)
+        i += rows
       }
     } else {
       for (let i = 0; i < idx.length; i++) {
         const j = idx[i] ?? 0
-        out[i] = (chunks[j >>> CHUNK_BITS] as Int32Array)[(j & LOW) * w + k] ?? 0
+        out[i] = (chunks[j >>> CHUNK_BITS] as Int32Array)[k * this.capOf(j) + (j & LOW)] ?? 0
       }
     }
-    if (++this.built === w) this.chunks = []
+    if (++this.built === this.width) this.chunks = []
     return out
   }
   /** Row order by start cycle, stable (a counting sort: starts are cycle numbers); null when already in order. */
@@ -154,6 +163,8 @@ export class SpanRecorder {
   private useWeight = new Int32Array(0)
   /** Stall cycles by reason index. */
   readonly stallTotals = new Float64Array(STALL_REASONS.length)
+  /** Whether closeTotals ran: the stall spans are closed and cut, nothing more is recorded. */
+  private totalsClosed = false
 
   constructor(lanes: number, recordUsage: boolean) {
     this.recordUsage = recordUsage
@@ -311,13 +322,24 @@ export class SpanRecorder {
   }
 
   /**
+   * Closes the open stall spans and cuts them at `cycles`, so that
+   * `stallTotals` are final: all a run that keeps only its figures needs (a
+   * sweep point). `finish` calls it first.
+   */
+  closeTotals(cycles: number): void {
+    if (this.totalsClosed) return
+    this.totalsClosed = true
+    for (let l = 0; l < this.sReason.length; l++) if ((this.sReason[l] ?? -1) >= 0) this.closeStall(l)
+    this.clipStalls(cycles)
+  }
+
+  /**
    * Closes the open spans and returns them sorted by start cycle, stalls cut
    * at `cycles`: a run can step past its last busy cycle (a memory port held
    * for an empty access), and a stall there would lie outside the run.
    */
   finish(cycles: number): { stalls: StallSpans; usage: UsageSpans } {
-    for (let l = 0; l < this.sReason.length; l++) if ((this.sReason[l] ?? -1) >= 0) this.closeStall(l)
-    this.clipStalls(cycles)
+    this.closeTotals(cycles)
     if (this.recordUsage) for (let r = 0; r < this.resources.length; r++) if ((this.uInst[r] ?? -1) >= 0) this.closeUse(r)
     const s = this.stall
     const so = s.order()

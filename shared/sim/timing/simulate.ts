@@ -7,8 +7,8 @@
  *   const { trace, error } = simulate(execute(program).stream, parseMachine({ lanes: 4 }))
  */
 import type { Machine } from '../../schemas/machine'
-import type { DynamicStream } from '../exec/stream'
-import type { InstructionTrace, SimulateOptions, TimingError, TimingResult } from '../trace/types'
+import type { DynamicStream, VectorOp } from '../exec/stream'
+import type { FpWidth, InstructionTrace, Metrics, SimulateOptions, TimingError, TimingResult } from '../trace/types'
 import { STALL_REASONS, emptyStallCounts } from '../trace/types'
 import type { TimingState } from './engine'
 import { STALL_COUNT, createTimingState, step } from './engine'
@@ -19,7 +19,7 @@ import { computeMetrics } from './metrics'
 import { SpanRecorder } from './recorder'
 import { RegFile } from './regfile'
 import { Renamer } from './rename'
-import { replicate } from './symmetry'
+import { replicate, spreadTotals } from './symmetry'
 
 export type { TimingState } from './engine'
 export { createTimingState, step } from './engine'
@@ -43,22 +43,69 @@ export function advance(s: TimingState, cycles: number): boolean {
   return true
 }
 
+/** The run's error: its own, or why a driver stopped it before the end (`stopped`, e.g. cancelled). */
+function errorOf(s: TimingState, stopped?: TimingError): TimingError | undefined {
+  return s.error ?? (s.done ? undefined : (stopped ?? { code: 'cancelled', message: 'the run was stopped before it finished' }))
+}
+
+/** Flops of an op that completed (config ops have none); 0 for one that did not. */
+function doneFlops(s: TimingState, op: VectorOp, i: number): number {
+  return (s.completeAt[i] ?? -1) >= 0 && !op.isConfig ? opFlops(op) : 0
+}
+
+/** Adds an op's flops to its width's sum: only FP work has flops, and its SEW is 16, 32 or 64. */
+function addFlops(bySew: Record<FpWidth, number>, op: VectorOp, f: number): void {
+  const width = String(op.sew)
+  if (f > 0 && (width === '16' || width === '32' || width === '64')) bySew[width] += f
+}
+
+/**
+ * The context the results describe, with the recorder's totals final: the
+ * timed one, or for a planned run (one lane timed per class of alike lanes,
+ * symmetry.ts) a context of the caller's machine with the totals spread over
+ * each class, and the busy cycles of every lane.
+ */
+function resultContext(s: TimingState, cycles: number): { full: Ctx; laneBusy: Float64Array } {
+  s.ctx.rec.closeTotals(cycles)
+  const plan = s.plan
+  if (!plan) return { full: s.ctx, laneBusy: s.laneBusy }
+  const d = derive(s.sourceMachine)
+  const full = new Ctx(d, new RegFile(d, s.sourceMachine.physRegs), new Renamer(s.sourceMachine.physRegs), new SpanRecorder(d.lanes, false), new Int32Array(0))
+  spreadTotals(s.ctx, full, plan)
+  const laneBusy = new Float64Array(d.lanes)
+  for (let j = 0; j < plan.first.length; j++) {
+    const f = plan.first[j] ?? 0
+    laneBusy.fill(s.laneBusy[j] ?? 0, f, f + (plan.size[j] ?? 0))
+  }
+  return { full, laneBusy }
+}
+
+/**
+ * The run's metrics alone, without its trace (per-instruction records, spans,
+ * phase times): what a sweep point keeps. They equal `finish(s).trace.metrics`.
+ */
+export function finishMetrics(s: TimingState, stopped?: TimingError): { metrics: Metrics; error?: TimingError } {
+  const cycles = s.lastBusy + 1
+  const flopsBySew = { '16': 0, '32': 0, '64': 0 }
+  const ops = s.source.ops
+  for (let i = 0; i < ops.length; i++) addFlops(flopsBySew, ops[i] as VectorOp, doneFlops(s, ops[i] as VectorOp, i))
+  const { full, laneBusy } = resultContext(s, cycles)
+  const error = errorOf(s, stopped)
+  return { metrics: computeMetrics(full, cycles, flopsBySew, laneBusy), ...(error ? { error } : {}) }
+}
+
 /** Builds the (possibly partial) trace. `stopped` records why a driver ended the run early (e.g. cancelled). */
 export function finish(s: TimingState, stopped?: TimingError): TimingResult {
-  const ctx = s.ctx
   const cycles = s.lastBusy + 1
   const ops = s.source.ops
   const flopsBySew = { '16': 0, '32': 0, '64': 0 }
   const instructions: InstructionTrace[] = ops.map((op, i) => {
-    const done = (s.completeAt[i] ?? -1) >= 0
-    const f = done && !op.isConfig ? opFlops(op) : 0
-    // Only FP work has flops; its SEW is 16, 32 or 64.
-    const width = String(op.sew)
-    if (f > 0 && (width === '16' || width === '32' || width === '64')) flopsBySew[width] += f
+    const f = doneFlops(s, op, i)
+    addFlops(flopsBySew, op, f)
     const stalls = emptyStallCounts()
     STALL_REASONS.forEach((r, j) => (stalls[r] = s.opStalls[i * STALL_COUNT + j] ?? 0))
     const dispatch = (s.dispatchAt[i] ?? -1) >= 0 ? (s.dispatchAt[i] ?? 0) : null
-    const complete = done ? (s.completeAt[i] ?? 0) : null
+    const complete = (s.completeAt[i] ?? -1) >= 0 ? (s.completeAt[i] ?? 0) : null
     return {
       index: op.seq,
       staticIndex: op.staticIndex,
@@ -78,24 +125,15 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
       stalls,
     }
   })
-  const error = s.error ?? (s.done ? undefined : (stopped ?? { code: 'cancelled', message: 'the run was stopped before it finished' }))
-  let spans = ctx.rec.finish(cycles)
-  let laneTimes = ctx.laneTimes
-  let full = ctx
-  let laneBusy = s.laneBusy
-  const plan = s.plan
-  if (plan) {
+  const error = errorOf(s, stopped)
+  const { full, laneBusy } = resultContext(s, cycles)
+  let spans = s.ctx.rec.finish(cycles)
+  let laneTimes = s.ctx.laneTimes
+  if (s.plan) {
     // One lane was timed for each class of alike lanes: spread its results over the class (symmetry.ts).
-    const d = derive(s.sourceMachine)
-    full = new Ctx(d, new RegFile(d, s.sourceMachine.physRegs), new Renamer(s.sourceMachine.physRegs), new SpanRecorder(d.lanes, false), new Int32Array(0))
-    const r = replicate(ctx, full, spans, plan)
+    const r = replicate(s.ctx, full, spans, s.plan)
     spans = r
     laneTimes = r.laneTimes
-    laneBusy = new Float64Array(d.lanes)
-    for (let j = 0; j < plan.first.length; j++) {
-      const f = plan.first[j] ?? 0
-      laneBusy.fill(s.laneBusy[j] ?? 0, f, f + (plan.size[j] ?? 0))
-    }
   }
   return {
     trace: {

@@ -129,18 +129,11 @@ function resourceMap(one: Ctx, full: Ctx): { base: Int32Array; lane: Int32Array;
 }
 
 /**
- * Spreads the timed run's totals over the full context and returns its spans
- * and phase times for every lane of each class. Spans stay sorted by start.
- * Stall totals and bus amounts were weighted by class size when recorded.
+ * Spreads the timed run's totals (resource uses, stall cycles) over the full
+ * context: all its metrics need. Stall totals and bus amounts were weighted by
+ * class size when recorded.
  */
-export function replicate(
-  one: Ctx,
-  full: Ctx,
-  spans: { stalls: StallSpans; usage: UsageSpans },
-  plan: Pick<LanePlan, 'first' | 'size'>,
-): { stalls: StallSpans; usage: UsageSpans; laneTimes: Int32Array } {
-  const L = full.L
-  const K = one.L
+export function spreadTotals(one: Ctx, full: Ctx, plan: Pick<LanePlan, 'first' | 'size'>): void {
   const { first, size } = plan
   const { base, lane, perLane } = resourceMap(one, full)
   const tot = one.rec.totals
@@ -153,6 +146,19 @@ export function replicate(
     }
   }
   full.rec.stallTotals.set(one.rec.stallTotals)
+}
+
+/** The timed run's spans and phase times for every lane of each class (after spreadTotals). Spans stay sorted by start. */
+export function replicate(
+  one: Ctx,
+  full: Ctx,
+  spans: { stalls: StallSpans; usage: UsageSpans },
+  plan: Pick<LanePlan, 'first' | 'size'>,
+): { stalls: StallSpans; usage: UsageSpans; laneTimes: Int32Array } {
+  const L = full.L
+  const K = one.L
+  const { first, size } = plan
+  const { base, lane, perLane } = resourceMap(one, full)
   const s = spans.stalls
   let sn = 0
   for (let i = 0; i < s.count; i++) sn += size[s.lane[i] ?? 0] ?? 0
