@@ -9,7 +9,9 @@
  * when it opens are then warm, as when a user fills the form by hand). Each
  * sweep also runs, just after, on a page whose navigator reports one core
  * (one Worker): the single-thread rate of the same run in the same browser,
- * for the pool's parallel efficiency. Not a timed test: it prints the figures.
+ * for the pool's parallel efficiency. Each sweep runs ROUNDS times on each
+ * page, in alternation; the medians close the output. Not a timed test: it
+ * prints the figures.
  */
 import { spawn } from 'node:child_process'
 import { loadavg } from 'node:os'
@@ -21,6 +23,9 @@ import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
 import { longStream } from './programs'
 
 const port = Number(process.env.CHIMELINE_E2E_PORT ?? 3190)
+/** Runs of each sweep on each page: the machine's load moves within seconds, so one run says little. */
+const ROUNDS = 3
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] as number
 const base = `http://127.0.0.1:${port}`
 /** The long stream; its vector length is the symbol AVL (`.equ AVL, 256` in examples/long-stream.s). */
 const LONG_STREAM_AVL = longStream()
@@ -84,16 +89,27 @@ try {
   const cores = await pool.evaluate(() => navigator.hardwareConcurrency)
   if ((await single.evaluate(() => navigator.hardwareConcurrency)) !== 1) throw new Error('the one-Worker page reports more than one core')
   const loadBefore = loadavg()[0] ?? 0
-  console.log(`| sweep | Workers | wall s | first point ms | points/s | wall s on 1 Worker | efficiency |`)
-  console.log(`| --- | ---: | ---: | ---: | ---: | ---: | ---: |`)
+  console.log(`| sweep | round | Workers | wall s | first point ms | points/s | wall s on 1 Worker | efficiency |`)
+  console.log(`| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: |`)
+  const summary: string[] = []
   for (const s of SWEEPS) {
     const workers = Math.min(cores, s.points)
-    const all = await runSweep(pool, s)
-    const one = await runSweep(single, s)
-    // The same grid, the same lane-cycles: per-Worker rate over the one Worker's rate is its wall time over theirs, per Worker.
-    const efficiency = one.total / (workers * all.total)
-    console.log(`| ${s.name} | ${workers} | ${(all.total / 1000).toFixed(2)} | ${all.first.toFixed(0)} | ${((s.points * 1000) / all.total).toFixed(1)} | ${(one.total / 1000).toFixed(2)} | ${efficiency.toFixed(2)} |`)
+    const walls: number[] = []
+    const firsts: number[] = []
+    const efficiencies: number[] = []
+    for (let round = 1; round <= ROUNDS; round++) {
+      const all = await runSweep(pool, s)
+      const one = await runSweep(single, s)
+      // The same grid, the same lane-cycles: per-Worker rate over the one Worker's rate is its wall time over theirs, per Worker.
+      const efficiency = one.total / (workers * all.total)
+      walls.push(all.total)
+      firsts.push(all.first)
+      efficiencies.push(efficiency)
+      console.log(`| ${s.name} | ${round} | ${workers} | ${(all.total / 1000).toFixed(2)} | ${all.first.toFixed(0)} | ${((s.points * 1000) / all.total).toFixed(1)} | ${(one.total / 1000).toFixed(2)} | ${efficiency.toFixed(2)} |`)
+    }
+    summary.push(`| ${s.name} | ${(median(walls) / 1000).toFixed(2)} | ${median(firsts).toFixed(0)} | ${median(efficiencies).toFixed(2)} (${Math.min(...efficiencies).toFixed(2)} to ${Math.max(...efficiencies).toFixed(2)}) |`)
   }
+  console.log(`\nMedians of the ${ROUNDS} rounds:\n\n| sweep | wall s | first point ms | efficiency (range) |\n| --- | ---: | ---: | --- |\n${summary.join('\n')}`)
   console.log(`\nload average (1 min): ${loadBefore.toFixed(2)} before, ${(loadavg()[0] ?? 0).toFixed(2)} after`)
   await browser.close()
 } finally {

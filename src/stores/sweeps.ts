@@ -24,21 +24,26 @@ export type SweepStatus = 'idle' | 'running' | 'paused' | 'done' | 'cancelled' |
 
 interface PoolWorkers {
   runners: PointRunnerPort[]
+  /** Ends the Workers' warm-up after the point each is running (a sweep is about to start). */
+  stopWarmUp(): void
   close(): void
 }
 
-const browserWorkers = (count: number): PoolWorkers => {
+/**
+ * `count` sweep Workers. With `warmUp`, each runs the warm-up sweep of
+ * sweepService.ts a point a call while the page waits for the user, until
+ * its steps end or `stopWarmUp`: a sweep that starts waits at most for the
+ * warm-up point under way, not for the whole warm-up.
+ */
+function makeWorkers(count: number, warmUp: boolean): PoolWorkers {
   const workers = Array.from({ length: count }, (_, i) => new Worker(new URL('../workers/sweep.worker.ts', import.meta.url), { type: 'module', name: `chimeline-sweep-${i}` }))
   const runners = workers.map((w) => Comlink.wrap<SweepService>(w))
-  // Each Worker compiles the simulator on a small sweep of its own while the page waits for the user.
-  for (const r of runners) void r.warm()
-  return { runners, close: () => workers.forEach((w) => w.terminate()) }
-}
-
-let makeWorkers: (count: number) => PoolWorkers = browserWorkers
-/** Lets tests run the pool on in-process services. */
-export function configureSweepWorkers(factory: (count: number) => PoolWorkers): void {
-  makeWorkers = factory
+  let warming = warmUp
+  const warm = async (r: Comlink.Remote<SweepService>) => {
+    for (let step = 0; warming && (await r.warm(step)); step++);
+  }
+  for (const r of runners) void warm(r).catch(() => undefined) // a Worker closed during its warm-up
+  return { runners, stopWarmUp: () => (warming = false), close: () => workers.forEach((w) => w.terminate()) }
 }
 
 /** Workers a sweep gets: one per core the browser reports, no more than its points. */
@@ -137,7 +142,8 @@ export const useSweepsStore = defineStore('sweeps', () => {
     totalMs.value = null
     status.value = 'running'
     const t0 = performance.now()
-    const workers = warm ?? makeWorkers(poolSize(planned))
+    const workers = warm ?? makeWorkers(poolSize(planned), false)
+    workers.stopWarmUp()
     let latest: SweepProgress | null = null
     let timer: ReturnType<typeof setTimeout> | null = null
     const flush = () => {
@@ -174,7 +180,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
   // Workers started ahead of a run while the Sweeps page is open, so that the first point does not wait for a Worker to load the simulator.
   let warm: PoolWorkers | null = null
   function warmUp(): void {
-    warm ??= makeWorkers(poolSize(Number.MAX_SAFE_INTEGER))
+    warm ??= makeWorkers(poolSize(Number.MAX_SAFE_INTEGER), true)
   }
   /** Lets the page's Workers go (a run under way finishes on them first). */
   function releaseWorkers(): void {

@@ -8,7 +8,7 @@ import { describe, expect, it } from 'vitest'
 import { sweepDefinitionSchema, type SweepPointResult } from '../../shared/schemas/sweep'
 import { resolveSweep } from '../../shared/sweep/resolve'
 import { runSweep } from '../../shared/sweep/runSweep'
-import { createSweepService } from '../../src/workers/sweepService'
+import { WARM_UP_STEPS, createSweepService } from '../../src/workers/sweepService'
 import { loadPool, runPool, type PointBatch, type PointRunnerPort } from '../../src/workers/sweepPool'
 import { FMA_CURVE } from './programs'
 
@@ -35,8 +35,11 @@ describe('sweep Worker pool', () => {
     expect(got.sort((a, b) => a.index - b.index)).toEqual(runSweep(r.sweep).points)
   })
 
-  it("a Worker's warm-up sweep resolves and runs (it would otherwise fail silently in the page)", () => {
-    expect(() => createSweepService().warm()).not.toThrow()
+  it("a Worker's warm-up sweep resolves and runs every step, then says it is done (it would otherwise fail silently in the page)", () => {
+    const service = createSweepService()
+    const more: boolean[] = []
+    for (let step = 0; step < WARM_UP_STEPS; step++) more.push(service.warm(step))
+    expect(more).toEqual([...Array<boolean>(WARM_UP_STEPS - 1).fill(true), false])
   })
 
   it('answers a definition with bad values by its issues', async () => {
