@@ -7,7 +7,7 @@ import { createRequire } from 'node:module'
 import { pathToFileURL } from 'node:url'
 import { Piscina } from 'piscina'
 import type { SweepDefinition, SweepPointResult } from '../../shared/schemas/sweep'
-import { chunkPrograms, programGroups } from '../../shared/sweep/order'
+import { chunkPrograms, largestFirst, programGroups } from '../../shared/sweep/order'
 import type { ResolvedSweep } from '../../shared/sweep/resolve'
 import { plannedPoints, pointsLimitMessage, timeLimitMessage } from '../../shared/sweep/runSweep'
 import type { SweepChunkTask } from './sweepWorker'
@@ -27,11 +27,12 @@ export function startSweepThreads(workers: number): Piscina<SweepChunkTask, Swee
   })
 }
 
-/** Runs a sweep on a started pool of `workers` threads: its points in chunks, all queued at once, so that a free thread takes the next. */
+/** Runs a sweep on a started pool of `workers` threads: its points in chunks, all queued at once (largest first), so that a free thread takes the next. */
 export async function runOnPool(pool: Piscina<SweepChunkTask, SweepPointResult[]>, workers: number, definition: SweepDefinition, sweep: ResolvedSweep): Promise<{ points: SweepPointResult[]; stopped: string | null }> {
   const planned = plannedPoints(sweep)
   const deadline = Date.now() + sweep.limits.timeLimitMs
-  const parts = await Promise.all(chunkPrograms(programGroups(sweep, planned), threadChunkSize(planned, workers)).map((indexes) => pool.run({ definition, indexes, deadline })))
+  const chunks = largestFirst(chunkPrograms(programGroups(sweep, planned), threadChunkSize(planned, workers)))
+  const parts = await Promise.all(chunks.map((indexes) => pool.run({ definition, indexes, deadline })))
   const points = parts.flat().sort((a, b) => a.index - b.index)
   const stopped = points.length < planned ? timeLimitMessage(sweep, points.length) : pointsLimitMessage(sweep)
   return { points, stopped }

@@ -44,7 +44,12 @@ export async function startBoss(databaseUrl: string): Promise<PgBoss> {
 }
 
 export interface SweepQueue {
-  /** Queues the chunks, one job each (shared/sweep/order.ts chunkPrograms: whole programs, so that a worker prepares each once). */
+  /**
+   * Queues the chunks, one job each (shared/sweep/order.ts chunkPrograms:
+   * whole programs, so that a worker prepares each once), to be taken in the
+   * order given: jobs inserted together share their creation time and take
+   * random ids, so the order is set by their priorities.
+   */
   enqueue(sweepId: string, chunks: readonly number[][]): Promise<void>
   close(): Promise<void>
 }
@@ -54,7 +59,7 @@ export function createSweepQueue(databaseUrl: string): SweepQueue {
   return {
     async enqueue(sweepId, chunks) {
       const b = await (boss ??= startBoss(databaseUrl))
-      await b.insert(chunks.map((indexes) => ({ name: SWEEP_QUEUE, data: { sweepId, indexes } })))
+      await b.insert(chunks.map((indexes, k) => ({ name: SWEEP_QUEUE, data: { sweepId, indexes }, priority: chunks.length - k })))
       await b.getDb().executeSql(`NOTIFY ${SWEEP_QUEUED_CHANNEL}`, [])
     },
     async close() {

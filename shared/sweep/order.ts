@@ -60,3 +60,17 @@ export function chunkPrograms(groups: readonly number[][], size: number): number
   if (open.length > 0) out.push(open)
   return out
 }
+
+/**
+ * The chunks of chunkPrograms in the order runners take them: the last
+ * first. A sweep's values are written in increasing order and its cost
+ * usually grows with them (a vector length, a program's size: a heavy-grid
+ * point at AVL 256 takes about ten times one at AVL 8), so the most
+ * expensive chunks go first and the cheapest are left for the end, where a
+ * runner that finished would otherwise wait for one that took an expensive
+ * last chunk: longest processing time first, the classic list-scheduling
+ * rule (Graham, 1969). Results stay keyed by index.
+ */
+export function largestFirst(chunks: readonly number[][]): number[][] {
+  return [...chunks].reverse()
+}

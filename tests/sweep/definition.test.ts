@@ -4,7 +4,7 @@ import { parseSpec } from '../../shared/sweep/spec'
 import { pointValues, resolveSweep } from '../../shared/sweep/resolve'
 import { symbolDefinitions, withSymbols } from '../../shared/sweep/symbols'
 import { sweepCsvHeader } from '../../shared/sweep/csv'
-import { chunkPrograms, programGroups, programOrder } from '../../shared/sweep/order'
+import { chunkPrograms, largestFirst, programGroups, programOrder } from '../../shared/sweep/order'
 import { threadChunkSize } from '../../server/cli/sweepThreads'
 import { serverChunkSize } from '../../server/services/sweeps-queue'
 import { runSweep } from '../../shared/sweep/runSweep'
@@ -163,6 +163,8 @@ describe('program order (shared/sweep/order.ts)', () => {
     const one = chunkPrograms([Array.from({ length: 100 }, (_, i) => i)], 2)
     expect(one).toHaveLength(50)
     expect(one.flat()).toEqual(Array.from({ length: 100 }, (_, i) => i))
+    // Runners take the last chunks (the largest vector lengths of an increasing sweep) first.
+    expect(largestFirst(chunkPrograms(groups, 2)).slice(0, 2)).toEqual([groups[31], groups[30]])
     // The server's chunk size: a 16th of the sweep, 1 to 16 points.
     expect([serverChunkSize(10), serverChunkSize(100), serverChunkSize(512), serverChunkSize(200_000)]).toEqual([1, 7, 16, 16])
   })

@@ -61,6 +61,12 @@ describe('server sweeps', () => {
     jobs.forEach((j, k) => j.data.indexes.forEach((i) => chunkOfAvl.set(i % 20, (chunkOfAvl.get(i % 20) ?? new Set()).add(k))))
     expect(jobs.flatMap((j) => j.data.indexes).sort((a, b) => a - b)).toEqual(Array.from({ length: 40 }, (_, i) => i))
     expect([...chunkOfAvl.values()].every((chunks) => chunks.size === 1)).toBe(true)
+    // Workers take the most expensive chunks first (largestFirst: the last AVL first), in pg-boss's order of taking jobs
+    // (priority, higher first, then creation time; jobs inserted together share their creation time and have random ids).
+    const taken = await runtime.ctx.sequelize.query<{ data: { indexes: number[] } }>("SELECT data FROM pgboss.job WHERE name = 'sweep-chunks' AND data->>'sweepId' = :id ORDER BY priority DESC, created_on, id", { replacements: { id }, type: QueryTypes.SELECT })
+    expect(taken[0]?.data.indexes).toContain(19)
+    expect(taken.at(-1)?.data.indexes).toContain(0)
+    expect(taken.map((j) => Math.max(...j.data.indexes.map((i) => i % 20)))).toEqual([...taken.map((j) => Math.max(...j.data.indexes.map((i) => i % 20)))].sort((a, b) => b - a))
     for (let i = 0; i < 2; i++) workers.push(await startSweepWorker({ databaseUrl: runtime.ctx.config.databaseUrl, sequelize: runtime.ctx.sequelize, logger: runtime.ctx.logger }))
     let sweep: { status: string; points: SweepPointResult[] } = { status: 'queued', points: [] }
     for (let i = 0; i < 240 && sweep.status !== 'done'; i++) {
