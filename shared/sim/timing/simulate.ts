@@ -82,15 +82,16 @@ function resultContext(s: TimingState, cycles: number): { full: Ctx; laneBusy: F
 
 /**
  * The run's metrics alone, without its trace (per-instruction records, spans,
- * phase times): what a sweep point keeps. They equal `finish(s).trace.metrics`.
+ * phase times) of a run stepped to its end: what a sweep point keeps. They
+ * equal `finish(s).trace.metrics`.
  */
-export function finishMetrics(s: TimingState, stopped?: TimingError): { metrics: Metrics; error?: TimingError } {
+export function finishMetrics(s: TimingState): { metrics: Metrics; error?: TimingError } {
   const cycles = s.lastBusy + 1
   const flopsBySew = { '16': 0, '32': 0, '64': 0 }
   const ops = s.source.ops
   for (let i = 0; i < ops.length; i++) addFlops(flopsBySew, ops[i] as VectorOp, doneFlops(s, ops[i] as VectorOp, i))
   const { full, laneBusy } = resultContext(s, cycles)
-  const error = errorOf(s, stopped)
+  const error = errorOf(s)
   return { metrics: computeMetrics(full, cycles, flopsBySew, laneBusy), ...(error ? { error } : {}) }
 }
 
