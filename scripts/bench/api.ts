@@ -19,6 +19,7 @@ import { createScenario, saveScenario } from '../../server/services/scenarios'
 import { defaultMachine } from '../../shared/schemas/machine'
 import { SCENARIO_PROGRAM_MAX_LENGTH } from '../../shared/schemas/scenario'
 import { prepareCluster } from '../db'
+import { median } from './median'
 
 const roundsArg = process.argv.indexOf('--rounds')
 const rounds = roundsArg >= 0 ? Number(process.argv[roundsArg + 1]) : 3
@@ -38,7 +39,6 @@ function program(register: string, lines: number, chars: number): string {
   return text
 }
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] as number
 const round1 = (x: number) => Math.round(x * 10) / 10
 
 await prepareCluster(testCluster)

@@ -24,13 +24,13 @@ import { prepareRun, timePrepared, type PreparedRun } from '../../shared/sim/run
 import { simulate } from '../../shared/sim/timing/simulate'
 import { bareLoop } from './bare-loop'
 import { bankBound, longStream, longStreamAt, memoryBound, reductionHeavy } from './programs'
+import { median } from './median'
 
 const RUNS = 7
 const WARMUP = 2
 /** Simulated cycles of one yardstick run: about as long as a workload's run. */
 const BARE_CYCLES = 100_000
 const TARGET_RATIO = 0.5
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!
 
 /** Median milliseconds of `fn` over RUNS runs after WARMUP. */
 function timeIt(fn: () => void, runs = RUNS): number {

@@ -33,6 +33,7 @@ import { prepareCluster } from '../db'
 import { startWorkerProcess } from '../worker-process'
 import { heavyGrid } from './programs'
 import { copyOf, laneCycles, resolveOrThrow } from './sweep-helpers'
+import { median } from './median'
 
 const TITLE = 'bench:sweep:server'
 /** Timed runs per worker count, each right after its own single-thread yardstick. */
@@ -99,7 +100,7 @@ try {
       const runner = `${workers} worker process${workers > 1 ? 'es' : ''}`
       console.log(`| ${runner} | ${round} | ${fmt(single.s)} | ${fmt(r.wallMs / 1000)} | ${fmt(r.workingMs / 1000)} | ${fmt(perWorker(r.workingMs) / 1e6)} M | ${fmt(perWorker(r.wallMs) / single.rate)} | ${fmt(perWorker(r.workingMs) / single.rate)} |`)
     }
-    medians.push(`${workers} worker process${workers > 1 ? 'es' : ''}: median working efficiency ${fmt([...ratios].sort((a, b) => a - b)[Math.floor(ROUNDS / 2)] ?? 0)}`)
+    medians.push(`${workers} worker process${workers > 1 ? 'es' : ''}: median working efficiency ${fmt(median(ratios))}`)
   }
   console.log(`\n${medians.join('\n')}`)
   console.log(`\nload average (1 min): ${fmt(loadBefore)} before, ${fmt(loadavg()[0] ?? 0)} after`)

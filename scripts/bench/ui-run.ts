@@ -18,6 +18,7 @@ import { spawn } from 'node:child_process'
 import { launchChromium } from './browser'
 import { build } from 'vite'
 import { DEMO, DEMO_PASSWORD } from '../../e2e/helpers/auth'
+import { median } from './median'
 
 const arg = (name: string, fallback: number) => {
   const i = process.argv.indexOf(`--${name}`)
@@ -66,11 +67,6 @@ async function waitForHealth(ms: number) {
     await new Promise((r) => setTimeout(r, 300))
   }
   throw new Error(`the test server did not answer on ${base} within ${ms} ms`)
-}
-
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b)
-  return s[Math.floor(s.length / 2)] ?? NaN
 }
 
 await build({ logLevel: 'warn' })

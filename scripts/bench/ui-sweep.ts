@@ -21,11 +21,11 @@ import { build } from 'vite'
 import { DEMO, DEMO_PASSWORD } from '../../e2e/helpers/auth'
 import { FMA_CURVE, REDUCTION_CURVE } from '../../tests/sweep/programs'
 import { longStream } from './programs'
+import { median } from './median'
 
 const port = Number(process.env.CHIMELINE_E2E_PORT ?? 3190)
 /** Runs of each sweep on each page: the machine's load moves within seconds, so one run says little. */
 const ROUNDS = 3
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] as number
 const base = `http://127.0.0.1:${port}`
 /** The long stream; its vector length is the symbol AVL (`.equ AVL, 256` in examples/long-stream.s). */
 const LONG_STREAM_AVL = longStream()

@@ -7,7 +7,7 @@ import { createRequire } from 'node:module'
 import { pathToFileURL } from 'node:url'
 import { Piscina } from 'piscina'
 import type { SweepDefinition, SweepPointResult } from '../../shared/schemas/sweep'
-import { chunkPrograms, largestFirst, programGroups } from '../../shared/sweep/order'
+import { sweepChunks } from '../../shared/sweep/order'
 import type { ResolvedSweep } from '../../shared/sweep/resolve'
 import { plannedPoints, pointsLimitMessage, timeLimitMessage } from '../../shared/sweep/runSweep'
 import type { SweepChunkTask } from './sweepWorker'
@@ -31,8 +31,7 @@ export function startSweepThreads(workers: number): Piscina<SweepChunkTask, Swee
 export async function runOnPool(pool: Piscina<SweepChunkTask, SweepPointResult[]>, workers: number, definition: SweepDefinition, sweep: ResolvedSweep): Promise<{ points: SweepPointResult[]; stopped: string | null }> {
   const planned = plannedPoints(sweep)
   const deadline = Date.now() + sweep.limits.timeLimitMs
-  const chunks = largestFirst(chunkPrograms(programGroups(sweep, planned), threadChunkSize(planned, workers)))
-  const parts = await Promise.all(chunks.map((indexes) => pool.run({ definition, indexes, deadline })))
+  const parts = await Promise.all(sweepChunks(sweep, planned, threadChunkSize(planned, workers)).map((indexes) => pool.run({ definition, indexes, deadline })))
   const points = parts.flat().sort((a, b) => a.index - b.index)
   const stopped = points.length < planned ? timeLimitMessage(sweep, points.length) : pointsLimitMessage(sweep)
   return { points, stopped }

@@ -14,7 +14,7 @@ import {
   type SweepSummary,
 } from '../../shared/schemas/sweep'
 import { pointValues, resolveSweep } from '../../shared/sweep/resolve'
-import { chunkPrograms, largestFirst, programGroups } from '../../shared/sweep/order'
+import { sweepChunks } from '../../shared/sweep/order'
 import { plannedPoints } from '../../shared/sweep/runSweep'
 import type { AppContext } from '../context'
 import { ApiError, errors } from '../http/errors'
@@ -101,7 +101,7 @@ export async function createSweep(ctx: AppContext, user: User, workspaceId: stri
     throw new ApiError(429, 'rate_limited', `This sweep's ${planned} points would take the workspace past its ${SWEEP_SERVER_POINTS_PER_DAY} server points a day (${today} used in the last 24 hours)`, undefined, 3600)
   }
   const s = await Sweep.create({ workspaceId, scenarioId: body.scenarioId, versionId, title: body.title, definition: body.definition, runner: 'server', status: 'queued', planned, message: null, createdById: user.id })
-  await ctx.sweeps.enqueue(s.id, largestFirst(chunkPrograms(programGroups(resolved.sweep, planned), serverChunkSize(planned))))
+  await ctx.sweeps.enqueue(s.id, sweepChunks(resolved.sweep, planned, serverChunkSize(planned)))
   return summary(s, 0, await versionNumbers([versionId]))
 }
 

@@ -28,7 +28,7 @@ import { isValidVlen } from './exec/vtype'
 import { registerGroupsOf, type RegisterGroups } from './registerGroups'
 import { machineReductionOrder } from './timing/reduction-order'
 import { advance, createTimingState, finish, finishMetrics } from './timing/simulate'
-import type { Metrics, SimulateOptions, TimingTrace } from './trace/types'
+import type { Metrics, SimulateOptions, TimingError, TimingTrace } from './trace/types'
 
 export type RunStage = 'machine' | 'assemble' | 'execute' | 'simulate'
 
@@ -189,6 +189,9 @@ export function prepareRun(input: { program: string | Program }, options: Prepar
   return { ok: true, prepared }
 }
 
+/** A timing run's error as a stage error of the pipeline. */
+const simulateError = (e: TimingError): RunError => ({ stage: 'simulate', code: e.code, message: e.message })
+
 /** The machine to time a preparation on: valid, and of the preparation's VLEN. */
 function checkPreparedMachine(prepared: PreparedRun, machineInput: unknown): { ok: true; machine: Machine } | { ok: false; error: RunError } {
   const checked = checkMachine(machineInput)
@@ -211,7 +214,7 @@ export function* timePreparedSteps(prepared: PreparedRun, machineInput: unknown,
   const batch = options.batchCycles ?? DEFAULT_BATCH_CYCLES
   while (advance(state, batch)) yield { stage: 'simulate', cycle: state.cycle, dispatched: state.opIdx, total }
   const { trace, error } = finish(state)
-  if (error) return { ok: false, error: { stage: 'simulate', code: error.code, message: error.message }, trace, registers }
+  if (error) return { ok: false, error: simulateError(error), trace, registers }
   return { ok: true, machine, program, functional, trace, registers }
 }
 
@@ -234,7 +237,7 @@ export function timePreparedMetrics(prepared: PreparedRun, machineInput: unknown
   const state = createTimingState(prepared.stream, checked.machine, options)
   while (advance(state, DEFAULT_BATCH_CYCLES));
   const { metrics, error } = finishMetrics(state)
-  if (error) return { ok: false, error: { stage: 'simulate', code: error.code, message: error.message } }
+  if (error) return { ok: false, error: simulateError(error) }
   return { ok: true, metrics }
 }
 

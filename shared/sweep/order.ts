@@ -74,3 +74,8 @@ export function chunkPrograms(groups: readonly number[][], size: number): number
 export function largestFirst(chunks: readonly number[][]): number[][] {
   return [...chunks].reverse()
 }
+
+/** A sweep's points as runners take them: chunks of about `size` points made of whole programs, largest first. */
+export function sweepChunks(sweep: ResolvedSweep, planned: number, size: number): number[][] {
+  return largestFirst(chunkPrograms(programGroups(sweep, planned), size))
+}
