@@ -12,8 +12,9 @@
  * every lane its k-th element in the same cycle. Such a run is timed on a
  * machine of one lane per class (the same words per register, an op's vl
  * giving each timed lane its class's elements, buses K/L as wide) and the
- * result replicated to every lane of each class: phase times, stalls, usage
- * spans of lane resources, totals. The timed lanes carry their class's size
+ * result replicated to every lane of each class: phase times, stalls,
+ * totals; a usage row of a lane resource stands for the class's lanes
+ * (UsageSpans.copies) instead of being copied. The timed lanes carry their class's size
  * as a weight wherever the run counts lanes (stall totals and per-instruction
  * stalls, the span limit, bus amounts). With several memory ports, accesses
  * share a bus cycle and split it by elements, so there every memory access
@@ -148,7 +149,11 @@ export function spreadTotals(one: Ctx, full: Ctx, plan: Pick<LanePlan, 'first' |
   full.rec.stallTotals.set(one.rec.stallTotals)
 }
 
-/** The timed run's spans and phase times for every lane of each class (after spreadTotals). Spans stay sorted by start. */
+/**
+ * The timed run's stall spans and phase times for every lane of each class
+ * (after spreadTotals), and its usage spans with each row standing for its
+ * class's lanes. Spans stay sorted by start.
+ */
 export function replicate(
   one: Ctx,
   full: Ctx,
@@ -191,55 +196,23 @@ export function replicate(
       sInst[o] = inst
     }
   }
+  // A row of a lane resource stands for the same resource in each lane of its class (UsageSpans.copies): no row is copied.
   const u = spans.usage
-  const uCount = u.count
-  const uResource = u.resource
-  const uStart = u.start
-  const uLength = u.length
-  const uAmount = u.amount
-  const uInst = u.instruction
-  const uWrites = u.writes ?? new Uint32Array(uCount)
-  // Copies of each row: its class's size for a lane resource, 1 for a bus.
-  const copies = new Int32Array(base.length)
-  for (let r = 0; r < base.length; r++) {
-    const j = lane[r] as number
-    copies[r] = j >= 0 ? (size[j] as number) : 1
-  }
-  let n = 0
-  for (let i = 0; i < uCount; i++) n += copies[uResource[i] as number] as number
-  const resource = new Uint32Array(n)
-  const start = new Int32Array(n)
-  const length = new Int32Array(n)
-  const amount = new Uint16Array(n)
-  const instruction = new Int32Array(n)
-  const writes = new Uint32Array(n)
-  // The id of a row's first copy and the step between copies, per timed resource.
+  const copiesOf = new Uint16Array(base.length)
   const firstId = new Int32Array(base.length)
-  const idStep = new Int32Array(base.length)
   for (let r = 0; r < base.length; r++) {
     const j = lane[r] as number
+    copiesOf[r] = j >= 0 ? (size[j] as number) : 1
     firstId[r] = (base[r] as number) + (j >= 0 ? (first[j] as number) * perLane : 0)
-    idStep[r] = j >= 0 ? perLane : 0
   }
-  for (let i = 0, o = 0; i < uCount; i++) {
-    const r = uResource[i] as number
-    const e = o + (copies[r] as number)
-    const st = idStep[r] as number
-    const c0 = uStart[i] as number
-    const len = uLength[i] as number
-    const a = uAmount[i] as number
-    const inst = uInst[i] as number
-    const wr = uWrites[i] as number
-    for (let id = firstId[r] as number; o < e; o++, id += st) {
-      resource[o] = id
-      start[o] = c0
-      length[o] = len
-      amount[o] = a
-      instruction[o] = inst
-      writes[o] = wr
-    }
+  const resource = new Uint32Array(u.count)
+  const copies = new Uint16Array(u.count)
+  for (let i = 0; i < u.count; i++) {
+    const r = u.resource[i] as number
+    resource[i] = firstId[r] as number
+    copies[i] = copiesOf[r] as number
   }
-  const usage: UsageSpans = { count: n, resource, start, length, amount, instruction, writes }
+  const usage: UsageSpans = { ...u, resource, copies, copyStride: perLane }
   const t1 = one.laneTimes
   const ops = t1.length / (K * LANE_FIELD_COUNT)
   const laneTimes = new Int32Array(ops * L * LANE_FIELD_COUNT)

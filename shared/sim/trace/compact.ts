@@ -171,6 +171,7 @@ export function encodeTrace(trace: TimingTrace): CompactTrace {
       amount: fit(u.amount, u.count),
       instruction: fit(u.instruction, u.count),
       ...(u.writes ? { writes: fit(u.writes, u.count) } : {}),
+      ...(u.copies ? { copies: fit(u.copies, u.count), copyStride: u.copyStride ?? 0 } : {}),
     },
   }
 }
@@ -235,6 +236,7 @@ export function transferablesOf(c: CompactTrace): ArrayBuffer[] {
     c.stalls.lane, c.stalls.start, c.stalls.length, c.stalls.reason, c.stalls.instruction,
     c.usage.resource, c.usage.start, c.usage.length, c.usage.amount, c.usage.instruction,
     ...(c.usage.writes ? [c.usage.writes] : []),
+    ...(c.usage.copies ? [c.usage.copies] : []),
   ]
   const buffers = new Set<ArrayBuffer>()
   for (const a of arrays) if (a.buffer instanceof ArrayBuffer) buffers.add(a.buffer)

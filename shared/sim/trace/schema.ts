@@ -6,7 +6,7 @@
 import { z } from 'zod'
 import { machineSchema } from '../../schemas/machine'
 import type { TimingTrace } from './types'
-import { STALL_REASONS, laneTiming, usageWritesAt } from './types'
+import { STALL_REASONS, expandUsage, laneTiming, usageWritesAt } from './types'
 
 const cycle = z.number().int().nonnegative()
 const cycleOrNull = cycle.nullable()
@@ -96,7 +96,8 @@ function writesOfSpan(u: TimingTrace['usage'], i: number): number[] {
 
 export function traceToJson(trace: TimingTrace): TraceJson {
   const s = trace.stalls
-  const u = trace.usage
+  // The JSON form has one span a row.
+  const u = expandUsage(trace.usage)
   return {
     formatVersion: 1,
     machine: trace.machine,

@@ -115,6 +115,17 @@ export interface UsageSpans {
    * produces has it; traces built elsewhere (older files, fixtures) may not.
    */
   writes?: Uint32Array
+  /**
+   * Spans a row stands for, when lanes that did the same work were timed once
+   * (docs/model.md, "Speed"): row i is `copies[i]` spans alike in every column
+   * but the resource, which is `resource[i] + k x copyStride` for k from 0 to
+   * copies[i] - 1 (the same unit or bank in consecutive lanes). Absent: one
+   * span a row. Most readers want `expandUsage`; those that go through every
+   * row (a heat map, a lookup by cycle) can take a row's copies at once.
+   */
+  copies?: Uint16Array
+  /** Resource ids between a row's copies (one lane's resources); set with `copies`. */
+  copyStride?: number
 }
 
 /** FP element widths, as keys of per-width figures. */
@@ -258,6 +269,44 @@ export function usageWritesAt(usage: UsageSpans, i: number, cycle: number): numb
   if ((usage.amount[i] ?? 0) !== 1) return v
   const k = cycle - (usage.start[i] ?? 0)
   return k < 32 ? (v >>> k) & 1 : 0
+}
+
+/** Spans row i stands for (UsageSpans.copies). */
+export function usageCopies(usage: UsageSpans, i: number): number {
+  return usage.copies ? (usage.copies[i] ?? 1) : 1
+}
+
+/**
+ * The spans with one span a row: each row's copies in turn, so that rows stay
+ * sorted by start cycle. The spans themselves when every row is one span.
+ */
+export function expandUsage(usage: UsageSpans): UsageSpans {
+  const copies = usage.copies
+  if (!copies) return usage
+  const stride = usage.copyStride ?? 0
+  let n = 0
+  for (let i = 0; i < usage.count; i++) n += copies[i] ?? 1
+  const out: UsageSpans = {
+    count: n,
+    resource: new Uint32Array(n),
+    start: new Int32Array(n),
+    length: new Int32Array(n),
+    amount: new Uint16Array(n),
+    instruction: new Int32Array(n),
+    ...(usage.writes ? { writes: new Uint32Array(n) } : {}),
+  }
+  for (let i = 0, o = 0; i < usage.count; i++) {
+    const r = usage.resource[i] ?? 0
+    for (let k = 0; k < (copies[i] ?? 1); k++, o++) {
+      out.resource[o] = r + k * stride
+      out.start[o] = usage.start[i] ?? 0
+      out.length[o] = usage.length[i] ?? 0
+      out.amount[o] = usage.amount[i] ?? 0
+      out.instruction[o] = usage.instruction[i] ?? 0
+      if (out.writes) out.writes[o] = usage.writes?.[i] ?? 0
+    }
+  }
+  return out
 }
 
 export function emptyStallCounts(): StallCounts {

@@ -11,7 +11,7 @@
  * @example
  *   bankOfWord(8, 3, 5) // 1: word 3 of v8 is in bank (8 + 3) mod 5
  */
-import { STALL_REASONS, type TimingTrace } from '@shared/sim/trace/types'
+import { STALL_REASONS, usageCopies, type TimingTrace } from '@shared/sim/trace/types'
 import type { CycleWindow } from '@/lib/lanechart/window'
 
 export function bankOfWord(register: number, word: number, banks: number): number {
@@ -75,7 +75,8 @@ export function bankHeat(trace: TimingTrace, window: CycleWindow, buckets: numbe
   const u = trace.usage
   for (let i = 0; i < u.count; i++) {
     const r = res.get(u.resource[i]!)
-    if (r) spread(u.start[i]!, u.start[i]! + u.length[i]!, u.amount[i]!, use, r.bank)
+    // A row standing for alike lanes (UsageSpans.copies) uses the same bank in each of them.
+    if (r) spread(u.start[i]!, u.start[i]! + u.length[i]!, u.amount[i]! * usageCopies(u, i), use, r.bank)
   }
   const lanes = trace.laneCount
   const ports = trace.machine.rfPortsPerBank
@@ -109,7 +110,8 @@ export function collisionsOf(trace: TimingTrace, index: number, limit = 12): Col
     const holders = new Map<number, Set<number>>()
     for (let j = 0; j < u.count; j++) {
       const r = res.get(u.resource[j]!)
-      if (!r || r.lane !== lane || u.instruction[j] === index) continue
+      // A row standing for alike lanes covers lanes r.lane .. r.lane + copies - 1 (UsageSpans.copies).
+      if (!r || lane < r.lane || lane >= r.lane + usageCopies(u, j) || u.instruction[j] === index) continue
       if (u.start[j]! < e && u.start[j]! + u.length[j]! > s) {
         const set = holders.get(u.instruction[j]!) ?? new Set<number>()
         set.add(r.bank)

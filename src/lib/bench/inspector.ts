@@ -22,7 +22,7 @@
  *   const idx = indexTrace(trace)
  *   inspectCycle(idx, 42).lanes[0].phases.exec // [{ index: 3, done: { lo: 5, hi: 5 }, total: 8, ... }]
  */
-import { LANE_FIELD_COUNT, NO_CYCLE, STALL_REASONS, laneStallAt, type StallReason, type TimingTrace } from '@shared/sim/trace/types'
+import { LANE_FIELD_COUNT, NO_CYCLE, STALL_REASONS, laneStallAt, usageCopies, type StallReason, type TimingTrace } from '@shared/sim/trace/types'
 import { spanIndex, spansAt, type SpanIndex } from './spanIndex'
 
 export const PHASE_NAMES = ['read', 'exec', 'write'] as const
@@ -94,10 +94,13 @@ export function indexTrace(trace: TimingTrace): TraceIndex {
   for (let i = 0; i < u.count; i++) {
     const r = trace.resources[u.resource[i] ?? 0]
     if (!r || r.kind !== 'unit' || r.lane === null) continue
-    const key = (u.instruction[i] ?? 0) * trace.laneCount + r.lane
-    const list = unitSpans.get(key)
-    if (list) list.push(i)
-    else unitSpans.set(key, [i])
+    // A row standing for alike lanes (UsageSpans.copies) is the same unit in consecutive lanes.
+    for (let k = 0; k < usageCopies(u, i); k++) {
+      const key = (u.instruction[i] ?? 0) * trace.laneCount + r.lane + k
+      const list = unitSpans.get(key)
+      if (list) list.push(i)
+      else unitSpans.set(key, [i])
+    }
   }
   const position = new Map<number, number>()
   trace.instructions.forEach((ins, p) => position.set(ins.index, p))
@@ -204,19 +207,21 @@ export function busyResources(idx: TraceIndex, cycle: number): ResourceUse[] {
   const u = trace.usage
   const byResource = new Map<number, ResourceUse>()
   for (const i of spansAt(idx.usage, cycle)) {
-    const id = u.resource[i] ?? 0
-    const info = trace.resources[id]
-    if (!info) continue
-    let entry = byResource.get(id)
-    if (!entry) {
-      entry = { resource: id, name: info.name, kind: info.kind, lane: info.lane, capacity: info.capacity, used: 0, users: [] }
-      byResource.set(id, entry)
-    }
     const index = u.instruction[i] ?? 0
     const amount = u.amount[i] ?? 0
-    entry.used += amount
     const ins = trace.instructions[idx.position.get(index) ?? -1]
-    entry.users.push({ index, text: ins?.text ?? `#${index}`, amount })
+    for (let k = 0; k < usageCopies(u, i); k++) {
+      const id = (u.resource[i] ?? 0) + k * (u.copyStride ?? 0)
+      const info = trace.resources[id]
+      if (!info) continue
+      let entry = byResource.get(id)
+      if (!entry) {
+        entry = { resource: id, name: info.name, kind: info.kind, lane: info.lane, capacity: info.capacity, used: 0, users: [] }
+        byResource.set(id, entry)
+      }
+      entry.used += amount
+      entry.users.push({ index, text: ins?.text ?? `#${index}`, amount })
+    }
   }
   return [...byResource.values()].sort((a, b) => a.resource - b.resource)
 }

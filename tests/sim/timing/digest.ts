@@ -10,10 +10,13 @@
  * use as the function (resource, cycle, instruction) -> amount, stalls as
  * (lane, cycle) -> (reason, instruction), each folded into order-independent
  * sums that are linear in the amount. So merging or splitting spans keeps the
- * digest; moving a single use, stall or phase time by one cycle changes it.
+ * digest, and so does a row standing for alike lanes (UsageSpans.copies, taken
+ * one span a row); moving a single use, stall or phase time by one cycle
+ * changes it.
  */
 import { createHash } from 'node:crypto'
 import type { TimingResult } from '../../../shared/sim/trace/types'
+import { expandUsage } from '../../../shared/sim/trace/types'
 
 /** murmur3's 32-bit finaliser (public domain): a fast, well-mixed integer hash. */
 function fmix(h: number): number {
@@ -32,7 +35,7 @@ function mix(a: number, b: number, c: number, d: number, seed: number): number {
 function usageSums(result: TimingResult): [number, number] {
   let u1 = 0
   let u2 = 0
-  const u = result.trace.usage
+  const u = expandUsage(result.trace.usage)
   for (let i = 0; i < u.count; i++) {
     const r = u.resource[i]!
     const inst = u.instruction[i]!

@@ -2,7 +2,7 @@ import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { simulate } from '../../../shared/sim/timing/simulate'
 import type { TimingTrace } from '../../../shared/sim/trace/types'
-import { laneTiming } from '../../../shared/sim/trace/types'
+import { expandUsage, laneTiming } from '../../../shared/sim/trace/types'
 import { caseArb, machineOf } from './arbitraries'
 import { buildStream, fma } from './factories'
 import { parseMachine } from '../../../shared/schemas/machine'
@@ -11,7 +11,8 @@ import { parseMachine } from '../../../shared/schemas/machine'
 
 function usePerCycle(trace: TimingTrace): Map<number, Map<number, number>> {
   const byRes = new Map<number, Map<number, number>>()
-  const u = trace.usage
+  // One span a row: a row may stand for alike lanes (UsageSpans.copies).
+  const u = expandUsage(trace.usage)
   for (let i = 0; i < u.count; i++) {
     const r = u.resource[i]!
     const m = byRes.get(r) ?? new Map<number, number>()

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest'
 import { simulate } from '../../../shared/sim/timing/simulate'
 import { traceJsonSchema, traceToJson } from '../../../shared/sim/trace/schema'
 import type { TimingTrace } from '../../../shared/sim/trace/types'
-import { laneTiming, usageWritesAt } from '../../../shared/sim/trace/types'
+import { expandUsage, laneTiming, usageWritesAt } from '../../../shared/sim/trace/types'
 import { caseArb, machineOf } from './arbitraries'
 import { ampleMachine, buildOp, buildStream, fma } from './factories'
 
@@ -15,7 +15,8 @@ interface PortUses {
 /** Per (instruction, lane): the cycles of each bank-port read and write, from the usage spans. */
 function portUses(trace: TimingTrace): Map<string, PortUses> {
   const out = new Map<string, PortUses>()
-  const u = trace.usage
+  // One span a row: a row may stand for alike lanes (UsageSpans.copies).
+  const u = expandUsage(trace.usage)
   for (let i = 0; i < u.count; i++) {
     const res = trace.resources[u.resource[i]!]!
     if (res.kind !== 'bank') continue
