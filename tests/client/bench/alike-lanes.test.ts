@@ -6,7 +6,6 @@
  * and the bank collisions. The reference is the engine with
  * `identicalLanes: false` (every lane timed and recorded on its own).
  */
-import { readFileSync } from 'node:fs'
 import { describe, expect, it } from 'vitest'
 import { parseMachine } from '@shared/schemas/machine'
 import { execute } from '@shared/sim/exec/execute'
@@ -15,11 +14,12 @@ import { decodeTrace, encodeTrace } from '@shared/sim/trace/compact'
 import { expandUsage, type TimingTrace } from '@shared/sim/trace/types'
 import { simulate } from '@shared/sim/timing/simulate'
 import { bankHeat, collisionsOf } from '@/lib/bench/bankView'
+import longStream from '../../../examples/long-stream.s?raw'
 import { busyResources, execBeats, indexTrace } from '@/lib/bench/inspector'
 
 /** The shipped long stream at vl 250 on 8 lanes: classes of 2 and 6 lanes (a ragged tail), on 4 single-port banks so that lanes collide. */
 function runs(): { alike: TimingTrace; every: TimingTrace } {
-  const text = readFileSync('examples/long-stream.s', 'utf8').replace('.equ    AVL, 256\n', '.equ    AVL, 250\n')
+  const text = longStream.replace('.equ    AVL, 256\n', '.equ    AVL, 250\n')
   const asm = assemble(text)
   if (!asm.ok) throw new Error(asm.errors[0]?.message)
   const ex = execute(asm.program, { vlen: 8192 })
