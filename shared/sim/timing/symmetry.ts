@@ -14,13 +14,13 @@
  * giving each timed lane its class's elements, buses K/L as wide) and the
  * result replicated to every lane of each class: phase times, stalls,
  * totals; a usage row of a lane resource stands for the class's lanes
- * (UsageSpans.copies) instead of being copied. The timed lanes carry their class's size
- * as a weight wherever the run counts lanes (stall totals and per-instruction
- * stalls, the span limit, bus amounts). With several memory ports, accesses
- * share a bus cycle and split it by elements, so there every memory access
- * must give all lanes alike (vl a multiple of L) and all share one EEW. The
- * golden corpus and tests/sim/timing/identical-lanes.test.ts check that this
- * gives the very trace of the full run.
+ * (UsageSpans.copies) instead of being copied. The timed lanes carry their
+ * class's size as a weight wherever the run counts lanes (stall totals and
+ * per-instruction stalls, the span limit, bus amounts). With several memory
+ * ports, accesses share a bus cycle and split it by elements, so there every
+ * memory access must give all lanes alike (vl a multiple of L) and all share
+ * one EEW. The golden corpus and tests/sim/timing/identical-lanes.test.ts
+ * check that this gives the very trace of the full run.
  */
 import type { Machine } from '../../schemas/machine'
 import type { DynamicStream, VectorOp } from '../exec/stream'
