@@ -14,8 +14,8 @@ import { decodeTrace, encodeTrace } from '@shared/sim/trace/compact'
 import { expandUsage, type TimingTrace } from '@shared/sim/trace/types'
 import { simulate } from '@shared/sim/timing/simulate'
 import { bankHeat, collisionsOf } from '@/lib/bench/bankView'
-import longStream from '../../../examples/long-stream.s?raw'
 import { busyResources, execBeats, indexTrace } from '@/lib/bench/inspector'
+import longStream from '../../../examples/long-stream.s?raw'
 
 /** The shipped long stream at vl 250 on 8 lanes: classes of 2 and 6 lanes (a ragged tail), on 4 single-port banks so that lanes collide. */
 function runs(): { alike: TimingTrace; every: TimingTrace } {
