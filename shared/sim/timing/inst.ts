@@ -197,6 +197,7 @@ export abstract class Inst {
     if (!reader || this.seq < reader.seq) ctx.reader[lane] = this
     const { rf, rec } = ctx
     const wpr = rf.wpr
+    const shift = rf.wprShift
     const depth = ctx.d.queueDepth
     const bankBase = lane * rf.banks
     let all = true
@@ -218,7 +219,7 @@ export abstract class Inst {
       let r: number
       let off: number
       if (s.fields === 1) {
-        r = (w / wpr) | 0
+        r = shift >= 0 ? w >> shift : (w / wpr) | 0
         off = w - r * wpr
       } else {
         // Word j of field f is read as word j x fields + f (fieldWord).
@@ -233,7 +234,7 @@ export abstract class Inst {
         ctx.deny(lane, this, R_RAW)
         continue
       }
-      const bank = (p + off) % rf.banks
+      const bank = rf.bankOfWord[p * wpr + off] ?? 0
       if (!rf.grant(lane, bank, c)) {
         ctx.deny(lane, this, R_BANK)
         continue
@@ -300,11 +301,11 @@ export abstract class Inst {
         const wpr = rf.wpr
         const nf = this.dstFields
         const j = nf === 1 ? w : (w / nf) | 0
-        const q = (j / wpr) | 0
+        const q = rf.wprShift >= 0 ? j >> rf.wprShift : (j / wpr) | 0
         const r = nf === 1 ? q : (w - j * nf) * this.dstFieldRegs + q
         const p = g[r < g.length ? r : g.length - 1] ?? 0
         const off = j - q * wpr
-        const bank = (p + off) % rf.banks
+        const bank = rf.bankOfWord[p * wpr + off] ?? 0
         if (!rf.grant(lane, bank, c)) {
           ctx.deny(lane, this, R_BANK)
           break

@@ -99,9 +99,10 @@ export class ReductionInst extends Inst {
       const n = this.n[lane] ?? 0
       const upto = Math.min(n, (j + 1) * this.epc)
       const vs2 = this.vs2
-      if (vs2 && (vs2.readCnt[lane] ?? 0) < Math.ceil((upto * vs2.bits) / 64)) return
+      // Integer word counts (upto x bits stays far below 2^31).
+      if (vs2 && (vs2.readCnt[lane] ?? 0) < (upto * vs2.bits + 63) >> 6) return
       const mask = this.op.masked ? this.srcs[this.srcs.length - 1] : undefined
-      if (mask && (mask.readCnt[lane] ?? 0) < Math.ceil(upto / 64)) return
+      if (mask && (mask.readCnt[lane] ?? 0) < (upto + 63) >> 6) return
       const a = lane * this.A + (j % this.A)
       if ((this.acc[a] ?? -1) > c) {
         ctx.busyLane(lane) // the accumulator's previous add is in the pipeline
@@ -111,8 +112,8 @@ export class ReductionInst extends Inst {
       this.acc[a] = c + this.D
       if (j === 0) this.setTime(lane, F_EXEC_START, c)
       const last = j === b - 1
-      if (vs2) vs2.cons[lane] = last ? (vs2.words[lane] ?? 0) : Math.floor((upto * vs2.bits) / 64)
-      if (mask) mask.cons[lane] = last ? (mask.words[lane] ?? 0) : Math.floor(upto / 64)
+      if (vs2) vs2.cons[lane] = last ? (vs2.words[lane] ?? 0) : (upto * vs2.bits) >> 6
+      if (mask) mask.cons[lane] = last ? (mask.words[lane] ?? 0) : upto >> 6
       this.beatDone[lane] = j + 1
       if (last) this.partials[lane] = Math.min(this.A, b)
       return

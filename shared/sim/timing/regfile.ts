@@ -13,6 +13,10 @@ export class RegFile {
   readonly banks: number
   readonly ports: number
   readonly wpr: number
+  /** log2 of `wpr` when it is a power of two (the usual case), else -1: word w sits in register w >> wprShift. */
+  readonly wprShift: number
+  /** [phys][word]: the bank of word `word` of physical register `phys`, looked up (a division per word read costs in the per-cycle paths). */
+  readonly bankOfWord: Uint8Array
   /** [phys][lane][word]: first cycle the word may be read. */
   readonly ready: Int32Array
   /** [lane][bank]: ports used in cycle `portCycle[lane][bank]`. */
@@ -24,26 +28,12 @@ export class RegFile {
     this.banks = d.banks
     this.ports = d.ports
     this.wpr = d.wordsPerRegLane
+    this.wprShift = Number.isInteger(Math.log2(this.wpr)) ? Math.log2(this.wpr) : -1
+    this.bankOfWord = new Uint8Array(physRegs * this.wpr)
+    for (let p = 0; p < physRegs; p++) for (let w = 0; w < this.wpr; w++) this.bankOfWord[p * this.wpr + w] = (p + w) % this.banks
     this.ready = new Int32Array(physRegs * d.lanes * d.wordsPerRegLane) // initial registers readable from cycle 0
     this.portUse = new Uint8Array(d.lanes * d.banks)
     this.portCycle = new Int32Array(d.lanes * d.banks).fill(-1)
-  }
-
-  /** Physical register holding word w of a register group, and the word's offset in it. */
-  physOf(group: Int32Array, w: number): number {
-    const r = Math.floor(w / this.wpr)
-    return group[r < group.length ? r : group.length - 1] ?? 0
-  }
-
-  /** Index into `ready` of word w of a group in a lane. */
-  slot(group: Int32Array, lane: number, w: number): number {
-    const r = Math.floor(w / this.wpr)
-    const p = group[r < group.length ? r : group.length - 1] ?? 0
-    return (p * this.lanes + lane) * this.wpr + (w % this.wpr)
-  }
-
-  bankOf(group: Int32Array, w: number): number {
-    return (this.physOf(group, w) + (w % this.wpr)) % this.banks
   }
 
   /** Asks for a port of `bank` in `lane` in cycle c; true when granted. */

@@ -89,7 +89,8 @@ export class UnitInst extends Inst {
       const words = s.words[lane] ?? 0
       if (words === 0) continue
       reads++
-      if ((s.readCnt[lane] ?? 0) < Math.ceil((upto * s.bits) / 64)) return
+      // Words of `bits`-bit elements up to `upto`, rounded up (integer: upto x bits stays far below 2^31).
+      if ((s.readCnt[lane] ?? 0) < (upto * s.bits + 63) >> 6) return
     }
     if (reads === 0 && this.time(lane, F_READ_START) >= c) return // nothing to read: beats start the cycle after the start
     if ((ctx.unitFree[uk] ?? 0) > c) return
@@ -102,10 +103,10 @@ export class UnitInst extends Inst {
     const srcs = this.srcs
     for (let k = 0; k < srcs.length; k++) {
       const s = srcs[k] as Operand
-      s.cons[lane] = last ? (s.words[lane] ?? 0) : Math.floor((upto * s.bits) / 64)
+      s.cons[lane] = last ? (s.words[lane] ?? 0) : (upto * s.bits) >> 6
     }
-    const before = j === 0 ? 0 : Math.floor((Math.min(n, j * this.epc) * this.dstBits) / 64)
-    const after = last ? (this.dstWords[lane] ?? 0) : Math.floor((upto * this.dstBits) / 64)
+    const before = j === 0 ? 0 : (Math.min(n, j * this.epc) * this.dstBits) >> 6
+    const after = last ? (this.dstWords[lane] ?? 0) : (upto * this.dstBits) >> 6
     for (let w = before; w < after; w++) this.resultReady(lane, w, c + this.latency)
     this.beatDone[lane] = j + 1
   }
