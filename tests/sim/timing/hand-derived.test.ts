@@ -223,3 +223,47 @@ describe('segment accesses of every shape finish, no faster than their bus allow
     )
   })
 })
+
+describe('the divider (model section 6; docs/model.md "Divider": one element a beat, not pipelined, the result after cyclesPerBeat)', () => {
+  // One lane, ample ports, K = cyclesPerBeat. Reads of word j come in 1 + j while the operand queue (depth 4)
+  // has room, and in any case in the cycle of beat j - 4, which is before 2 + jK for K >= 1: so beats are bound
+  // by the divider alone. Beat j enters in 2 + jK (the unit is busy K cycles a beat), its result asks for a write
+  // port in 2 + jK + K and is written then (results are K cycles apart, one write port is enough). The last of b
+  // beats writes in 2 + bK, and the run ends after that cycle: bK + 3 cycles (with K = D this is b + D + 2 for b = 1).
+  const K = 20
+  const vdiv = (d: number, vl: number) => buildOp({ op: 'vdiv.vv', text: `vdiv.vv v${d}, v1, v2`, unit: 'div', flopsPerElement: 0, vl, dstRegs: [d], srcRegs: [[1], [2]] })
+  const machine = { lanes: 1, vlen: 512, units: { div: { cyclesPerBeat: K } } }
+
+  it('one vdiv.vv of b = 4 elements: beats 2, 2 + K, 2 + 2K, 2 + 3K; writes 2 + K .. 2 + 4K; 4K + 3 cycles', () => {
+    const trace = cyclesOf([vdiv(3, 4)], machine)
+    expect(trace.cycles).toBe(4 * K + 3)
+    expect(laneTiming(trace, 0, 0)).toMatchObject({ elements: 4, beats: 4, readStart: 1, readEnd: 4, execStart: 2, writeStart: 2 + K, writeEnd: 2 + 4 * K })
+  })
+
+  it('two independent ones share it: the second one\'s beats follow the first one\'s, 2 x 4K + 3 cycles', () => {
+    // The second one reads its words long before the divider frees (from 6 on, with the default 3 slots), so its
+    // beat j enters in 2 + (4 + j)K and its last result is written in 2 + 8K.
+    const trace = cyclesOf([vdiv(3, 4), vdiv(4, 4)], machine)
+    expect(trace.cycles).toBe(8 * K + 3)
+    expect(laneTiming(trace, 1, 0)).toMatchObject({ execStart: 2 + 4 * K, writeStart: 2 + 5 * K, writeEnd: 2 + 8 * K })
+  })
+})
+
+describe('the store bus width (model section 7: a unit-stride store sends storeBusBits / EEW elements a cycle, in element order)', () => {
+  // 8 lanes, vl 256, EEW 64: lane l holds elements l, l + 8, ...; it reads word j in j + 1 and may send it from
+  // j + 2 (see the segment store above: with a 512-bit bus, a row of 8 elements a cycle, the last leaves in 33,
+  // 34 cycles). A 256-bit bus carries 4 elements a cycle: group g of 4 elements (lanes 0-3 or 4-7 of row
+  // floor(g / 2)) leaves in 2 + g, since row j is ready in j + 2 <= 2 + g. Groups 0..63: the last leaves in 65,
+  // 66 cycles; lane 0 sends its last element (group 62) in 64, lane 7 (group 63) in 65. A 1024-bit bus could
+  // carry 16 elements, but the lanes give only 8 a cycle (one word a lane a cycle): 34 cycles, as at 512.
+  const vl = 256
+  const storeCycles = (storeBusBits: number) => cyclesOf([unitStore(8, vl)], { lanes: 8, storeBusBits })
+  it('512 bits: 34 cycles; 256 bits: 66, lane 0 done in 64 and lane 7 in 65; 1024 bits: still 34', () => {
+    expect(storeCycles(512).cycles).toBe(34)
+    const half = storeCycles(256)
+    expect(half.cycles).toBe(66)
+    expect(laneTiming(half, 0, 0)).toMatchObject({ elements: 32, readStart: 1, writeEnd: 64 })
+    expect(laneTiming(half, 0, 7)).toMatchObject({ elements: 32, writeEnd: 65 })
+    expect(storeCycles(1024).cycles).toBe(34)
+  })
+})
