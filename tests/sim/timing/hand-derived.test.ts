@@ -267,3 +267,71 @@ describe('the store bus width (model section 7: a unit-stride store sends storeB
     expect(storeCycles(1024).cycles).toBe(34)
   })
 })
+
+describe('chaining (model section 5: with chaining a word can be read the cycle after it is written; without, once its writer finished)', () => {
+  // One lane, ample ports, b = 4, D = 4. The producer vfadd.vv v3 reads 1..4, takes beats 2..5 and writes word j
+  // in 6 + j (closed form). The consumer vfadd.vv v4, v3, v2 may start reading in 5 (staggered issue: the cycle
+  // after the producer's last read); its other source v2 is ready, and its 4 words fill the queue (depth 4) in
+  // 5..8 either way. Chained, word j of v3 is readable from 7 + j, so the consumer reads v3 in 7..10, beats
+  // 8..11, writes 12..15: 16 cycles. Unchained, every word of v3 is readable from the cycle after the producer's
+  // last write (9): v3 read in 10..13, beats 11..14, writes 15..18: 19 cycles (2b + 2D + 3).
+  const dependent = () => [vfadd(3, 4), vfadd(4, 4, 3, 2)]
+  it('chained: 16 cycles, the consumer reading v3 in 7..10; unchained: 19, reading it in 10..13', () => {
+    const chained = cyclesOf(dependent(), { lanes: 1, vlen: 256, chaining: true })
+    expect(chained.cycles).toBe(16)
+    expect(laneTiming(chained, 1, 0)).toMatchObject({ readStart: 5, readEnd: 10, execStart: 8, writeStart: 12, writeEnd: 15 })
+    const unchained = cyclesOf(dependent(), { lanes: 1, vlen: 256, chaining: false })
+    expect(unchained.cycles).toBe(19)
+    expect(laneTiming(unchained, 1, 0)).toMatchObject({ readStart: 5, readEnd: 13, execStart: 11, writeStart: 15, writeEnd: 18 })
+  })
+})
+
+describe('operand queues (model section 5: operandQueueDepth words a source operand; a beat frees its words)', () => {
+  // The divider above (K = 20, one lane) with b = 8: word j < q is read in 1 + j; word j >= q only once beat
+  // j - q has freed an entry, in that beat's cycle 2 + (j - q)K (beats come before reads in a cycle). So the last
+  // word is read in 2 + (7 - q)K: 102 with q = 2, 62 with q = 4, 8 with q = 8; the beats, and the run's
+  // 8K + 3 = 163 cycles, do not change.
+  const K = 20
+  const op = () => buildOp({ op: 'vdiv.vv', text: 'vdiv.vv v3, v1, v2', unit: 'div', flopsPerElement: 0, vl: 8, dstRegs: [3], srcRegs: [[1], [2]] })
+  it.each([
+    [2, 2 + 5 * K],
+    [4, 2 + 3 * K],
+    [8, 8],
+  ])('depth %i: the last word is read in %i, and the run still takes 8K + 3 cycles', (operandQueueDepth, readEnd) => {
+    const trace = cyclesOf([op()], { lanes: 1, vlen: 512, operandQueueDepth, units: { div: { cyclesPerBeat: K } } })
+    expect(laneTiming(trace, 0, 0)).toMatchObject({ readStart: 1, readEnd, execStart: 2, writeEnd: 2 + 8 * K })
+    expect(trace.cycles).toBe(8 * K + 3)
+  })
+})
+
+describe('the arithmetic queue (model section 2: arithQueueDepth dispatched instructions wait; an entry frees when its instruction started in every lane)', () => {
+  // One lane, b = 8, 6 independent vfadd.vv. The lane starts instruction k in 1 + 8k (each the cycle after the
+  // previous one's last read). With depth 2, instructions 0..2 are dispatched in 0, 1, 2; then the queue holds two
+  // and the next one is dispatched in the cycle an entry frees (the lanes issue before the front end in a cycle):
+  // instruction k >= 3 in the start of k - 2, 1 + 8(k - 2). The lane never waits for dispatch, so the run takes
+  // 6 x 8 + D + 2 = 54 cycles at any depth; with depth 8 all six are dispatched in 0..5.
+  const ops = () => independent(6, 8)
+  it('depth 2: dispatched in 0, 1, 2, 9, 17, 25; depth 8: in 0..5; 54 cycles either way', () => {
+    const run = (arithQueueDepth: number) => {
+      const s = createTimingState(buildStream(ops()), ampleMachine({ lanes: 1, vlen: 512, arithQueueDepth }), { identicalLanes: false })
+      while (step(s));
+      return { dispatch: Array.from(s.dispatchAt), cycles: finish(s).trace.cycles }
+    }
+    expect(run(2)).toEqual({ dispatch: [0, 1, 2, 9, 17, 25], cycles: 54 })
+    expect(run(8)).toEqual({ dispatch: [0, 1, 2, 3, 4, 5], cycles: 54 })
+  })
+})
+
+describe('the load bus width (model section 7: a unit-stride load requests loadBusBits / EEW elements a cycle)', () => {
+  // 8 lanes, vl 256, EEW 64, memLatency M = 16, the port taken in cycle 1: 256 x 64 bits at B bits a cycle are
+  // requested in cycles 1 .. 16384 / B, the last arrives M later and is written on arrival: 16384 / B + 1 + M
+  // cycles. 256 bits: 81; 512: 49; 1024: 33 (16 elements a cycle, two for each lane, which writes two a cycle).
+  const M = 16
+  it.each([
+    [256, 81],
+    [512, 49],
+    [1024, 33],
+  ])('%i bits: %i cycles', (loadBusBits, cycles) => {
+    expect(cyclesOf([unitLoad(8, 256)], { lanes: 8, memLatency: M, loadBusBits }).cycles).toBe(cycles)
+  })
+})
