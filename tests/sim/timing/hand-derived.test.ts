@@ -335,3 +335,25 @@ describe('the load bus width (model section 7: a unit-stride load requests loadB
     expect(cyclesOf([unitLoad(8, 256)], { lanes: 8, memLatency: M, loadBusBits }).cycles).toBe(cycles)
   })
 })
+
+describe('issue policies (model section 4: when a lane may start its next arithmetic instruction)', () => {
+  // 2 lanes, vl 3: lane 0 holds 2 elements (b = 2), lane 1 holds 1; three independent vfadd.vv dispatched in
+  // 0, 1, 2; D = 4; the default 3 lane slots are enough for all three. Lane 0 starts instruction k in 1 + 2k
+  // under `staggered` and `lockstep` (the cycle after its last read of k - 1), reads 1 + 2k..2 + 2k and writes
+  // its last word in 7 + 2k: 12 cycles. Lane 1:
+  // - staggered: starts k the cycle after its own last read of k - 1 and after k's dispatch: 1 + k; its last
+  //   write is in 6 + k, 8 for the third;
+  // - lockstep: starts k with lane 0, when every lane has read k - 1: 1 + 2k; last write 10;
+  // - serial: starts k the cycle after k - 1 completed everywhere (its last write, 7 + 7(k - 1) on lane 0):
+  //   1 + 7k in both lanes, so lane 0 writes its last word in 7 + 7k = 21, lane 1 in 20: 22 cycles.
+  const ops = () => Array.from({ length: 3 }, (_, k) => vfadd(8 + k, 3))
+  it.each([
+    ['staggered', 12, 3, 8],
+    ['lockstep', 12, 5, 10],
+    ['serial', 22, 15, 20],
+  ] as const)('%s: %i cycles; lane 1 starts the third instruction in %i and writes it in %i', (issue, cycles, start, write) => {
+    const trace = cyclesOf(ops(), { lanes: 2, vlen: 256, issue })
+    expect(trace.cycles).toBe(cycles)
+    expect(laneTiming(trace, 2, 1)).toMatchObject({ elements: 1, readStart: start, writeEnd: write })
+  })
+})
