@@ -357,3 +357,35 @@ describe('issue policies (model section 4: when a lane may start its next arithm
     expect(laneTiming(trace, 2, 1)).toMatchObject({ elements: 1, readStart: start, writeEnd: write })
   })
 })
+
+describe('unit latencies (model section 5: a result asks for its write port `latency` cycles after its beat)', () => {
+  // The closed form with the unit's latency in place of D: one instruction of b = 4 beats on one lane reads in
+  // 1..4, beats in 2..5, writes in 2 + lat..5 + lat, and takes b + lat + 2 cycles.
+  it.each([
+    ['alu', 'vadd.vv', 1],
+    ['alu', 'vadd.vv', 6],
+    ['mul', 'vmul.vv', 5],
+    ['fpu', 'vfadd.vv', 7],
+  ] as const)('%s (%s) at latency %i: writes from 2 + latency, b + latency + 2 cycles', (unit, op, latency) => {
+    const inst = buildOp({ op, text: `${op} v3, v1, v2`, unit, flopsPerElement: unit === 'fpu' ? 1 : 0, vl: 4, dstRegs: [3], srcRegs: [[1], [2]] })
+    const trace = cyclesOf([inst], { lanes: 1, vlen: 256, units: { [unit]: { latency } } })
+    expect(trace.cycles).toBe(4 + latency + 2)
+    expect(laneTiming(trace, 0, 0)).toMatchObject({ execStart: 2, writeStart: 2 + latency, writeEnd: 5 + latency })
+  })
+})
+
+describe('the ring hop latency (model section 8: lane partials walk down the ring, a hop taking ringHopLatency cycles)', () => {
+  // vfredusum.vs at vl = L = 8, one element a lane, D = 4, hop h. Every lane reads its element in 1, folds it in
+  // 2, and knows its partial in 2 + D (it is ready then), during the lanes' turn; the ring moves values at the
+  // start of a cycle, so lane 7 sends in s0 = 3 + D. A value sent in s arrives h later and is added there
+  // (one beat), ready D later, and sent on at once: s(k + 1) = s(k) + h + D. Lane 0 adds the value sent in
+  // s6 in a = s6 + h, adds vs1[0] D later, and writes vd[0] D after that: cycles = a + 2D + 1
+  // = 4 + 2D + 7(h + D). h = 1: 47; h = 3: 61; each cycle of hop adds L - 1 = 7.
+  const sum = () => buildOp({ op: 'vfredusum.vs', text: 'vfredusum.vs v3, v1, v2', shape: 'reduction', vl: 8, dstRegs: [3], srcRegs: [[1], [2]] })
+  it.each([
+    [1, 47],
+    [3, 61],
+  ])('hop %i: %i cycles on 8 lanes', (ringHopLatency, cycles) => {
+    expect(cyclesOf([sum()], { lanes: 8, vlen: 512, ringHopLatency, interLane: 'ring' }).cycles).toBe(cycles)
+  })
+})
