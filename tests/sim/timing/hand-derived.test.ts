@@ -389,3 +389,22 @@ describe('the ring hop latency (model section 8: lane partials walk down the rin
     expect(cyclesOf([sum()], { lanes: 8, vlen: 512, ringHopLatency, interLane: 'ring' }).cycles).toBe(cycles)
   })
 })
+
+describe('FPU elements a beat (model section 1: fpuElementsPerCycle[SEW] elements a beat; a lane reads one word of each operand a cycle)', () => {
+  // vfadd.vv at SEW 32, vl 8 on one lane (4 words an operand), D = 4, ample ports, e elements a beat:
+  // - e = 1: 8 beats; beat j needs word floor(j / 2), read in 1 + floor(j / 2), so beats run 2..9 and the last
+  //   word is complete after beat 7: written in 9 + D, 14 cycles (b + D + 2 with b = 8);
+  // - e = 2: 4 beats, beat j needs word j (read in 1 + j): beats 2..5, a word a beat, 10 cycles;
+  // - e = 4: 2 beats, beat j needs words 2j and 2j + 1 (read in 1 + 2j and 2 + 2j): beats in 3 and 5, the last
+  //   two words written in 5 + D: 10 cycles. Past 64 bits of elements a beat the operand reads bound the lane.
+  const fadd32 = () => buildOp({ vl: 8, sew: 32, eew: 32 })
+  it.each([
+    [1, 14],
+    [2, 10],
+    [4, 10],
+  ])('%i FP32 elements a beat: %i cycles', (e, cycles) => {
+    const trace = cyclesOf([fadd32()], { lanes: 1, vlen: 256, fpuElementsPerCycle: { 64: 1, 32: e, 16: 4 } })
+    expect(trace.cycles).toBe(cycles)
+    expect(laneTiming(trace, 0, 0)).toMatchObject({ elements: 8, beats: 8 / e })
+  })
+})
