@@ -20,6 +20,7 @@ import { ampleMachine, buildOp, buildStream, unitLoad, unitStore } from './facto
 
 const D = 4
 const vfadd = (d: number, vl: number, a = 1, b = 2): VectorOp => buildOp({ vl, dstRegs: [d], srcRegs: [[a], [b]], text: `vfadd.vv v${d}, v${a}, v${b}` })
+const vdiv = (d: number, vl: number): VectorOp => buildOp({ op: 'vdiv.vv', text: `vdiv.vv v${d}, v1, v2`, unit: 'div', flopsPerElement: 0, vl, dstRegs: [d], srcRegs: [[1], [2]] })
 const independent = (n: number, vl: number) => Array.from({ length: n }, (_, k) => vfadd(8 + k, vl))
 const cyclesOf = (ops: VectorOp[], machine: Parameters<typeof ampleMachine>[0]) => {
   const s = createTimingState(buildStream(ops), ampleMachine(machine), { identicalLanes: false })
@@ -231,7 +232,6 @@ describe('the divider (model section 6; docs/model.md "Divider": one element a b
   // port in 2 + jK + K and is written then (results are K cycles apart, one write port is enough). The last of b
   // beats writes in 2 + bK, and the run ends after that cycle: bK + 3 cycles (with K = D this is b + D + 2 for b = 1).
   const K = 20
-  const vdiv = (d: number, vl: number) => buildOp({ op: 'vdiv.vv', text: `vdiv.vv v${d}, v1, v2`, unit: 'div', flopsPerElement: 0, vl, dstRegs: [d], srcRegs: [[1], [2]] })
   const machine = { lanes: 1, vlen: 512, units: { div: { cyclesPerBeat: K } } }
 
   it('one vdiv.vv of b = 4 elements: beats 2, 2 + K, 2 + 2K, 2 + 3K; writes 2 + K .. 2 + 4K; 4K + 3 cycles', () => {
@@ -292,13 +292,12 @@ describe('operand queues (model section 5: operandQueueDepth words a source oper
   // word is read in 2 + (7 - q)K: 102 with q = 2, 62 with q = 4, 8 with q = 8; the beats, and the run's
   // 8K + 3 = 163 cycles, do not change.
   const K = 20
-  const op = () => buildOp({ op: 'vdiv.vv', text: 'vdiv.vv v3, v1, v2', unit: 'div', flopsPerElement: 0, vl: 8, dstRegs: [3], srcRegs: [[1], [2]] })
   it.each([
     [2, 2 + 5 * K],
     [4, 2 + 3 * K],
     [8, 8],
   ])('depth %i: the last word is read in %i, and the run still takes 8K + 3 cycles', (operandQueueDepth, readEnd) => {
-    const trace = cyclesOf([op()], { lanes: 1, vlen: 512, operandQueueDepth, units: { div: { cyclesPerBeat: K } } })
+    const trace = cyclesOf([vdiv(3, 8)], { lanes: 1, vlen: 512, operandQueueDepth, units: { div: { cyclesPerBeat: K } } })
     expect(laneTiming(trace, 0, 0)).toMatchObject({ readStart: 1, readEnd, execStart: 2, writeEnd: 2 + 8 * K })
     expect(trace.cycles).toBe(8 * K + 3)
   })
