@@ -4,10 +4,17 @@
  * memory-bound and a bank-bound stream, and a strip-mined loop long enough to
  * execute a given number of dynamic vector instructions (the heap check).
  */
-import { readFileSync } from 'node:fs'
+import { readdirSync, readFileSync } from 'node:fs'
+import { join } from 'node:path'
 import { fileURLToPath } from 'node:url'
 
 export const longStreamPath = fileURLToPath(new URL('../../examples/long-stream.s', import.meta.url))
+
+/** The shipped examples and kernels: between them every instruction kind the engine times. */
+export function examplePrograms(): string[] {
+  const dirs = ['../../examples/', '../../examples/kernels/'].map((d) => fileURLToPath(new URL(d, import.meta.url)))
+  return dirs.flatMap((d) => readdirSync(d).filter((f) => f.endsWith('.s')).map((f) => readFileSync(join(d, f), 'utf8')))
+}
 
 export function longStream(): string {
   return readFileSync(longStreamPath, 'utf8')

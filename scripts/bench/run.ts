@@ -24,7 +24,7 @@ import { parseMachine, type Machine, type MachineInput } from '../../shared/sche
 import { prepareRun, timePrepared, type PreparedRun } from '../../shared/sim/run'
 import { simulate } from '../../shared/sim/timing/simulate'
 import { bareLoop } from './bare-loop'
-import { bankBound, longStream, longStreamAt, memoryBound, reductionHeavy } from './programs'
+import { bankBound, examplePrograms, longStream, longStreamAt, memoryBound, reductionHeavy } from './programs'
 import { median } from './median'
 
 const RUNS = 7
@@ -140,8 +140,21 @@ function table(rows: string[][]): void {
   console.log()
 }
 
+/**
+ * Times every example and kernel three times before the workloads, so that
+ * V8 has seen every instruction kind, as a Worker or server process that has
+ * run a few programs has: the engine is measured as users get it, not as a
+ * process that only ever timed one kind (docs/model.md "Speed").
+ */
+function mixedWarmUp(machine: Machine): number {
+  const programs = examplePrograms().map((text, i) => prepare(`example ${i}`, text, machine))
+  for (let k = 0; k < 3; k++) for (const p of programs) simulate(p.stream, machine)
+  return programs.length
+}
+
 const loadBefore = loadavg()[0]!
 const defaults = parseMachine({})
+const mixed = mixedWarmUp(defaults)
 const bare = bareRow(defaults.lanes, 500_000)
 const rows = WORKLOADS.map((w) => workloadRow(w, defaults.lanes))
 table([
@@ -171,4 +184,5 @@ const heapRow = (x: HeapFigures | { failed: string }, label: string, judge: bool
 const heapRows = [['measure', 'workload', 'result', 'target', 'met'], heapRow(h.within, '', true)]
 if (h.unbounded) heapRows.push(heapRow(h.unbounded, ', 4 GiB allowed', false))
 table(heapRows)
+console.log(`before the workloads: ${mixed} examples and kernels timed 3 times each (every instruction kind)`)
 console.log(`load average (1 min): ${fmt(loadBefore, 2)} before, ${fmt(loadavg()[0]!, 2)} after`)

@@ -7,7 +7,7 @@ import type { Machine } from '../../schemas/machine'
 import { STALL_RANK } from '../trace/types'
 import type { Derived } from './config'
 import { Arena } from './arena'
-import type { Inst } from './inst'
+import type { InstState } from './inst'
 import { UNIT_COUNT, UNITS } from './config'
 import type { SpanRecorder } from './recorder'
 import type { RegFile } from './regfile'
@@ -45,19 +45,19 @@ export class Ctx {
   /** The cycle being stepped (notes are only valid within it). */
   cycle = 0
   /** Per lane, this cycle: the instructions denied something (each holds its reason in `noteReason`), in note order. */
-  readonly denied: Inst[][]
+  readonly denied: InstState[][]
   readonly deniedCount: Int32Array
   /** Per lane, this cycle: the oldest instruction waiting out a latency (load data, ring values) and why. */
   readonly waitSeq: Int32Array
   readonly waitReason: Int8Array
   /** Per lane, this cycle: the oldest instruction in its read phase, and the arithmetic instruction refused a start. */
-  readonly reader: (Inst | null)[]
-  readonly refused: (Inst | null)[]
+  readonly reader: (InstState | null)[]
+  readonly refused: (InstState | null)[]
   /** Link bookings: [link][cycle mod RING_HORIZON] = cycle booked. */
   readonly upBook: Int32Array
   readonly downBook: Int32Array
   /** Per lane: the instructions started and not finished there, oldest first (kept by Inst). */
-  readonly laneActive: Inst[][]
+  readonly laneActive: InstState[][]
   sink!: CompletionSink
   /** The typed arrays of the run's instructions (arena.ts). */
   readonly arena = new Arena()
@@ -100,8 +100,8 @@ export class Ctx {
     this.deniedCount = new Int32Array(L)
     this.waitSeq = new Int32Array(L)
     this.waitReason = new Int8Array(L)
-    this.reader = new Array<Inst | null>(L).fill(null)
-    this.refused = new Array<Inst | null>(L).fill(null)
+    this.reader = new Array<InstState | null>(L).fill(null)
+    this.refused = new Array<InstState | null>(L).fill(null)
     this.upBook = new Int32Array(links * RING_HORIZON).fill(-1)
     this.downBook = new Int32Array(links * RING_HORIZON).fill(-1)
     this.laneActive = Array.from({ length: L }, () => [])
@@ -113,13 +113,13 @@ export class Ctx {
    * refused several things in one lane-cycle keeps the strongest reason
    * (`STALL_RANK`).
    */
-  deny(lane: number, inst: Inst, reason: number): void {
+  deny(lane: number, inst: InstState, reason: number): void {
     const c = this.cycle
     if (inst.noteCycle[lane] !== c) {
       inst.noteCycle[lane] = c
       inst.noteReason[lane] = reason
       const n = this.deniedCount[lane] ?? 0
-      ;(this.denied[lane] as Inst[])[n] = inst
+      ;(this.denied[lane] as InstState[])[n] = inst
       this.deniedCount[lane] = n + 1
     } else if ((RANK[reason] ?? 0) < (RANK[inst.noteReason[lane] ?? 0] ?? 0)) inst.noteReason[lane] = reason
   }

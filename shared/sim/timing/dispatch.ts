@@ -72,12 +72,12 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
     dst[k] = p
     old[k] = o
   }
-  inst.dst = dst
-  inst.oldDst = old
-  inst.dispatch = c
+  inst.st.dst = dst
+  inst.st.oldDst = old
+  inst.st.dispatch = c
   s.dispatchAt[op.seq] = c
   s.inflight.push(inst)
-  if (inst.hasGlobal) s.globalInsts.push(inst)
+  if (inst.hasGlobal) s.globalInsts.push(inst.st)
   if (inst instanceof MemInst) {
     s.mem.push(inst)
     s.memQueued++

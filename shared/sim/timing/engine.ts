@@ -8,9 +8,10 @@
  * state.ts, dispatch.ts, issue.ts, memory-start.ts and stalls.ts.
  */
 import { frontEnd as frontEndOf } from './dispatch'
-import type { Inst } from './inst'
+import type { Inst, InstState } from './inst'
 import { issueStaggered as issueStaggeredOf, issueTogether as issueTogetherOf } from './issue'
 import { memoryStart as memoryStartOf } from './memory-start'
+import { execStep as execStepOf, globalStep as globalStepOf, readStep as readStepOf, writeStep as writeStepOf } from './phases'
 import type { TimingState } from './state'
 import { classify as classifyOf } from './stalls'
 
@@ -23,6 +24,10 @@ const issueStaggered = issueStaggeredOf
 const issueTogether = issueTogetherOf
 const memoryStart = memoryStartOf
 const classify = classifyOf
+const writeStep = writeStepOf
+const execStep = execStepOf
+const readStep = readStepOf
+const globalStep = globalStepOf
 
 /** Marks "no instruction waits" in Ctx.waitSeq. */
 const NONE = 0x7fffffff
@@ -51,29 +56,29 @@ export function step(s: TimingState): boolean {
   const fl = s.inflight
   // Only memory instructions, reductions and permutations have a phase outside the lanes.
   const gl = s.globalInsts
-  for (let i = 0; i < gl.length; i++) (gl[i] as Inst).global(c)
+  for (let i = 0; i < gl.length; i++) globalStep(gl[i] as InstState, c)
   const together = s.machine.issue !== 'staggered'
   if (together) issueTogether(s, c)
   // Per lane, only instructions started and not finished there take part (most of the queue waits).
   const act = s.active
   for (let l = 0; l < L; l++) {
     // A snapshot: instructions that finish in this lane during the cycle still take their turns.
-    const list = ctx.laneActive[l] as Inst[]
+    const list = ctx.laneActive[l] as InstState[]
     let na = 0
-    for (let i = 0; i < list.length; i++) act[na++] = list[i] as Inst
-    s.oldest[l] = na > 0 ? (act[0] as Inst) : null
-    for (let i = 0; i < na; i++) (act[i] as Inst).write(l, c)
-    for (let i = 0; i < na; i++) (act[i] as Inst).exec(l, c)
+    for (let i = 0; i < list.length; i++) act[na++] = list[i] as InstState
+    s.oldest[l] = na > 0 ? (act[0] as InstState) : null
+    for (let i = 0; i < na; i++) writeStep(act[i] as InstState, l, c)
+    for (let i = 0; i < na; i++) execStep(act[i] as InstState, l, c)
     if (!together) {
       const before = s.laneArithNext[l] ?? 0
       issueStaggered(s, l, c)
       // Instructions that just started in this lane may read in this very cycle.
       for (let k = before; k < (s.laneArithNext[l] ?? 0); k++) {
-        const inst = s.arith.at(k) as Inst
+        const inst = (s.arith.at(k) as Inst).st
         if (inst.laneDone[l] !== 1) act[na++] = inst
       }
     }
-    for (let i = 0; i < na; i++) (act[i] as Inst).read(l, c)
+    for (let i = 0; i < na; i++) readStep(act[i] as InstState, l, c)
   }
   // Instructions dispatched by a lane's issue above were not yet in `fl` for earlier lanes: nothing to do for them now.
   const feActive = frontEnd(s, c)
@@ -90,7 +95,7 @@ export function step(s: TimingState): boolean {
   if (busy) s.lastBusy = c
   if (s.finished) {
     s.finished = false
-    s.inflight = fl.filter((i) => i.complete < 0)
+    s.inflight = fl.filter((i) => i.st.complete < 0)
     s.globalInsts = s.globalInsts.filter((i) => i.complete < 0)
     // Forget finished instructions no lane's issue looks back at any more (it reads the previous one).
     let oldest = s.laneArithNext[0] ?? 0

@@ -51,10 +51,22 @@ export class Operand {
 
 type Queue = 'arith' | 'mem'
 
+/** The instruction classes (engine.ts calls each one's steps through a switch on its kind). */
+export const KIND = { unit: 0, load: 1, store: 2, reduction: 3, orderedReduction: 4, permutation: 5 } as const
+export type Kind = (typeof KIND)[keyof typeof KIND]
+
 /** The destination and results of an instruction before dispatch sets them (never written). */
 const NONE = new Int32Array(0)
 
-export abstract class Inst {
+/**
+ * What every instruction keeps per lane, and the steps all kinds share
+ * (reads, writes, starting and finishing a lane). One class for every kind of
+ * instruction: the per-cycle code that reads it sees one object shape. With the
+ * fields on the instruction classes themselves, a process that had timed all
+ * six kinds ran the long stream 1.6 times slower (V8's property caches at the
+ * shared sites went megamorphic; docs/model.md "Speed").
+ */
+export class InstState {
   readonly seq: number
   readonly L: number
   /** Active element positions (0..vl-1) per lane. */
@@ -67,13 +79,13 @@ export abstract class Inst {
   readonly dstWords: Int32Array
   readonly wrCnt: Int32Array
   /** [lane][word]: cycle the result asks for a write port; -1 while not computed. */
-  protected readyAt: Int32Array = NONE
-  protected maxDstWords = 0
+  readyAt: Int32Array = NONE
+  maxDstWords = 0
   /** Writes a lane may do for this instruction in one cycle. */
-  protected writesPerCycle = 1
+  writesPerCycle = 1
   /** Segment loads: the destination is `dstFields` groups of `dstFieldRegs` registers, written element-major (see Operand). */
-  protected dstFields = 1
-  protected dstFieldRegs = 1
+  dstFields = 1
+  dstFieldRegs = 1
   /** A scalar result (vmv.x.s, vcpop.m): no vector write port, it goes to the front end. */
   scalarDst = false
   readonly started: Uint8Array
@@ -89,13 +101,15 @@ export abstract class Inst {
   /** Per lane: the last cycle the instruction was refused something there (Ctx.deny), and the reason. */
   readonly noteCycle: Int32Array
   readonly noteReason: Int8Array
-  protected readonly base: number
+  readonly base: number
   private readonly chaining: boolean
 
   constructor(
     readonly ctx: Ctx,
-    readonly op: VectorOp,
-    readonly queue: Queue,
+    op: VectorOp,
+    /** The instruction whose kind decides what the shared steps cannot (its work per lane, extra phases). */
+    readonly owner: Inst,
+    readonly kind: Kind,
   ) {
     this.seq = op.seq
     const L = (this.L = ctx.L)
@@ -115,7 +129,7 @@ export abstract class Inst {
   }
 
   /** Sets up results storage once dstWords is known. */
-  protected allocResults(): void {
+  allocResults(): void {
     let max = 0
     for (let l = 0; l < this.L; l++) max = Math.max(max, this.dstWords[l] ?? 0)
     this.maxDstWords = max
@@ -129,16 +143,16 @@ export abstract class Inst {
     return o
   }
 
-  protected setTime(lane: number, field: number, c: number): void {
+  setTime(lane: number, field: number, c: number): void {
     this.ctx.laneTimes[this.base + lane * LANE_FIELD_COUNT + field] = c
   }
 
-  protected time(lane: number, field: number): number {
+  time(lane: number, field: number): number {
     return this.ctx.laneTimes[this.base + lane * LANE_FIELD_COUNT + field] ?? NO_CYCLE
   }
 
   /** Records elements and beats of each lane; lanes without elements keep null phases. */
-  protected writeCounts(): void {
+  writeCounts(): void {
     for (let l = 0; l < this.L; l++) {
       this.setTime(l, F_ELEMENTS, this.n[l] ?? 0)
       this.setTime(l, F_BEATS, this.beats[l] ?? 0)
@@ -149,7 +163,7 @@ export abstract class Inst {
   startLane(lane: number, c: number): void {
     this.started[lane] = 1
     this.startedCount++
-    if (!this.hasWork(lane)) {
+    if (!this.owner.hasWork(lane)) {
       this.readDone[lane] = 1
       this.readDoneCount++
       this.finishLane(lane, c)
@@ -157,11 +171,11 @@ export abstract class Inst {
       return
     }
     // Join the lane's active list in program order (memory and arithmetic instructions start independently).
-    const list = this.ctx.laneActive[lane] as Inst[]
+    const list = this.ctx.laneActive[lane] as InstState[]
     let k = list.length
     list.push(this)
-    while (k > 0 && (list[k - 1] as Inst).seq > this.seq) {
-      list[k] = list[k - 1] as Inst
+    while (k > 0 && (list[k - 1] as InstState).seq > this.seq) {
+      list[k] = list[k - 1] as InstState
       k--
     }
     list[k] = this
@@ -179,15 +193,6 @@ export abstract class Inst {
 
   /** The reason a lane waiting on this instruction without a more specific note is given. */
   waitReason: number = REASON.raw
-
-  hasWorkIn(lane: number): boolean {
-    return this.hasWork(lane)
-  }
-
-  /** Whether the lane has anything to do for this instruction (lanes without any finish at once). */
-  protected hasWork(lane: number): boolean {
-    return (this.n[lane] ?? 0) > 0
-  }
 
   /** Read lane words into the operand queues: one word per operand per cycle, oldest instruction first. */
   read(lane: number, c: number): void {
@@ -275,7 +280,7 @@ export abstract class Inst {
   }
 
   /** A result word of `lane` asks for a write port from cycle `at`. */
-  protected resultReady(lane: number, w: number, at: number): void {
+  resultReady(lane: number, w: number, at: number): void {
     this.readyAt[lane * this.maxDstWords + w] = at
   }
 
@@ -323,19 +328,14 @@ export abstract class Inst {
       t[at + F_WRITE_END] = c
       this.wrCnt[lane] = w
     }
-    if (w >= total && this.lanePhasesDone(lane)) this.finishLane(lane, c)
+    if (w >= total && this.owner.lanePhasesDone(lane)) this.finishLane(lane, c)
   }
 
-  /** Whether a lane has nothing left besides its writes (subclasses with extra phases override). */
-  protected lanePhasesDone(_lane: number): boolean {
-    return true
-  }
-
-  protected finishLane(lane: number, c: number): void {
+  finishLane(lane: number, c: number): void {
     if (this.laneDone[lane] === 1) return
     this.laneDone[lane] = 1
     this.doneCount++
-    const list = this.ctx.laneActive[lane] as Inst[]
+    const list = this.ctx.laneActive[lane] as InstState[]
     const at = list.indexOf(this)
     if (at >= 0) list.splice(at, 1)
     if ((this.n[lane] ?? 0) > 0) {
@@ -344,15 +344,10 @@ export abstract class Inst {
       if (ws !== NO_CYCLE && es !== NO_CYCLE) this.setTime(lane, F_EXEC_END, Math.max(es, ws - 1))
     }
     this.ctx.sink.laneFinished(lane, this.seq, this.tookSlot[lane] === 1)
-    if (this.doneCount === this.L && this.globalDone()) this.finishAll(c)
+    if (this.doneCount === this.L && this.owner.globalDone()) this.finishAll(c)
   }
 
-  /** Whether phases outside the lanes (ring, memory port) are finished. */
-  protected globalDone(): boolean {
-    return true
-  }
-
-  protected finishAll(c: number): void {
+  finishAll(c: number): void {
     if (this.complete >= 0) return
     this.complete = c
     const { rf, ren } = this.ctx
@@ -362,6 +357,54 @@ export abstract class Inst {
     }
     for (const p of this.oldDst) ren.supersede(p)
     this.ctx.sink.completed(this.seq, c)
+  }
+}
+
+/**
+ * An instruction in flight: its kind (the subclasses) decides its work per
+ * lane, its beats and any phase outside the lanes; `st` holds what all kinds
+ * share and takes the shared steps.
+ */
+export abstract class Inst {
+  readonly st: InstState
+
+  constructor(
+    ctx: Ctx,
+    readonly op: VectorOp,
+    readonly queue: Queue,
+    kind: Kind,
+  ) {
+    this.st = new InstState(ctx, op, this, kind)
+  }
+
+  /** The lane may start: reads from this cycle on. */
+  startLane(lane: number, c: number): void {
+    this.st.startLane(lane, c)
+  }
+
+  /** Read lane words into the operand queues (InstState.read). */
+  read(lane: number, c: number): void {
+    this.st.read(lane, c)
+  }
+
+  /** Write back ready results (InstState.write). */
+  write(lane: number, c: number): void {
+    this.st.write(lane, c)
+  }
+
+  /** Whether the lane has anything to do for this instruction (lanes without any finish at once). */
+  hasWork(lane: number): boolean {
+    return (this.st.n[lane] ?? 0) > 0
+  }
+
+  /** Whether a lane has nothing left besides its writes (kinds with extra phases override). */
+  lanePhasesDone(_lane: number): boolean {
+    return true
+  }
+
+  /** Whether phases outside the lanes (ring, memory port) are finished. */
+  globalDone(): boolean {
+    return true
   }
 
   /** Per-lane beat step; called after writes and before reads each cycle. */
@@ -375,7 +418,7 @@ export abstract class Inst {
 
   /** The lane still has work for this instruction. */
   pending(lane: number): boolean {
-    return this.laneDone[lane] !== 1
+    return this.st.laneDone[lane] !== 1
   }
 }
 

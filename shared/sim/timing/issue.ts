@@ -16,16 +16,16 @@ const R_SLOT = REASON.slot
 const R_BARRIER = REASON.barrier
 
 function readEnd(inst: Inst, lane: number, ctx: Ctx): number {
-  return ctx.laneTimes[(inst.seq * ctx.L + lane) * FIELDS + READ_END] ?? NULL_CYCLE
+  return ctx.laneTimes[(inst.st.seq * ctx.L + lane) * FIELDS + READ_END] ?? NULL_CYCLE
 }
 
 function noteStarted(s: TimingState, inst: Inst): void {
-  if (inst.startedCount === s.ctx.L) s.arithQueued--
+  if (inst.st.startedCount === s.ctx.L) s.arithQueued--
 }
 
 function startInLane(s: TimingState, inst: Inst, lane: number, c: number): void {
-  const work = inst.hasWorkIn(lane)
-  inst.tookSlot[lane] = work ? 1 : 0
+  const work = inst.hasWork(lane)
+  inst.st.tookSlot[lane] = work ? 1 : 0
   if (work) s.slotsUsed[lane] = (s.slotsUsed[lane] ?? 0) + 1
   s.laneArithNext[lane] = (s.laneArithNext[lane] ?? 0) + 1
   inst.startLane(lane, c)
@@ -38,23 +38,23 @@ export function issueStaggered(s: TimingState, lane: number, c: number): void {
   for (;;) {
     const k = s.laneArithNext[lane] ?? 0
     const inst = s.arith.at(k)
-    if (!inst || inst.dispatch >= c) return
+    if (!inst || inst.st.dispatch >= c) return
     const prev = k > 0 ? s.arith.at(k - 1) : undefined
-    if (prev && (prev.readDone[lane] !== 1 || readEnd(prev, lane, ctx) >= c)) return
-    if (inst.hasWorkIn(lane) && (s.slotsUsed[lane] ?? 0) >= s.machine.laneSlots) {
-      ctx.deny(lane, inst, R_SLOT)
-      ctx.refused[lane] = inst
+    if (prev && (prev.st.readDone[lane] !== 1 || readEnd(prev, lane, ctx) >= c)) return
+    if (inst.hasWork(lane) && (s.slotsUsed[lane] ?? 0) >= s.machine.laneSlots) {
+      ctx.deny(lane, inst.st, R_SLOT)
+      ctx.refused[lane] = inst.st
       return
     }
     startInLane(s, inst, lane, c)
-    if (inst.hasWorkIn(lane)) return
+    if (inst.hasWork(lane)) return
   }
 }
 
 /** The lane's next arithmetic instruction may not start this cycle. */
 function refuse(ctx: Ctx, lane: number, inst: Inst, reason: number): void {
-  ctx.deny(lane, inst, reason)
-  ctx.refused[lane] = inst
+  ctx.deny(lane, inst.st, reason)
+  ctx.refused[lane] = inst.st
 }
 
 /** Policies `lockstep` and `serial`: the next instruction starts in every lane at once. */
@@ -64,13 +64,13 @@ export function issueTogether(s: TimingState, c: number): void {
   for (;;) {
     const k = s.laneArithNext[0] ?? 0
     const inst = s.arith.at(k)
-    if (!inst || inst.dispatch >= c) return
+    if (!inst || inst.st.dispatch >= c) return
     const prev = k > 0 ? s.arith.at(k - 1) : undefined
     let ok = true
     if (prev) {
-      if (s.machine.issue === 'serial') ok = prev.complete >= 0 && prev.complete < c
+      if (s.machine.issue === 'serial') ok = prev.st.complete >= 0 && prev.st.complete < c
       else {
-        ok = prev.readDoneCount === L
+        ok = prev.st.readDoneCount === L
         for (let l = 0; l < L && ok; l++) if (readEnd(prev, l, ctx) >= c) ok = false
       }
     }
@@ -80,9 +80,9 @@ export function issueTogether(s: TimingState, c: number): void {
     }
     // A lane without a free slot waits for one (`slot`); the others wait for it (`barrier`).
     let full = false
-    for (let l = 0; l < L && !full; l++) full = inst.hasWorkIn(l) && (s.slotsUsed[l] ?? 0) >= s.machine.laneSlots
+    for (let l = 0; l < L && !full; l++) full = inst.hasWork(l) && (s.slotsUsed[l] ?? 0) >= s.machine.laneSlots
     if (full) {
-      for (let q = 0; q < L; q++) refuse(ctx, q, inst, inst.hasWorkIn(q) && (s.slotsUsed[q] ?? 0) >= s.machine.laneSlots ? R_SLOT : R_BARRIER)
+      for (let q = 0; q < L; q++) refuse(ctx, q, inst, inst.hasWork(q) && (s.slotsUsed[q] ?? 0) >= s.machine.laneSlots ? R_SLOT : R_BARRIER)
       return
     }
     for (let l = 0; l < L; l++) startInLane(s, inst, l, c)

@@ -12,7 +12,7 @@ const R_MEMORY = REASON.memory
 
 /** Whether an instruction has finished before cycle c. */
 function isDone(inst: Inst, c: number): boolean {
-  return inst.complete >= 0 && inst.complete < c
+  return inst.st.complete >= 0 && inst.st.complete < c
 }
 
 /** The memory unit starts the next memory instructions, in program order, on free ports. */
@@ -24,7 +24,7 @@ export function memoryStart(s: TimingState, c: number): void {
   }
   for (;;) {
     const inst = s.mem.at(s.memNext)
-    if (!inst || inst.dispatch >= c) return
+    if (!inst || inst.st.dispatch >= c) return
     const port = ports.indexOf(null)
     let ok = port >= 0
     if (ok) {
@@ -33,12 +33,12 @@ export function memoryStart(s: TimingState, c: number): void {
       s.mem.dropBefore(s.memLive)
       for (let k = s.memLive; k < s.memNext && ok; k++) {
         const o = s.mem.at(k) as MemInst
-        if (o.complete >= 0 && o.complete < c) continue
+        if (o.st.complete >= 0 && o.st.complete < c) continue
         if ((o.isStore || inst.isStore) && o.overlaps(inst)) ok = false
       }
     }
     if (!ok) {
-      for (let l = 0; l < s.ctx.L; l++) s.ctx.deny(l, inst, R_MEMORY)
+      for (let l = 0; l < s.ctx.L; l++) s.ctx.deny(l, inst.st, R_MEMORY)
       return
     }
     ports[port] = inst

@@ -11,7 +11,7 @@ import type { VectorOp } from '../exec/stream'
 import { NO_CYCLE, REASON } from '../trace/types'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
-import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst } from './inst'
+import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst, KIND, type Kind, type Operand } from './inst'
 
 export abstract class MemInst extends Inst {
   /**
@@ -34,13 +34,13 @@ export abstract class MemInst extends Inst {
   portUntil = -1
   protected readonly laneBeats: Int32Array
   protected readonly lastCycle: Int32Array
-  protected index: ReturnType<Inst['addSource']> | null = null
+  protected index: Operand | null = null
   protected indexBits = 64
 
-  constructor(ctx: Ctx, op: VectorOp) {
-    super(ctx, op, 'mem')
-    this.waitReason = REASON.memory
-    const L = this.L
+  constructor(ctx: Ctx, op: VectorOp, kind: Kind) {
+    super(ctx, op, 'mem', kind)
+    this.st.waitReason = REASON.memory
+    const L = this.st.L
     this.nf = op.nf ?? 1
     this.count = op.vl * this.nf
     this.eew = op.eew
@@ -49,7 +49,7 @@ export abstract class MemInst extends Inst {
     const unit = !mem || mem.pattern === 'unit' || mem.pattern === 'mask'
     // Values of EEW bits a cycle: a segment's fields each take their place on the bus like elements.
     this.perCycle = unit ? Math.max(1, bus / this.eew) : Math.max(1, Math.min(ctx.m.gatherElementsPerCycle, bus / this.eew))
-    fillLaneElements(this.n, op.vl)
+    fillLaneElements(this.st.n, op.vl)
     let lo = Infinity
     let hi = -Infinity
     const addr = mem?.addresses
@@ -80,7 +80,7 @@ export abstract class MemInst extends Inst {
   /** Gets a memory port: every lane may read (indices, store data) from this cycle. */
   begin(c: number, port: number): void {
     this.port = port
-    for (let l = 0; l < this.L; l++) this.startLane(l, c)
+    for (let l = 0; l < this.st.L; l++) this.startLane(l, c)
   }
 
   protected unitStride(): boolean {
@@ -96,28 +96,28 @@ export abstract class MemInst extends Inst {
   protected indexReady(i: number): boolean {
     const ix = this.index
     if (!ix) return true
-    const lane = i % this.L
-    return (ix.readCnt[lane] ?? 0) >= Math.floor((Math.floor(i / this.L) * this.indexBits) / 64) + 1
+    const lane = i % this.st.L
+    return (ix.readCnt[lane] ?? 0) >= Math.floor((Math.floor(i / this.st.L) * this.indexBits) / 64) + 1
   }
 
   protected touchLane(lane: number, c: number): void {
     if (this.lastCycle[lane] === c) return
-    if (this.lastCycle[lane] === -1) this.setTime(lane, F_EXEC_START, c)
+    if (this.lastCycle[lane] === -1) this.st.setTime(lane, F_EXEC_START, c)
     this.lastCycle[lane] = c
     this.laneBeats[lane] = (this.laneBeats[lane] ?? 0) + 1
-    this.setTime(lane, F_BEATS, this.laneBeats[lane] ?? 0)
-    this.ctx.busyLane(lane)
+    this.st.setTime(lane, F_BEATS, this.laneBeats[lane] ?? 0)
+    this.st.ctx.busyLane(lane)
   }
 
   protected consumeIndex(i: number): void {
     const ix = this.index
     if (!ix) return
-    const lane = i % this.L
-    const local = Math.floor(i / this.L)
-    ix.cons[lane] = local === (this.n[lane] ?? 0) - 1 ? (ix.words[lane] ?? 0) : Math.floor(((local + 1) * this.indexBits) / 64)
+    const lane = i % this.st.L
+    const local = Math.floor(i / this.st.L)
+    ix.cons[lane] = local === (this.st.n[lane] ?? 0) - 1 ? (ix.words[lane] ?? 0) : Math.floor(((local + 1) * this.indexBits) / 64)
   }
 
-  protected override globalDone(): boolean {
+  override globalDone(): boolean {
     return this.busDone
   }
 
@@ -126,23 +126,23 @@ export abstract class MemInst extends Inst {
 
 export class LoadInst extends MemInst {
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op)
+    super(ctx, op, KIND.load)
     const [index] = srcPhys
     if (index && this.indexed) {
       this.indexBits = (op.memory as { indexEew?: number } | undefined)?.indexEew ?? op.sew
-      this.index = this.addSource(index, this.indexBits, (l) => wordsFor(this.n[l] ?? 0, this.indexBits))
+      this.index = this.st.addSource(index, this.indexBits, (l) => wordsFor(this.st.n[l] ?? 0, this.indexBits))
     }
-    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
+    if (maskPhys) this.st.addSource(maskPhys, 1, (l) => wordsFor(this.st.n[l] ?? 0, 1))
     const nf = this.nf
-    for (let l = 0; l < this.L; l++) this.dstWords[l] = nf * wordsFor(this.n[l] ?? 0, this.eew)
+    for (let l = 0; l < this.st.L; l++) this.st.dstWords[l] = nf * wordsFor(this.st.n[l] ?? 0, this.eew)
     // A lane may receive several elements a cycle from a wide bus; with segments, every field of them.
-    this.writesPerCycle = nf === 1 ? Math.max(1, Math.ceil(this.perCycle / this.L)) : Math.min(this.perCycle, nf * Math.ceil((this.perCycle + nf) / (nf * this.L)))
+    this.st.writesPerCycle = nf === 1 ? Math.max(1, Math.ceil(this.perCycle / this.st.L)) : Math.min(this.perCycle, nf * Math.ceil((this.perCycle + nf) / (nf * this.st.L)))
     if (nf > 1) {
-      this.dstFields = nf
-      this.dstFieldRegs = Math.max(1, op.dstRegs.length / nf)
+      this.st.dstFields = nf
+      this.st.dstFieldRegs = Math.max(1, op.dstRegs.length / nf)
     }
-    this.allocResults()
-    this.writeCounts()
+    this.st.allocResults()
+    this.st.writeCounts()
   }
 
   override get hasGlobal(): boolean {
@@ -152,8 +152,8 @@ export class LoadInst extends MemInst {
   /** Issues this cycle's requests on the load bus. */
   override global(c: number): void {
     if (this.port < 0 || this.busDone) return
-    const ctx = this.ctx
-    const L = this.L
+    const ctx = this.st.ctx
+    const L = this.st.L
     const per = 64 / this.eew
     let moved = 0
     let weighed = 0
@@ -179,49 +179,49 @@ export class LoadInst extends MemInst {
       this.consumeIndex(i)
       // Local element j completes word floor(j / per) of field f when it is the word's last element or the lane's.
       const j = (i / L) | 0
-      if ((j + 1) % per === 0 || j + 1 === (this.n[lane] ?? 0)) this.resultReady(lane, ((j / per) | 0) * nf + f, c + ctx.m.memLatency)
+      if ((j + 1) % per === 0 || j + 1 === (this.st.n[lane] ?? 0)) this.st.resultReady(lane, ((j / per) | 0) * nf + f, c + ctx.m.memLatency)
       this.next++
     }
-    if (moved > 0) ctx.takeBus(false, c, moved * this.eew, weighed * this.eew, this.seq)
+    if (moved > 0) ctx.takeBus(false, c, moved * this.eew, weighed * this.eew, this.st.seq)
     if (this.next >= this.count) {
       this.busDone = true
       // One memory pipeline: the port stays with the load until its last element has arrived.
       this.portUntil = c + ctx.m.memLatency
       // Lanes without elements finished at the start; an empty access is complete now.
-      if (this.doneCount === this.L) this.finishAll(c)
+      if (this.st.doneCount === this.st.L) this.st.finishAll(c)
     }
   }
 
   override write(lane: number, c: number): void {
-    if (this.started[lane] === 1 && this.laneDone[lane] !== 1) {
-      const at = this.readyAt[lane * this.maxDstWords + (this.wrCnt[lane] ?? 0)] ?? -1
-      if (at < 0 || at > c) this.ctx.wait(lane, this.seq, REASON.memory)
+    if (this.st.started[lane] === 1 && this.st.laneDone[lane] !== 1) {
+      const at = this.st.readyAt[lane * this.st.maxDstWords + (this.st.wrCnt[lane] ?? 0)] ?? -1
+      if (at < 0 || at > c) this.st.ctx.wait(lane, this.st.seq, REASON.memory)
     }
-    super.write(lane, c)
+    this.st.write(lane, c)
   }
 }
 
 export class StoreInst extends MemInst {
-  private readonly data: ReturnType<Inst['addSource']> | null
+  private readonly data: Operand | null
   private readonly sentCount: Int32Array
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op)
+    super(ctx, op, KIND.store)
     const [data, index] = srcPhys
     const nf = this.nf
-    this.data = data ? this.addSource(data, this.eew, (l) => nf * wordsFor(this.n[l] ?? 0, this.eew)) : null
+    this.data = data ? this.st.addSource(data, this.eew, (l) => nf * wordsFor(this.st.n[l] ?? 0, this.eew)) : null
     if (this.data && nf > 1) {
       this.data.fields = nf
       this.data.fieldRegs = Math.max(1, this.data.group.length / nf)
     }
     if (index && this.indexed) {
       this.indexBits = (op.memory as { indexEew?: number } | undefined)?.indexEew ?? op.sew
-      this.index = this.addSource(index, this.indexBits, (l) => wordsFor(this.n[l] ?? 0, this.indexBits))
+      this.index = this.st.addSource(index, this.indexBits, (l) => wordsFor(this.st.n[l] ?? 0, this.indexBits))
     }
-    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
-    this.allocResults()
-    this.sentCount = this.ctx.arena.i32(this.L)
-    this.writeCounts()
+    if (maskPhys) this.st.addSource(maskPhys, 1, (l) => wordsFor(this.st.n[l] ?? 0, 1))
+    this.st.allocResults()
+    this.sentCount = this.st.ctx.arena.i32(this.st.L)
+    this.st.writeCounts()
   }
 
   override get hasGlobal(): boolean {
@@ -231,8 +231,8 @@ export class StoreInst extends MemInst {
   /** Sends this cycle's elements on the store bus, in element order, once their data words are queued. */
   override global(c: number): void {
     if (this.port < 0 || this.busDone) return
-    const ctx = this.ctx
-    const L = this.L
+    const ctx = this.st.ctx
+    const L = this.st.L
     let moved = 0
     let weighed = 0
     const weight = ctx.laneWeight
@@ -264,25 +264,25 @@ export class StoreInst extends MemInst {
       if (f < nf - 1) continue
       const sent = (this.sentCount[lane] = (this.sentCount[lane] ?? 0) + 1)
       const d = this.data
-      if (d) d.cons[lane] = sent === (this.n[lane] ?? 0) ? (d.words[lane] ?? 0) : Math.floor((sent * this.eew) / 64) * nf
-      if (sent === (this.n[lane] ?? 0)) {
+      if (d) d.cons[lane] = sent === (this.st.n[lane] ?? 0) ? (d.words[lane] ?? 0) : Math.floor((sent * this.eew) / 64) * nf
+      if (sent === (this.st.n[lane] ?? 0)) {
         // The store's write phase in a lane is the cycle its last element leaves for memory.
-        this.setTime(lane, F_WRITE_START, c)
-        this.setTime(lane, F_WRITE_END, c)
-        if (this.time(lane, F_READ_START) === NO_CYCLE) {
-          this.setTime(lane, F_READ_START, c)
-          this.setTime(lane, F_READ_END, c)
+        this.st.setTime(lane, F_WRITE_START, c)
+        this.st.setTime(lane, F_WRITE_END, c)
+        if (this.st.time(lane, F_READ_START) === NO_CYCLE) {
+          this.st.setTime(lane, F_READ_START, c)
+          this.st.setTime(lane, F_READ_END, c)
         }
       }
     }
-    if (moved > 0) ctx.takeBus(true, c, moved * this.eew, weighed * this.eew, this.seq)
+    if (moved > 0) ctx.takeBus(true, c, moved * this.eew, weighed * this.eew, this.st.seq)
     if (this.next >= this.count) {
       this.busDone = true
       this.portUntil = c
     }
-    if (this.busDone && this.doneCount === this.L) this.finishAll(c)
+    if (this.busDone && this.st.doneCount === this.st.L) this.st.finishAll(c)
     for (let l = 0; l < L; l++) {
-      if (this.laneDone[l] !== 1 && this.started[l] === 1 && (this.sentCount[l] ?? 0) >= (this.n[l] ?? 0)) this.finishLane(l, c)
+      if (this.st.laneDone[l] !== 1 && this.st.started[l] === 1 && (this.sentCount[l] ?? 0) >= (this.st.n[l] ?? 0)) this.st.finishLane(l, c)
     }
   }
 

@@ -9,7 +9,7 @@ import type { VectorOp } from '../exec/stream'
 import { REASON } from '../trace/types'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
-import { F_BEATS, F_EXEC_START, F_READ_START, fillLaneElements, Inst } from './inst'
+import { F_BEATS, F_EXEC_START, F_READ_START, fillLaneElements, Inst, KIND } from './inst'
 
 export class PermutationInst extends Inst {
   /** Per source lane, packets in source-word order: source word, destination lane, destination word. */
@@ -23,11 +23,11 @@ export class PermutationInst extends Inst {
   private readonly sent: Int32Array
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op, 'arith')
-    this.waitReason = REASON.ring
-    const L = this.L
+    super(ctx, op, 'arith', KIND.permutation)
+    this.st.waitReason = REASON.ring
+    const L = this.st.L
     const sew = op.sew
-    fillLaneElements(this.n, op.vl)
+    fillLaneElements(this.st.n, op.vl)
     const src = op.sourceIndex ?? new Int32Array(0)
     const maxLocal = new Int32Array(L).fill(-1)
     const rows: [number, number, number][][] = Array.from({ length: L }, () => [])
@@ -46,36 +46,36 @@ export class PermutationInst extends Inst {
       if (!last || last[0] !== sw || last[1] !== b || last[2] !== dw) row.push([sw, b, dw])
     }
     const [vs2, extra] = srcPhys
-    if (vs2) this.addSource(vs2, sew, (l) => wordsFor((maxLocal[l] ?? -1) + 1, sew))
+    if (vs2) this.st.addSource(vs2, sew, (l) => wordsFor((maxLocal[l] ?? -1) + 1, sew))
     // vrgather.vv reads its indices, vcompress its selection mask, in the destination lanes.
-    if (extra) this.addSource(extra, op.op.startsWith('vcompress') ? 1 : sew, (l) => wordsFor(this.n[l] ?? 0, op.op.startsWith('vcompress') ? 1 : sew))
-    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
-    for (let l = 0; l < L; l++) this.dstWords[l] = wordsFor(this.n[l] ?? 0, sew)
-    this.allocResults()
+    if (extra) this.st.addSource(extra, op.op.startsWith('vcompress') ? 1 : sew, (l) => wordsFor(this.st.n[l] ?? 0, op.op.startsWith('vcompress') ? 1 : sew))
+    if (maskPhys) this.st.addSource(maskPhys, 1, (l) => wordsFor(this.st.n[l] ?? 0, 1))
+    for (let l = 0; l < L; l++) this.st.dstWords[l] = wordsFor(this.st.n[l] ?? 0, sew)
+    this.st.allocResults()
     this.pkWord = []
     this.pkDst = []
     this.pkDstWord = []
-    this.waiting = ctx.arena.i32(L * this.maxDstWords)
-    this.arrival = ctx.arena.i32(L * this.maxDstWords)
+    this.waiting = ctx.arena.i32(L * this.st.maxDstWords)
+    this.arrival = ctx.arena.i32(L * this.st.maxDstWords)
     for (let a = 0; a < L; a++) {
       const row = (rows[a] as [number, number, number][]).sort((x, y) => x[0] - y[0])
       this.pkWord.push(Int32Array.from(row, (r) => r[0]))
       this.pkDst.push(Int32Array.from(row, (r) => r[1]))
       this.pkDstWord.push(Int32Array.from(row, (r) => r[2]))
-      for (const [, b, dw] of row) this.waiting[b * this.maxDstWords + dw] = (this.waiting[b * this.maxDstWords + dw] ?? 0) + 1
+      for (const [, b, dw] of row) this.waiting[b * this.st.maxDstWords + dw] = (this.waiting[b * this.st.maxDstWords + dw] ?? 0) + 1
     }
     this.pkNext = ctx.arena.i32(L)
     this.sent = ctx.arena.i32(L)
-    this.writeCounts()
+    this.st.writeCounts()
   }
 
-  protected override hasWork(lane: number): boolean {
-    return (this.n[lane] ?? 0) > 0 || (this.pkWord[lane]?.length ?? 0) > 0
+  override hasWork(lane: number): boolean {
+    return (this.st.n[lane] ?? 0) > 0 || (this.pkWord[lane]?.length ?? 0) > 0
   }
 
   override startLane(lane: number, c: number): void {
-    super.startLane(lane, c)
-    if (this.time(lane, F_READ_START) >= 0) this.engage(lane, this.time(lane, F_READ_START))
+    this.st.startLane(lane, c)
+    if (this.st.time(lane, F_READ_START) >= 0) this.engage(lane, this.st.time(lane, F_READ_START))
   }
 
   /**
@@ -84,16 +84,16 @@ export class PermutationInst extends Inst {
    * scalars, zeros, undisturbed elements) are ready from then on.
    */
   private engage(lane: number, first: number): void {
-    if (this.time(lane, F_EXEC_START) >= 0 || !this.hasWork(lane)) return
-    this.setTime(lane, F_EXEC_START, first + 1)
-    for (let w = 0; w < (this.dstWords[lane] ?? 0); w++) {
-      if ((this.waiting[lane * this.maxDstWords + w] ?? 0) === 0) this.resultReady(lane, w, first + 1)
+    if (this.st.time(lane, F_EXEC_START) >= 0 || !this.hasWork(lane)) return
+    this.st.setTime(lane, F_EXEC_START, first + 1)
+    for (let w = 0; w < (this.st.dstWords[lane] ?? 0); w++) {
+      if ((this.waiting[lane * this.st.maxDstWords + w] ?? 0) === 0) this.st.resultReady(lane, w, first + 1)
     }
   }
 
   override read(lane: number, c: number): void {
-    super.read(lane, c)
-    if (this.time(lane, F_READ_START) === c) this.engage(lane, c)
+    this.st.read(lane, c)
+    if (this.st.time(lane, F_READ_START) === c) this.engage(lane, c)
   }
 
   exec(_lane: number, _c: number): void {}
@@ -104,12 +104,12 @@ export class PermutationInst extends Inst {
 
   /** Each source lane injects its next packet when its word is queued and the whole path is free. */
   override global(c: number): void {
-    const ctx = this.ctx
-    const L = this.L
+    const ctx = this.st.ctx
+    const L = this.st.L
     const hop = ctx.m.ringHopLatency
-    const vs2 = this.srcs[0]
+    const vs2 = this.st.srcs[0]
     for (let a = 0; a < L; a++) {
-      if (this.started[a] !== 1) continue
+      if (this.st.started[a] !== 1) continue
       const words = this.pkWord[a] as Int32Array
       const k = this.pkNext[a] ?? 0
       if (k >= words.length) continue
@@ -126,19 +126,19 @@ export class PermutationInst extends Inst {
         free = ctx.linkFree(up, link, c + h * hop)
       }
       if (!free) {
-        ctx.deny(a, this, REASON.ring)
+        ctx.deny(a, this.st, REASON.ring)
         continue
       }
-      for (let h = 0; h < hops; h++) ctx.bookLink(up, up ? (a + h) % L : (a - h - 1 + L) % L, c + h * hop, this.seq)
+      for (let h = 0; h < hops; h++) ctx.bookLink(up, up ? (a + h) % L : (a - h - 1 + L) % L, c + h * hop, this.st.seq)
       ctx.busyLane(a)
       const at = c + hops * hop
       const dw = (this.pkDstWord[a] as Int32Array)[k] ?? 0
-      const slot = b * this.maxDstWords + dw
+      const slot = b * this.st.maxDstWords + dw
       this.arrival[slot] = Math.max(this.arrival[slot] ?? 0, at)
       this.waiting[slot] = (this.waiting[slot] ?? 0) - 1
-      if (this.waiting[slot] === 0) this.resultReady(b, dw, this.arrival[slot] ?? at)
+      if (this.waiting[slot] === 0) this.st.resultReady(b, dw, this.arrival[slot] ?? at)
       this.sent[a] = (this.sent[a] ?? 0) + 1
-      this.setTime(a, F_BEATS, this.sent[a] ?? 0)
+      this.st.setTime(a, F_BEATS, this.sent[a] ?? 0)
       this.pkNext[a] = k + 1
       // A source word leaves its queue once all its packets are on their way.
       vs2.cons[a] = k + 1 < words.length ? (words[k + 1] ?? 0) : (vs2.words[a] ?? 0)
@@ -146,23 +146,23 @@ export class PermutationInst extends Inst {
   }
 
   override write(lane: number, c: number): void {
-    const extra = this.srcs[1]
-    if (extra && extra !== this.srcs[0] && (extra.readCnt[lane] ?? 0) < (extra.words[lane] ?? 0)) return
+    const extra = this.st.srcs[1]
+    if (extra && extra !== this.st.srcs[0] && (extra.readCnt[lane] ?? 0) < (extra.words[lane] ?? 0)) return
     // Nothing is written before the lane's own read phase has begun.
-    if (this.time(lane, F_EXEC_START) < 0) return
-    const w = this.wrCnt[lane] ?? 0
-    const total = this.dstWords[lane] ?? 0
+    if (this.st.time(lane, F_EXEC_START) < 0) return
+    const w = this.st.wrCnt[lane] ?? 0
+    const total = this.st.dstWords[lane] ?? 0
     // The last word is written once the lane has read and sent all its own source words,
     // so that a lane's phases stay in order: read, then exchange, then write.
-    if (w === total - 1 && (this.readDone[lane] !== 1 || !this.lanePhasesDone(lane) || this.time(lane, 3) >= c)) return
-    if (this.started[lane] === 1 && this.laneDone[lane] !== 1 && w < total) {
-      const at = this.readyAt[lane * this.maxDstWords + w] ?? -1
-      if (at < 0) this.ctx.wait(lane, this.seq, REASON.ring) // waiting for packets from other lanes
+    if (w === total - 1 && (this.st.readDone[lane] !== 1 || !this.lanePhasesDone(lane) || this.st.time(lane, 3) >= c)) return
+    if (this.st.started[lane] === 1 && this.st.laneDone[lane] !== 1 && w < total) {
+      const at = this.st.readyAt[lane * this.st.maxDstWords + w] ?? -1
+      if (at < 0) this.st.ctx.wait(lane, this.st.seq, REASON.ring) // waiting for packets from other lanes
     }
-    super.write(lane, c)
+    this.st.write(lane, c)
   }
 
-  protected override lanePhasesDone(lane: number): boolean {
+  override lanePhasesDone(lane: number): boolean {
     return (this.pkNext[lane] ?? 0) >= (this.pkWord[lane]?.length ?? 0)
   }
 }

@@ -10,7 +10,7 @@ import type { VectorOp } from '../exec/stream'
 import { REASON } from '../trace/types'
 import { elementsPerBeat, UNIT_COUNT as UNITS_PER_LANE, UNIT_INDEX, unitLatency, wordsFor } from './config'
 import type { Ctx } from './context'
-import { F_EXEC_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst } from './inst'
+import { F_EXEC_START, F_WRITE_END, F_WRITE_START, fillLaneElements, Inst, KIND } from './inst'
 import { execUnitOf, maskBits } from './units'
 
 // Copied once: under tsx's module transform (Node: the CLIs, the server, the bench) each use of an imported binding is a getter call.
@@ -52,25 +52,25 @@ export class ReductionInst extends Inst {
   private readonly tIn: Int32Array
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op, 'arith')
-    this.waitReason = REASON.ring
+    super(ctx, op, 'arith', KIND.reduction)
+    this.st.waitReason = REASON.ring
     const unit = execUnitOf(op)
     this.u = UNIT_INDEX[unit]
     this.D = unitLatency(ctx.m, unit)
     const bits = maskBits(op)
     this.epc = bits.maskOnly ? 64 : elementsPerBeat(ctx.m, unit, op.sew)
     this.A = ctx.m.reductionAccumulators
-    this.scalarDst = op.scalarResult
-    const L = this.L
-    fillLaneElements(this.n, op.vl)
+    this.st.scalarDst = op.scalarResult
+    const L = this.st.L
+    fillLaneElements(this.st.n, op.vl)
     const [vs2, vs1] = srcPhys
-    if (vs2) this.addSource(vs2, bits.src, (l) => wordsFor(this.n[l] ?? 0, bits.src))
+    if (vs2) this.st.addSource(vs2, bits.src, (l) => wordsFor(this.st.n[l] ?? 0, bits.src))
     this.hasVs1 = !!vs1 && !op.scalarResult
-    if (vs1 && this.hasVs1) this.addSource(vs1, op.sew, (l) => (l === 0 && op.vl > 0 ? 1 : 0))
-    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
-    for (let l = 0; l < L; l++) this.beats[l] = Math.ceil((this.n[l] ?? 0) / this.epc)
-    this.dstWords[0] = op.vl > 0 ? 1 : 0
-    this.allocResults()
+    if (vs1 && this.hasVs1) this.st.addSource(vs1, op.sew, (l) => (l === 0 && op.vl > 0 ? 1 : 0))
+    if (maskPhys) this.st.addSource(maskPhys, 1, (l) => wordsFor(this.st.n[l] ?? 0, 1))
+    for (let l = 0; l < L; l++) this.st.beats[l] = Math.ceil((this.st.n[l] ?? 0) / this.epc)
+    this.st.dstWords[0] = op.vl > 0 ? 1 : 0
+    this.st.allocResults()
     const arena = ctx.arena
     this.beatDone = arena.i32(L)
     this.acc = arena.i32(L * this.A).fill(-1)
@@ -81,27 +81,27 @@ export class ReductionInst extends Inst {
     this.tLevel = arena.i8(this.tree ? L : 0)
     this.tVal = arena.i32(this.tree ? L : 0).fill(-1)
     this.tIn = arena.i32(this.tree ? L * this.levels : 0).fill(-1)
-    this.writeCounts()
+    this.st.writeCounts()
   }
 
   private get vs2() {
-    return this.srcs[0]
+    return this.st.srcs[0]
   }
 
   exec(lane: number, c: number): void {
-    if (this.started[lane] !== 1) return
-    const ctx = this.ctx
+    if (this.st.started[lane] !== 1) return
+    const ctx = this.st.ctx
     const uk = lane * UNIT_COUNT + this.u
     if ((ctx.unitFree[uk] ?? 0) > c) return
     const j = this.beatDone[lane] ?? 0
-    const b = this.beats[lane] ?? 0
+    const b = this.st.beats[lane] ?? 0
     if (j < b) {
-      const n = this.n[lane] ?? 0
+      const n = this.st.n[lane] ?? 0
       const upto = Math.min(n, (j + 1) * this.epc)
       const vs2 = this.vs2
       // Integer word counts (upto x bits stays far below 2^31).
       if (vs2 && (vs2.readCnt[lane] ?? 0) < (upto * vs2.bits + 63) >> 6) return
-      const mask = this.op.masked ? this.srcs[this.srcs.length - 1] : undefined
+      const mask = this.op.masked ? this.st.srcs[this.st.srcs.length - 1] : undefined
       if (mask && (mask.readCnt[lane] ?? 0) < (upto + 63) >> 6) return
       const a = lane * this.A + (j % this.A)
       if ((this.acc[a] ?? -1) > c) {
@@ -110,7 +110,7 @@ export class ReductionInst extends Inst {
       }
       this.beat(lane, uk, c)
       this.acc[a] = c + this.D
-      if (j === 0) this.setTime(lane, F_EXEC_START, c)
+      if (j === 0) this.st.setTime(lane, F_EXEC_START, c)
       const last = j === b - 1
       if (vs2) vs2.cons[lane] = last ? (vs2.words[lane] ?? 0) : (upto * vs2.bits) >> 6
       if (mask) mask.cons[lane] = last ? (mask.words[lane] ?? 0) : upto >> 6
@@ -142,7 +142,7 @@ export class ReductionInst extends Inst {
       return
     }
     if (this.stage === STAGE_FINAL && lane === 0 && c >= this.valueAt) {
-      const vs1 = this.srcs[1]
+      const vs1 = this.st.srcs[1]
       if (vs1 && (vs1.readCnt[0] ?? 0) < 1) return
       this.beat(lane, uk, c)
       this.valueAt = c + this.D
@@ -151,9 +151,9 @@ export class ReductionInst extends Inst {
   }
 
   private beat(lane: number, uk: number, c: number): void {
-    const ctx = this.ctx
+    const ctx = this.st.ctx
     ctx.unitFree[uk] = c + 1
-    ctx.rec.use(ctx.unitRes[uk] ?? 0, c, 1, this.seq)
+    ctx.rec.use(ctx.unitRes[uk] ?? 0, c, 1, this.st.seq)
     ctx.busyLane(lane)
   }
 
@@ -178,7 +178,7 @@ export class ReductionInst extends Inst {
     const left = this.partials[lane] ?? 0
     if (left <= 1) {
       if (!pending && i1 >= 0) this.laneValue[lane] = this.acc[base + i1] ?? c
-      else this.ctx.busyLane(lane)
+      else this.st.ctx.busyLane(lane)
       const v = this.laneValue[lane] ?? -1
       if (v >= 0 && this.tree) {
         this.tVal[lane] = v
@@ -187,7 +187,7 @@ export class ReductionInst extends Inst {
       return
     }
     if (i1 < 0 || i2 < 0) {
-      this.ctx.busyLane(lane)
+      this.st.ctx.busyLane(lane)
       return
     }
     this.beat(lane, uk, c)
@@ -197,7 +197,7 @@ export class ReductionInst extends Inst {
   }
 
   private activeLanes(): number {
-    return Math.min(this.op.vl, this.L)
+    return Math.min(this.op.vl, this.st.L)
   }
 
   private maybeStartRing(): void {
@@ -225,7 +225,7 @@ export class ReductionInst extends Inst {
 
   /** Tree: a lane whose value is ready sends it 2^k lanes down, over 2^k links, hop after hop. */
   private treeSend(c: number): void {
-    const ctx = this.ctx
+    const ctx = this.st.ctx
     const hop = ctx.m.ringHopLatency
     const top = this.activeLanes()
     for (let l = 1; l < top; l++) {
@@ -236,15 +236,15 @@ export class ReductionInst extends Inst {
       let free = true
       for (let j = 0; j < dist && free; j++) free = ctx.linkFree(false, l - 1 - j, c + j * hop)
       if (!free) {
-        ctx.deny(l, this, R_RING)
+        ctx.deny(l, this.st, R_RING)
         continue
       }
-      for (let j = 0; j < dist; j++) ctx.bookLink(false, l - 1 - j, c + j * hop, this.seq)
+      for (let j = 0; j < dist; j++) ctx.bookLink(false, l - 1 - j, c + j * hop, this.st.seq)
       ctx.busyLane(l)
-      this.setTime(l, F_WRITE_START, c)
-      this.setTime(l, F_WRITE_END, c)
+      this.st.setTime(l, F_WRITE_START, c)
+      this.st.setTime(l, F_WRITE_END, c)
       this.tLevel[l] = this.levels
-      this.finishLane(l, c)
+      this.st.finishLane(l, c)
       this.tIn[(l - dist) * this.levels + k] = c + dist * hop
     }
   }
@@ -257,7 +257,7 @@ export class ReductionInst extends Inst {
 
   private toWrite(): void {
     this.stage = STAGE_WRITE
-    this.resultReady(0, 0, this.valueAt)
+    this.st.resultReady(0, 0, this.valueAt)
   }
 
   override get hasGlobal(): boolean {
@@ -271,41 +271,41 @@ export class ReductionInst extends Inst {
     }
     if (this.stage !== STAGE_SEND || c < this.valueAt) return
     const from = this.pos
-    if (!this.ctx.bookLink(false, from - 1, c, this.seq)) {
-      this.ctx.deny(from, this, R_RING)
+    if (!this.st.ctx.bookLink(false, from - 1, c, this.st.seq)) {
+      this.st.ctx.deny(from, this.st, R_RING)
       return
     }
-    this.ctx.busyLane(from)
-    this.setTime(from, F_WRITE_START, c)
-    this.setTime(from, F_WRITE_END, c)
-    this.finishLane(from, c)
+    this.st.ctx.busyLane(from)
+    this.st.setTime(from, F_WRITE_START, c)
+    this.st.setTime(from, F_WRITE_END, c)
+    this.st.finishLane(from, c)
     this.pos = from - 1
-    this.valueAt = c + this.ctx.m.ringHopLatency
+    this.valueAt = c + this.st.ctx.m.ringHopLatency
     this.stage = STAGE_ADD
   }
 
   override write(lane: number, c: number): void {
-    if (lane !== 0 || this.started[0] !== 1) {
+    if (lane !== 0 || this.st.started[0] !== 1) {
       this.waiting(lane)
       return
     }
-    if (this.stage !== STAGE_WRITE && (this.n[0] ?? 0) > 0) {
+    if (this.stage !== STAGE_WRITE && (this.st.n[0] ?? 0) > 0) {
       this.waiting(lane)
       return
     }
-    super.write(lane, c)
+    this.st.write(lane, c)
   }
 
   /** A lane whose own work is done waits for the ring: the wait is the ring's. */
   private waiting(lane: number): void {
-    if (this.laneDone[lane] === 1 || this.started[lane] !== 1) return
-    if ((this.beatDone[lane] ?? 0) >= (this.beats[lane] ?? 0) && (this.laneValue[lane] ?? -1) >= 0) {
-      this.ctx.wait(lane, this.seq, R_RING)
+    if (this.st.laneDone[lane] === 1 || this.st.started[lane] !== 1) return
+    if ((this.beatDone[lane] ?? 0) >= (this.st.beats[lane] ?? 0) && (this.laneValue[lane] ?? -1) >= 0) {
+      this.st.ctx.wait(lane, this.st.seq, R_RING)
     }
   }
 
-  protected override lanePhasesDone(lane: number): boolean {
-    return lane === 0 ? this.stage === STAGE_WRITE || (this.n[0] ?? 0) === 0 : true
+  override lanePhasesDone(lane: number): boolean {
+    return lane === 0 ? this.stage === STAGE_WRITE || (this.st.n[0] ?? 0) === 0 : true
   }
 }
 
@@ -323,65 +323,65 @@ export class OrderedReductionInst extends Inst {
   private readonly beatDone: Int32Array
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op, 'arith')
-    this.waitReason = REASON.ring
+    super(ctx, op, 'arith', KIND.orderedReduction)
+    this.st.waitReason = REASON.ring
     const unit = execUnitOf(op)
     this.u = UNIT_INDEX[unit]
     this.D = unitLatency(ctx.m, unit)
-    const L = this.L
-    fillLaneElements(this.n, op.vl)
+    const L = this.st.L
+    fillLaneElements(this.st.n, op.vl)
     const [vs2, vs1] = srcPhys
-    if (vs2) this.addSource(vs2, op.sew, (l) => wordsFor(this.n[l] ?? 0, op.sew))
-    if (vs1) this.addSource(vs1, op.sew, (l) => (l === 0 && op.vl > 0 ? 1 : 0))
-    if (maskPhys) this.addSource(maskPhys, 1, (l) => wordsFor(this.n[l] ?? 0, 1))
+    if (vs2) this.st.addSource(vs2, op.sew, (l) => wordsFor(this.st.n[l] ?? 0, op.sew))
+    if (vs1) this.st.addSource(vs1, op.sew, (l) => (l === 0 && op.vl > 0 ? 1 : 0))
+    if (maskPhys) this.st.addSource(maskPhys, 1, (l) => wordsFor(this.st.n[l] ?? 0, 1))
     this.lastOfLane = ctx.arena.i32(L).fill(-1)
     for (let l = 0; l < L; l++) {
       // One element a beat: the order forbids folding elements together.
-      this.beats[l] = this.n[l] ?? 0
-      if ((this.n[l] ?? 0) > 0) this.lastOfLane[l] = l + ((this.n[l] ?? 0) - 1) * L
+      this.st.beats[l] = this.st.n[l] ?? 0
+      if ((this.st.n[l] ?? 0) > 0) this.lastOfLane[l] = l + ((this.st.n[l] ?? 0) - 1) * L
     }
-    this.dstWords[0] = op.vl > 0 ? 1 : 0
-    this.allocResults()
+    this.st.dstWords[0] = op.vl > 0 ? 1 : 0
+    this.st.allocResults()
     this.beatDone = ctx.arena.i32(L)
-    this.writeCounts()
+    this.st.writeCounts()
   }
 
   exec(lane: number, c: number): void {
-    if (this.started[lane] !== 1 || this.adding || this.next >= this.op.vl) return
-    const L = this.L
+    if (this.st.started[lane] !== 1 || this.adding || this.next >= this.op.vl) return
+    const L = this.st.L
     if (lane !== this.next % L || this.at !== lane) return
-    const vs1 = this.srcs[1]
+    const vs1 = this.st.srcs[1]
     if (this.valueAt < 0) {
       // The running value starts as vs1[0], read in lane 0.
       if (!vs1 || (vs1.readCnt[0] ?? 0) < 1) return
       this.valueAt = c
     }
     if (c < this.valueAt) {
-      this.ctx.busyLane(lane)
+      this.st.ctx.busyLane(lane)
       return
     }
-    const vs2 = this.srcs[0]
+    const vs2 = this.st.srcs[0]
     const local = Math.floor(this.next / L)
     const word = Math.floor((local * this.op.sew) / 64)
     if (vs2 && (vs2.readCnt[lane] ?? 0) < word + 1) return
-    const mask = this.op.masked ? this.srcs[this.srcs.length - 1] : undefined
+    const mask = this.op.masked ? this.st.srcs[this.st.srcs.length - 1] : undefined
     if (mask && (mask.readCnt[lane] ?? 0) < Math.floor(local / 64) + 1) return
     const uk = lane * UNIT_COUNT + this.u
-    const ctx = this.ctx
+    const ctx = this.st.ctx
     if ((ctx.unitFree[uk] ?? 0) > c) return
     ctx.unitFree[uk] = c + 1
-    ctx.rec.use(ctx.unitRes[uk] ?? 0, c, 1, this.seq)
+    ctx.rec.use(ctx.unitRes[uk] ?? 0, c, 1, this.st.seq)
     ctx.busyLane(lane)
-    if ((this.beatDone[lane] ?? 0) === 0) this.setTime(lane, F_EXEC_START, c)
+    if ((this.beatDone[lane] ?? 0) === 0) this.st.setTime(lane, F_EXEC_START, c)
     this.beatDone[lane] = (this.beatDone[lane] ?? 0) + 1
-    const lastLocal = (this.n[lane] ?? 0) - 1
+    const lastLocal = (this.st.n[lane] ?? 0) - 1
     if (vs2) vs2.cons[lane] = local === lastLocal ? (vs2.words[lane] ?? 0) : Math.floor(((local + 1) * this.op.sew) / 64)
     if (mask) mask.cons[lane] = local === lastLocal ? (mask.words[lane] ?? 0) : Math.floor((local + 1) / 64)
     if (vs1 && lane === 0) vs1.cons[0] = 1
     this.valueAt = c + this.D
     this.next++
     this.target = this.next < this.op.vl ? this.next % L : 0
-    if (this.target === lane && this.next >= this.op.vl) this.resultReady(0, 0, this.valueAt)
+    if (this.target === lane && this.next >= this.op.vl) this.st.resultReady(0, 0, this.valueAt)
   }
 
   override get hasGlobal(): boolean {
@@ -392,39 +392,39 @@ export class OrderedReductionInst extends Inst {
     if (this.at === this.target || this.valueAt < 0 || c < this.valueAt) return
     if (this.next === 0) return
     const from = this.at
-    if (!this.ctx.bookLink(true, from, c, this.seq)) {
-      this.ctx.deny(from, this, R_RING)
+    if (!this.st.ctx.bookLink(true, from, c, this.st.seq)) {
+      this.st.ctx.deny(from, this.st, R_RING)
       return
     }
-    this.ctx.busyLane(from)
+    this.st.ctx.busyLane(from)
     if (this.lastOfLane[from] === this.next - 1 || ((this.lastOfLane[from] ?? -1) < this.next && from !== 0)) {
-      if (this.laneDone[from] !== 1 && (this.n[from] ?? 0) > 0 && (this.lastOfLane[from] ?? -1) < this.next) {
-        if (this.time(from, F_WRITE_START) < 0) this.setTime(from, F_WRITE_START, c)
-        this.setTime(from, F_WRITE_END, c)
-        if (from !== 0) this.finishLane(from, c)
+      if (this.st.laneDone[from] !== 1 && (this.st.n[from] ?? 0) > 0 && (this.lastOfLane[from] ?? -1) < this.next) {
+        if (this.st.time(from, F_WRITE_START) < 0) this.st.setTime(from, F_WRITE_START, c)
+        this.st.setTime(from, F_WRITE_END, c)
+        if (from !== 0) this.st.finishLane(from, c)
       }
     }
-    this.at = (from + 1) % this.L
-    this.valueAt = c + this.ctx.m.ringHopLatency
-    if (this.at === this.target && this.next >= this.op.vl) this.resultReady(0, 0, this.valueAt)
+    this.at = (from + 1) % this.st.L
+    this.valueAt = c + this.st.ctx.m.ringHopLatency
+    if (this.at === this.target && this.next >= this.op.vl) this.st.resultReady(0, 0, this.valueAt)
   }
 
   override write(lane: number, c: number): void {
     if (lane !== 0) return
     if (this.next < this.op.vl || this.at !== 0) return
-    super.write(lane, c)
+    this.st.write(lane, c)
   }
 
-  protected override lanePhasesDone(lane: number): boolean {
+  override lanePhasesDone(lane: number): boolean {
     return lane !== 0 || (this.next >= this.op.vl && this.at === 0)
   }
 
   /** A lane done with its elements still waits on the ring while the running value has yet to pass through it. */
   override pending(lane: number): boolean {
-    if (this.laneDone[lane] !== 1) return true
-    if (this.complete >= 0 || this.op.vl === 0) return false
+    if (this.st.laneDone[lane] !== 1) return true
+    if (this.st.complete >= 0 || this.op.vl === 0) return false
     // The value moves up the ring one lane a hop: to each remaining element's lane in turn, then home to lane 0.
-    const L = this.L
+    const L = this.st.L
     const vl = this.op.vl
     const toLast = this.next < vl ? ((this.next - this.at) % L + L) % L + (vl - 1 - this.next) : 0
     const lastLane = (this.at + toLast) % L

@@ -3,7 +3,7 @@
  * most one reason a lane-cycle, and per instruction every refusal counted.
  */
 import { REASON } from '../trace/types'
-import type { Inst } from './inst'
+import type { Inst, InstState } from './inst'
 import { STALL_COUNT as STRIDE, type TimingState } from './state'
 
 const NONE = 0x7fffffff
@@ -17,7 +17,7 @@ const STALL_COUNT: number = STRIDE
  * instruction only after the lane finished reading this one, so each cycle it
  * loses delays all younger ones); with none, the oldest still in flight.
  */
-function critical(s: TimingState, lane: number): Inst | null {
+function critical(s: TimingState, lane: number): InstState | null {
   const ctx = s.ctx
   const reader = ctx.reader[lane] ?? null
   const refused = ctx.refused[lane] ?? null
@@ -31,9 +31,9 @@ function critical(s: TimingState, lane: number): Inst | null {
  */
 function starved(s: TimingState, l: number, c: number): boolean {
   const next = s.arith.at(s.laneArithNext[l] ?? 0)
-  if (next && next.dispatch < c) return false
+  if (next && next.st.dispatch < c) return false
   const mem = s.mem.at(s.memNext)
-  return !mem || mem.dispatch >= c
+  return !mem || mem.st.dispatch >= c
 }
 
 /**
@@ -54,7 +54,7 @@ function frontEndReason(s: TimingState, feWaiting: boolean): number {
  */
 export function classify(s: TimingState, l: number, c: number, feWaiting: boolean, nextSeq: number): void {
   const ctx = s.ctx
-  const denied = ctx.denied[l] as Inst[]
+  const denied = ctx.denied[l] as InstState[]
   const nd = ctx.deniedCount[l] ?? 0
   let reason = -1
   let seq = -1
@@ -73,9 +73,9 @@ export function classify(s: TimingState, l: number, c: number, feWaiting: boolea
       seq = s.feDispatched >= 0 && s.hold < 0 ? s.feDispatched : nextSeq
     }
   } else {
-    let oldest: Inst | null = null
+    let oldest: InstState | null = null
     for (let i = 0; i < nd; i++) {
-      const inst = denied[i] as Inst
+      const inst = denied[i] as InstState
       if (!oldest || inst.seq < oldest.seq) oldest = inst
     }
     const waitSeq = ctx.waitSeq[l] ?? NONE
@@ -90,9 +90,9 @@ export function classify(s: TimingState, l: number, c: number, feWaiting: boolea
       const fl = s.inflight
       for (let i = 0; i < fl.length; i++) {
         const inst = fl[i] as Inst
-        if (inst.dispatch < c && inst.pending(l)) {
-          reason = inst.waitReason
-          seq = inst.seq
+        if (inst.st.dispatch < c && inst.pending(l)) {
+          reason = inst.st.waitReason
+          seq = inst.st.seq
           break
         }
       }
@@ -106,7 +106,7 @@ export function classify(s: TimingState, l: number, c: number, feWaiting: boolea
   // A timed lane may stand for several alike lanes (symmetry.ts): each of them lost the cycle.
   const w = ctx.laneWeight[l] ?? 1
   for (let i = 0; i < nd; i++) {
-    const inst = denied[i] as Inst
+    const inst = denied[i] as InstState
     const k = inst.seq * STALL_COUNT + (inst.noteReason[l] ?? 0)
     st[k] = (st[k] ?? 0) + w
   }

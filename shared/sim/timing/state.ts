@@ -8,7 +8,7 @@ import type { SimulateOptions, TimingError } from '../trace/types'
 import { DEFAULT_CYCLE_LIMIT, DEFAULT_TRACE_LIMIT, LANE_FIELD_COUNT, NO_CYCLE, REASON, STALL_REASONS } from '../trace/types'
 import { derive } from './config'
 import { Ctx } from './context'
-import type { Inst } from './inst'
+import type { Inst, InstState } from './inst'
 import type { MemInst } from './memory'
 import { ProgramOrderList } from './program-order-list'
 import { RegFile } from './regfile'
@@ -52,7 +52,7 @@ export interface TimingState {
   // Instructions in flight, in program order
   inflight: Inst[]
   /** The instructions in flight with a phase outside the lanes (Inst.hasGlobal), in program order. */
-  globalInsts: Inst[]
+  globalInsts: InstState[]
   /** Program-order lists of the arithmetic and memory instructions, by absolute position. */
   readonly arith: ProgramOrderList<Inst>
   readonly mem: ProgramOrderList<MemInst>
@@ -66,11 +66,11 @@ export interface TimingState {
   readonly slotRelease: Int32Array
   readonly memPorts: (MemInst | null)[]
   /** Scratch list of the instructions active in one lane this cycle. */
-  readonly active: Inst[]
+  readonly active: InstState[]
   /** Whether an instruction in flight finished since the last sweep of `inflight`. */
   finished: boolean
   /** Per lane, this cycle: the oldest instruction started there before the cycle (null: none). */
-  readonly oldest: (Inst | null)[]
+  readonly oldest: (InstState | null)[]
 }
 
 export function createTimingState(source: DynamicStream, sourceMachine: Machine, options: SimulateOptions = {}): TimingState {
@@ -128,7 +128,7 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
     slotRelease: new Int32Array(L),
     memPorts: Array.from({ length: machine.memoryPorts }, () => null),
     active: [],
-    oldest: new Array<Inst | null>(L).fill(null),
+    oldest: new Array<InstState | null>(L).fill(null),
     finished: false,
   }
   for (let i = 0; i < ops.length; i++) {
