@@ -1,7 +1,8 @@
 /**
  * An instruction in flight: its per-lane element counts, source operand
- * queues, results waiting for write ports, and the phase times it records.
- * Subclasses add what their shape needs (units, reductions, ring, memory).
+ * queues, results waiting for write ports, and the phase times it records
+ * (`InstState`, one class for every kind), and its kind (the `Inst`
+ * subclasses: units, reductions, ring, memory), which adds what its shape needs.
  */
 import type { VectorOp } from '../exec/stream'
 import { LANE_FIELD_COUNT as FIELD_COUNT, NO_CYCLE as NULL_CYCLE, REASON } from '../trace/types'
