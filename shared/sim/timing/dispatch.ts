@@ -11,6 +11,7 @@ import type { Inst } from './inst'
 import { LoadInst, MemInst, StoreInst } from './memory'
 import { opClass } from './op-class'
 import { PermutationInst } from './permutation'
+import { hasGlobalStep } from './phases'
 import { OrderedReductionInst, ReductionInst } from './reduction'
 import type { TimingState } from './state'
 import { UnitInst } from './units'
@@ -77,7 +78,7 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
   inst.st.dispatch = c
   s.dispatchAt[op.seq] = c
   s.inflight.push(inst)
-  if (inst.hasGlobal) s.globalInsts.push(inst.st)
+  if (hasGlobalStep(inst.st)) s.globalInsts.push(inst.st)
   if (inst instanceof MemInst) {
     s.mem.push(inst)
     s.memQueued++

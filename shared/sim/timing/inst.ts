@@ -363,8 +363,9 @@ export class InstState {
 
 /**
  * An instruction in flight: its kind (the subclasses) decides its work per
- * lane, its beats and any phase outside the lanes; `st` holds what all kinds
- * share and takes the shared steps.
+ * lane, its beats and any phase outside the lanes, in the methods phases.ts
+ * calls (`write`, `exec`, `read`, `global`, where the kind has them); `st`
+ * holds what all kinds share and takes the shared steps.
  */
 export abstract class Inst {
   readonly st: InstState
@@ -383,16 +384,6 @@ export abstract class Inst {
     this.st.startLane(lane, c)
   }
 
-  /** Read lane words into the operand queues (InstState.read). */
-  read(lane: number, c: number): void {
-    this.st.read(lane, c)
-  }
-
-  /** Write back ready results (InstState.write). */
-  write(lane: number, c: number): void {
-    this.st.write(lane, c)
-  }
-
   /** Whether the lane has anything to do for this instruction (lanes without any finish at once). */
   hasWork(lane: number): boolean {
     return (this.st.n[lane] ?? 0) > 0
@@ -406,15 +397,6 @@ export abstract class Inst {
   /** Whether phases outside the lanes (ring, memory port) are finished. */
   globalDone(): boolean {
     return true
-  }
-
-  /** Per-lane beat step; called after writes and before reads each cycle. */
-  abstract exec(lane: number, c: number): void
-  /** Step outside the lanes (memory unit, ring); called first in each cycle, only when `hasGlobal`. */
-  global(_c: number): void {}
-  /** Whether the subclass has a step outside the lanes (`global`). */
-  get hasGlobal(): boolean {
-    return false
   }
 
   /** The lane still has work for this instruction. */

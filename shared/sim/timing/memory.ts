@@ -121,7 +121,6 @@ export abstract class MemInst extends Inst {
     return this.busDone
   }
 
-  exec(_lane: number, _c: number): void {}
 }
 
 export class LoadInst extends MemInst {
@@ -145,12 +144,9 @@ export class LoadInst extends MemInst {
     this.st.writeCounts()
   }
 
-  override get hasGlobal(): boolean {
-    return true
-  }
 
   /** Issues this cycle's requests on the load bus. */
-  override global(c: number): void {
+  global(c: number): void {
     if (this.port < 0 || this.busDone) return
     const ctx = this.st.ctx
     const L = this.st.L
@@ -192,7 +188,7 @@ export class LoadInst extends MemInst {
     }
   }
 
-  override write(lane: number, c: number): void {
+  write(lane: number, c: number): void {
     if (this.st.started[lane] === 1 && this.st.laneDone[lane] !== 1) {
       const at = this.st.readyAt[lane * this.st.maxDstWords + (this.st.wrCnt[lane] ?? 0)] ?? -1
       if (at < 0 || at > c) this.st.ctx.wait(lane, this.st.seq, REASON.memory)
@@ -224,12 +220,9 @@ export class StoreInst extends MemInst {
     this.st.writeCounts()
   }
 
-  override get hasGlobal(): boolean {
-    return true
-  }
 
   /** Sends this cycle's elements on the store bus, in element order, once their data words are queued. */
-  override global(c: number): void {
+  global(c: number): void {
     if (this.port < 0 || this.busDone) return
     const ctx = this.st.ctx
     const L = this.st.L
@@ -286,5 +279,4 @@ export class StoreInst extends MemInst {
     }
   }
 
-  override write(_lane: number, _c: number): void {}
 }

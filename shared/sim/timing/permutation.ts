@@ -91,19 +91,15 @@ export class PermutationInst extends Inst {
     }
   }
 
-  override read(lane: number, c: number): void {
+  read(lane: number, c: number): void {
     this.st.read(lane, c)
     if (this.st.time(lane, F_READ_START) === c) this.engage(lane, c)
   }
 
-  exec(_lane: number, _c: number): void {}
 
-  override get hasGlobal(): boolean {
-    return true
-  }
 
   /** Each source lane injects its next packet when its word is queued and the whole path is free. */
-  override global(c: number): void {
+  global(c: number): void {
     const ctx = this.st.ctx
     const L = this.st.L
     const hop = ctx.m.ringHopLatency
@@ -145,7 +141,7 @@ export class PermutationInst extends Inst {
     }
   }
 
-  override write(lane: number, c: number): void {
+  write(lane: number, c: number): void {
     const extra = this.st.srcs[1]
     if (extra && extra !== this.st.srcs[0] && (extra.readCnt[lane] ?? 0) < (extra.words[lane] ?? 0)) return
     // Nothing is written before the lane's own read phase has begun.

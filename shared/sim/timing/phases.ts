@@ -20,15 +20,14 @@ const REDUCTION: number = KIND.reduction
 const ORDERED: number = KIND.orderedReduction
 const PERMUTATION: number = KIND.permutation
 
-/** Write-back in `lane` (element-wise instructions share InstState.write). */
+/** Write-back in `lane` (element-wise instructions share InstState.write; stores write no register). */
 export function writeStep(st: InstState, lane: number, c: number): void {
   const k = st.kind
   if (k === UNIT) st.write(lane, c)
   else if (k === LOAD) (st.owner as LoadInst).write(lane, c)
-  else if (k === STORE) (st.owner as StoreInst).write(lane, c)
   else if (k === REDUCTION) (st.owner as ReductionInst).write(lane, c)
   else if (k === ORDERED) (st.owner as OrderedReductionInst).write(lane, c)
-  else (st.owner as PermutationInst).write(lane, c)
+  else if (k === PERMUTATION) (st.owner as PermutationInst).write(lane, c)
 }
 
 /** Beats in `lane`. */
@@ -46,7 +45,12 @@ export function readStep(st: InstState, lane: number, c: number): void {
   else st.read(lane, c)
 }
 
-/** The step outside the lanes (memory unit, ring) of an instruction that has one. */
+/** Whether the instruction has a step outside the lanes: every kind but element-wise work. */
+export function hasGlobalStep(st: InstState): boolean {
+  return st.kind !== UNIT
+}
+
+/** The step outside the lanes (memory unit, ring) of an instruction that has one (hasGlobalStep). */
 export function globalStep(st: InstState, c: number): void {
   const k = st.kind
   if (k === LOAD) (st.owner as LoadInst).global(c)

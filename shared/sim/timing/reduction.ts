@@ -260,11 +260,8 @@ export class ReductionInst extends Inst {
     this.st.resultReady(0, 0, this.valueAt)
   }
 
-  override get hasGlobal(): boolean {
-    return true
-  }
 
-  override global(c: number): void {
+  global(c: number): void {
     if (this.tree) {
       if (this.stage === STAGE_LANES) this.treeSend(c)
       return
@@ -284,7 +281,7 @@ export class ReductionInst extends Inst {
     this.stage = STAGE_ADD
   }
 
-  override write(lane: number, c: number): void {
+  write(lane: number, c: number): void {
     if (lane !== 0 || this.st.started[0] !== 1) {
       this.waiting(lane)
       return
@@ -384,11 +381,8 @@ export class OrderedReductionInst extends Inst {
     if (this.target === lane && this.next >= this.op.vl) this.st.resultReady(0, 0, this.valueAt)
   }
 
-  override get hasGlobal(): boolean {
-    return true
-  }
 
-  override global(c: number): void {
+  global(c: number): void {
     if (this.at === this.target || this.valueAt < 0 || c < this.valueAt) return
     if (this.next === 0) return
     const from = this.at
@@ -409,7 +403,7 @@ export class OrderedReductionInst extends Inst {
     if (this.at === this.target && this.next >= this.op.vl) this.st.resultReady(0, 0, this.valueAt)
   }
 
-  override write(lane: number, c: number): void {
+  write(lane: number, c: number): void {
     if (lane !== 0) return
     if (this.next < this.op.vl || this.at !== 0) return
     this.st.write(lane, c)

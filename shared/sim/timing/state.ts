@@ -51,7 +51,7 @@ export interface TimingState {
   feDispatched: number
   // Instructions in flight, in program order
   inflight: Inst[]
-  /** The instructions in flight with a phase outside the lanes (Inst.hasGlobal), in program order. */
+  /** The instructions in flight with a phase outside the lanes (hasGlobalStep, phases.ts), in program order. */
   globalInsts: InstState[]
   /** Program-order lists of the arithmetic and memory instructions, by absolute position. */
   readonly arith: ProgramOrderList<Inst>
