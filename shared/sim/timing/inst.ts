@@ -52,7 +52,7 @@ export class Operand {
 
 type Queue = 'arith' | 'mem'
 
-/** The instruction classes (engine.ts calls each one's steps through a switch on its kind). */
+/** The instruction classes (phases.ts calls each one's steps through a switch on its kind). */
 export const KIND = { unit: 0, load: 1, store: 2, reduction: 3, orderedReduction: 4, permutation: 5 } as const
 export type Kind = (typeof KIND)[keyof typeof KIND]
 
