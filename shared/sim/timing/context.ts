@@ -34,6 +34,14 @@ export class Ctx {
   readonly linkDownRes: Int32Array
   readonly loadBusRes: number
   readonly storeBusRes: number
+  /**
+   * Machine fields read every cycle, copied once: the one-lane plan's machine
+   * (symmetry.ts) is an object of another shape than a parsed one, and a
+   * property read that has seen both is slower.
+   */
+  readonly loadBusBits: number
+  readonly storeBusBits: number
+  readonly ringHopLatency: number
   /** Bits the load and store buses still carry in `busCycle` (accesses take them oldest first). */
   private loadBusLeft = 0
   private storeBusLeft = 0
@@ -70,6 +78,9 @@ export class Ctx {
     readonly laneTimes: Int32Array,
   ) {
     this.m = d.machine
+    this.loadBusBits = this.m.loadBusBits
+    this.storeBusBits = this.m.storeBusBits
+    this.ringHopLatency = this.m.ringHopLatency
     const L = (this.L = d.lanes)
     this.unitFree = new Int32Array(L * UNIT_COUNT)
     this.unitRes = new Int32Array(L * UNIT_COUNT)
@@ -136,8 +147,8 @@ export class Ctx {
   busLeft(store: boolean, c: number): number {
     if (this.busCycle !== c) {
       this.busCycle = c
-      this.loadBusLeft = this.m.loadBusBits
-      this.storeBusLeft = this.m.storeBusBits
+      this.loadBusLeft = this.loadBusBits
+      this.storeBusLeft = this.storeBusBits
     }
     return store ? this.storeBusLeft : this.loadBusLeft
   }

@@ -64,6 +64,7 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
   const mask = op.masked ? Int32Array.of(ren.lookup(0)) : null
   if (mask) ren.addReader(mask[0] ?? 0)
   const inst = makeInst(ctx, op, src, mask)
+  inst.st.fillWork()
   const n = op.dstRegs.length
   const dst = ctx.arena.i32(n)
   const old = ctx.arena.i32(n)
@@ -77,13 +78,13 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
   inst.st.oldDst = old
   inst.st.dispatch = c
   s.dispatchAt[op.seq] = c
-  s.inflight.push(inst)
+  s.inflight.push(inst.st)
   if (hasGlobalStep(inst.st)) s.globalInsts.push(inst.st)
   if (inst instanceof MemInst) {
     s.mem.push(inst)
     s.memQueued++
   } else {
-    s.arith.push(inst)
+    s.arith.push(inst.st)
     s.arithQueued++
   }
   return true
@@ -91,7 +92,7 @@ function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
 
 /** One front-end cycle: a scalar instruction, a vset, or up to dispatchWidth vector dispatches. */
 export function frontEnd(s: TimingState, c: number): boolean {
-  const ops = s.stream.ops
+  const ops = s.ops
   s.feReason = R_FRONTEND
   s.feDispatched = -1
   if (s.hold >= 0 || s.holdReleasedAt === c) return false
@@ -124,11 +125,11 @@ export function frontEnd(s: TimingState, c: number): boolean {
       s.hold = op.seq
       return true
     }
-    if (dispatched >= s.machine.dispatchWidth) return true
+    if (dispatched >= s.dispatchWidth) return true
   }
 }
 
 function advance(s: TimingState): void {
   s.opIdx++
-  s.scalarLeft = s.stream.ops[s.opIdx]?.scalarBefore ?? 0
+  s.scalarLeft = s.ops[s.opIdx]?.scalarBefore ?? 0
 }

@@ -8,7 +8,7 @@
  * state.ts, dispatch.ts, issue.ts, memory-start.ts and stalls.ts.
  */
 import { frontEnd as frontEndOf } from './dispatch'
-import type { Inst, InstState } from './inst'
+import type { InstState } from './inst'
 import { issueStaggered as issueStaggeredOf, issueTogether as issueTogetherOf } from './issue'
 import { memoryStart as memoryStartOf } from './memory-start'
 import { execStep as execStepOf, globalStep as globalStepOf, readStep as readStepOf, writeStep as writeStepOf } from './phases'
@@ -57,7 +57,7 @@ export function step(s: TimingState): boolean {
   // Only memory instructions, reductions and permutations have a phase outside the lanes.
   const gl = s.globalInsts
   for (let i = 0; i < gl.length; i++) globalStep(gl[i] as InstState, c)
-  const together = s.machine.issue !== 'staggered'
+  const together = s.together
   if (together) issueTogether(s, c)
   // Per lane, only instructions started and not finished there take part (most of the queue waits).
   const act = s.active
@@ -74,7 +74,7 @@ export function step(s: TimingState): boolean {
       issueStaggered(s, l, c)
       // Instructions that just started in this lane may read in this very cycle.
       for (let k = before; k < (s.laneArithNext[l] ?? 0); k++) {
-        const inst = (s.arith.at(k) as Inst).st
+        const inst = s.arith.at(k) as InstState
         if (inst.laneDone[l] !== 1) act[na++] = inst
       }
     }
@@ -83,9 +83,10 @@ export function step(s: TimingState): boolean {
   // Instructions dispatched by a lane's issue above were not yet in `fl` for earlier lanes: nothing to do for them now.
   const feActive = frontEnd(s, c)
   let busy = feActive
-  const ops = s.stream.ops
+  const ops = s.ops
   const feWaiting = s.opIdx < ops.length || s.hold >= 0
-  const nextSeq = s.hold >= 0 ? s.hold : (ops[s.opIdx]?.seq ?? -1)
+  // An op's seq is its index in the stream (createTimingState checks).
+  const nextSeq = s.hold >= 0 ? s.hold : s.opIdx < ops.length ? s.opIdx : -1
   for (let l = 0; l < L; l++) {
     if (ctx.progress[l] === 1) busy = true
     classify(s, l, c, feWaiting, nextSeq)
@@ -95,7 +96,7 @@ export function step(s: TimingState): boolean {
   if (busy) s.lastBusy = c
   if (s.finished) {
     s.finished = false
-    s.inflight = fl.filter((i) => i.st.complete < 0)
+    s.inflight = fl.filter((i) => i.complete < 0)
     s.globalInsts = s.globalInsts.filter((i) => i.complete < 0)
     // Forget finished instructions no lane's issue looks back at any more (it reads the previous one).
     let oldest = s.laneArithNext[0] ?? 0

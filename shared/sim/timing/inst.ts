@@ -89,6 +89,8 @@ export class InstState {
   dstFieldRegs = 1
   /** A scalar result (vmv.x.s, vcpop.m): no vector write port, it goes to the front end. */
   scalarDst = false
+  /** Lanes with anything to do for the instruction (the kind decides: `Inst.hasWork`; set by `fillWork`). */
+  readonly work: Uint8Array
   readonly started: Uint8Array
   readonly readDone: Uint8Array
   readonly laneDone: Uint8Array
@@ -119,6 +121,7 @@ export class InstState {
     this.beats = arena.i32(L)
     this.dstWords = arena.i32(L)
     this.wrCnt = arena.i32(L)
+    this.work = arena.u8(L)
     this.started = arena.u8(L)
     this.readDone = arena.u8(L)
     this.laneDone = arena.u8(L)
@@ -127,6 +130,11 @@ export class InstState {
     this.noteReason = arena.i8(L)
     this.base = op.seq * L * LANE_FIELD_COUNT
     this.chaining = ctx.m.chaining
+  }
+
+  /** Asks the kind which lanes have work, once it is built (dispatch): the per-cycle code then reads `work`. */
+  fillWork(): void {
+    for (let l = 0; l < this.L; l++) this.work[l] = this.owner.hasWork(l) ? 1 : 0
   }
 
   /** Sets up results storage once dstWords is known. */
@@ -164,7 +172,7 @@ export class InstState {
   startLane(lane: number, c: number): void {
     this.started[lane] = 1
     this.startedCount++
-    if (!this.owner.hasWork(lane)) {
+    if (this.work[lane] !== 1) {
       this.readDone[lane] = 1
       this.readDoneCount++
       this.finishLane(lane, c)
@@ -379,11 +387,6 @@ export abstract class Inst {
     this.st = new InstState(ctx, op, this, kind)
   }
 
-  /** The lane may start: reads from this cycle on. */
-  startLane(lane: number, c: number): void {
-    this.st.startLane(lane, c)
-  }
-
   /** Whether the lane has anything to do for this instruction (lanes without any finish at once). */
   hasWork(lane: number): boolean {
     return (this.st.n[lane] ?? 0) > 0
@@ -397,11 +400,6 @@ export abstract class Inst {
   /** Whether phases outside the lanes (ring, memory port) are finished. */
   globalDone(): boolean {
     return true
-  }
-
-  /** The lane still has work for this instruction. */
-  pending(lane: number): boolean {
-    return this.st.laneDone[lane] !== 1
   }
 }
 

@@ -4,8 +4,9 @@
  */
 import { LANE_FIELD_COUNT, NO_CYCLE, REASON } from '../trace/types'
 import type { Ctx } from './context'
-import type { Inst } from './inst'
+import type { InstState } from './inst'
 import { F_READ_END } from './inst'
+import { startLaneStep as startLaneStepOf } from './phases'
 import type { TimingState } from './state'
 
 // Imported bindings copied once: a module binding may cost a getter call per use in the per-cycle paths.
@@ -14,21 +15,22 @@ const READ_END: number = F_READ_END
 const NULL_CYCLE: number = NO_CYCLE
 const R_SLOT = REASON.slot
 const R_BARRIER = REASON.barrier
+const startLaneStep = startLaneStepOf
 
-function readEnd(inst: Inst, lane: number, ctx: Ctx): number {
-  return ctx.laneTimes[(inst.st.seq * ctx.L + lane) * FIELDS + READ_END] ?? NULL_CYCLE
+function readEnd(inst: InstState, lane: number, ctx: Ctx): number {
+  return ctx.laneTimes[(inst.seq * ctx.L + lane) * FIELDS + READ_END] ?? NULL_CYCLE
 }
 
-function noteStarted(s: TimingState, inst: Inst): void {
-  if (inst.st.startedCount === s.ctx.L) s.arithQueued--
+function noteStarted(s: TimingState, inst: InstState): void {
+  if (inst.startedCount === s.ctx.L) s.arithQueued--
 }
 
-function startInLane(s: TimingState, inst: Inst, lane: number, c: number): void {
-  const work = inst.hasWork(lane)
-  inst.st.tookSlot[lane] = work ? 1 : 0
+function startInLane(s: TimingState, inst: InstState, lane: number, c: number): void {
+  const work = inst.work[lane] === 1
+  inst.tookSlot[lane] = work ? 1 : 0
   if (work) s.slotsUsed[lane] = (s.slotsUsed[lane] ?? 0) + 1
   s.laneArithNext[lane] = (s.laneArithNext[lane] ?? 0) + 1
-  inst.startLane(lane, c)
+  startLaneStep(inst, lane, c)
   noteStarted(s, inst)
 }
 
@@ -38,23 +40,29 @@ export function issueStaggered(s: TimingState, lane: number, c: number): void {
   for (;;) {
     const k = s.laneArithNext[lane] ?? 0
     const inst = s.arith.at(k)
-    if (!inst || inst.st.dispatch >= c) return
+    if (!inst || inst.dispatch >= c) return
     const prev = k > 0 ? s.arith.at(k - 1) : undefined
-    if (prev && (prev.st.readDone[lane] !== 1 || readEnd(prev, lane, ctx) >= c)) return
-    if (inst.hasWork(lane) && (s.slotsUsed[lane] ?? 0) >= s.machine.laneSlots) {
-      ctx.deny(lane, inst.st, R_SLOT)
-      ctx.refused[lane] = inst.st
+    if (prev && (prev.readDone[lane] !== 1 || readEnd(prev, lane, ctx) >= c)) return
+    const work = inst.work[lane] === 1
+    if (work && (s.slotsUsed[lane] ?? 0) >= s.laneSlots) {
+      ctx.deny(lane, inst, R_SLOT)
+      ctx.refused[lane] = inst
       return
     }
     startInLane(s, inst, lane, c)
-    if (inst.hasWork(lane)) return
+    if (work) return
   }
 }
 
 /** The lane's next arithmetic instruction may not start this cycle. */
-function refuse(ctx: Ctx, lane: number, inst: Inst, reason: number): void {
-  ctx.deny(lane, inst.st, reason)
-  ctx.refused[lane] = inst.st
+function refuse(ctx: Ctx, lane: number, inst: InstState, reason: number): void {
+  ctx.deny(lane, inst, reason)
+  ctx.refused[lane] = inst
+}
+
+/** Whether the instruction has work in the lane and the lane has no free slot. */
+function slotFull(s: TimingState, inst: InstState, lane: number): boolean {
+  return inst.work[lane] === 1 && (s.slotsUsed[lane] ?? 0) >= s.laneSlots
 }
 
 /** Policies `lockstep` and `serial`: the next instruction starts in every lane at once. */
@@ -64,13 +72,13 @@ export function issueTogether(s: TimingState, c: number): void {
   for (;;) {
     const k = s.laneArithNext[0] ?? 0
     const inst = s.arith.at(k)
-    if (!inst || inst.st.dispatch >= c) return
+    if (!inst || inst.dispatch >= c) return
     const prev = k > 0 ? s.arith.at(k - 1) : undefined
     let ok = true
     if (prev) {
-      if (s.machine.issue === 'serial') ok = prev.st.complete >= 0 && prev.st.complete < c
+      if (s.serial) ok = prev.complete >= 0 && prev.complete < c
       else {
-        ok = prev.st.readDoneCount === L
+        ok = prev.readDoneCount === L
         for (let l = 0; l < L && ok; l++) if (readEnd(prev, l, ctx) >= c) ok = false
       }
     }
@@ -80,9 +88,9 @@ export function issueTogether(s: TimingState, c: number): void {
     }
     // A lane without a free slot waits for one (`slot`); the others wait for it (`barrier`).
     let full = false
-    for (let l = 0; l < L && !full; l++) full = inst.hasWork(l) && (s.slotsUsed[l] ?? 0) >= s.machine.laneSlots
+    for (let l = 0; l < L && !full; l++) full = slotFull(s, inst, l)
     if (full) {
-      for (let q = 0; q < L; q++) refuse(ctx, q, inst, inst.hasWork(q) && (s.slotsUsed[q] ?? 0) >= s.machine.laneSlots ? R_SLOT : R_BARRIER)
+      for (let q = 0; q < L; q++) refuse(ctx, q, inst, slotFull(s, inst, q) ? R_SLOT : R_BARRIER)
       return
     }
     for (let l = 0; l < L; l++) startInLane(s, inst, l, c)

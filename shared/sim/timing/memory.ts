@@ -36,6 +36,18 @@ export abstract class MemInst extends Inst {
   protected readonly lastCycle: Int32Array
   protected index: Operand | null = null
   protected indexBits = 64
+  /**
+   * What the per-element loops read of the op, copied once: ops come in
+   * several object shapes (with or without `memory`, `active`, `nf`), and a
+   * property read that has seen them all is slow (docs/model.md "Speed").
+   */
+  readonly isStore: boolean
+  protected readonly indexed: boolean
+  /** Unit-stride (or mask) access: moves whole lines, masked-off elements included. */
+  protected readonly unitStride: boolean
+  /** Active elements (absent: all), as VectorOp.active. */
+  protected readonly active: Uint8Array | null
+  protected readonly memLatency: number
 
   constructor(ctx: Ctx, op: VectorOp, kind: Kind) {
     super(ctx, op, 'mem', kind)
@@ -45,8 +57,12 @@ export abstract class MemInst extends Inst {
     this.count = op.vl * this.nf
     this.eew = op.eew
     const mem = op.memory
+    this.isStore = mem?.isStore === true
+    this.indexed = mem?.pattern === 'indexed'
+    this.active = op.active ?? null
+    this.memLatency = ctx.m.memLatency
     const bus = mem?.isStore ? ctx.m.storeBusBits : ctx.m.loadBusBits
-    const unit = !mem || mem.pattern === 'unit' || mem.pattern === 'mask'
+    const unit = (this.unitStride = !mem || mem.pattern === 'unit' || mem.pattern === 'mask')
     // Values of EEW bits a cycle: a segment's fields each take their place on the bus like elements.
     this.perCycle = unit ? Math.max(1, bus / this.eew) : Math.max(1, Math.min(ctx.m.gatherElementsPerCycle, bus / this.eew))
     fillLaneElements(this.st.n, op.vl)
@@ -65,14 +81,6 @@ export abstract class MemInst extends Inst {
     this.lastCycle = ctx.arena.i32(L).fill(-1)
   }
 
-  get isStore(): boolean {
-    return this.op.memory?.isStore === true
-  }
-
-  get indexed(): boolean {
-    return this.op.memory?.pattern === 'indexed'
-  }
-
   overlaps(o: MemInst): boolean {
     return this.lo < o.hi && o.lo < this.hi
   }
@@ -80,16 +88,12 @@ export abstract class MemInst extends Inst {
   /** Gets a memory port: every lane may read (indices, store data) from this cycle. */
   begin(c: number, port: number): void {
     this.port = port
-    for (let l = 0; l < this.st.L; l++) this.startLane(l, c)
-  }
-
-  protected unitStride(): boolean {
-    const p = this.op.memory?.pattern
-    return p === undefined || p === 'unit' || p === 'mask'
+    for (let l = 0; l < this.st.L; l++) this.st.startLane(l, c)
   }
 
   protected isActive(i: number): boolean {
-    return !this.op.active || this.op.active[i] === 1
+    const a = this.active
+    return a === null || a[i] === 1
   }
 
   /** Whether element i's index (indexed) is queued in its lane. */
@@ -154,7 +158,7 @@ export class LoadInst extends MemInst {
     let moved = 0
     let weighed = 0
     const weight = ctx.laneWeight
-    const unit = this.unitStride()
+    const unit = this.unitStride
     // The load bus is shared: older accesses took their share of this cycle first.
     const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(false, c) / this.eew))
     const nf = this.nf
@@ -175,14 +179,14 @@ export class LoadInst extends MemInst {
       this.consumeIndex(i)
       // Local element j completes word floor(j / per) of field f when it is the word's last element or the lane's.
       const j = (i / L) | 0
-      if ((j + 1) % per === 0 || j + 1 === (this.st.n[lane] ?? 0)) this.st.resultReady(lane, ((j / per) | 0) * nf + f, c + ctx.m.memLatency)
+      if ((j + 1) % per === 0 || j + 1 === (this.st.n[lane] ?? 0)) this.st.resultReady(lane, ((j / per) | 0) * nf + f, c + this.memLatency)
       this.next++
     }
     if (moved > 0) ctx.takeBus(false, c, moved * this.eew, weighed * this.eew, this.st.seq)
     if (this.next >= this.count) {
       this.busDone = true
       // One memory pipeline: the port stays with the load until its last element has arrived.
-      this.portUntil = c + ctx.m.memLatency
+      this.portUntil = c + this.memLatency
       // Lanes without elements finished at the start; an empty access is complete now.
       if (this.st.doneCount === this.st.L) this.st.finishAll(c)
     }
@@ -229,7 +233,7 @@ export class StoreInst extends MemInst {
     let moved = 0
     let weighed = 0
     const weight = ctx.laneWeight
-    const unit = this.unitStride()
+    const unit = this.unitStride
     // The store bus is shared: older accesses took their share of this cycle first.
     const most = Math.min(this.perCycle, Math.floor(ctx.busLeft(true, c) / this.eew))
     const nf = this.nf

@@ -73,7 +73,8 @@ export class PermutationInst extends Inst {
     return (this.st.n[lane] ?? 0) > 0 || (this.pkWord[lane]?.length ?? 0) > 0
   }
 
-  override startLane(lane: number, c: number): void {
+  /** The lane may start (phases.ts `startLaneStep`): reads from this cycle on, and the datapath engages. */
+  startLane(lane: number, c: number): void {
     this.st.startLane(lane, c)
     if (this.st.time(lane, F_READ_START) >= 0) this.engage(lane, this.st.time(lane, F_READ_START))
   }
@@ -102,7 +103,7 @@ export class PermutationInst extends Inst {
   global(c: number): void {
     const ctx = this.st.ctx
     const L = this.st.L
-    const hop = ctx.m.ringHopLatency
+    const hop = ctx.ringHopLatency
     const vs2 = this.st.srcs[0]
     for (let a = 0; a < L; a++) {
       if (this.st.started[a] !== 1) continue

@@ -45,6 +45,18 @@ export function readStep(st: InstState, lane: number, c: number): void {
   else st.read(lane, c)
 }
 
+/** The lane may start: reads from this cycle on (a permutation also engages its datapath). */
+export function startLaneStep(st: InstState, lane: number, c: number): void {
+  if (st.kind === PERMUTATION) (st.owner as PermutationInst).startLane(lane, c)
+  else st.startLane(lane, c)
+}
+
+/** Whether the lane still has work for the instruction (an ordered reduction's running value may yet pass through it). */
+export function pendingStep(st: InstState, lane: number): boolean {
+  if (st.kind === ORDERED) return (st.owner as OrderedReductionInst).pending(lane)
+  return st.laneDone[lane] !== 1
+}
+
 /** Whether the instruction has a step outside the lanes: every kind but element-wise work. */
 export function hasGlobalStep(st: InstState): boolean {
   return st.kind !== UNIT

@@ -24,6 +24,9 @@ const STAGE_FINAL = 3 // lane 0 adds vs1[0]
 const STAGE_WRITE = 4 // vd[0] or the scalar result is being written
 
 export class ReductionInst extends Inst {
+  // Copied from the op once: ops come in several object shapes, and a property read that has seen them all is slow.
+  private readonly vl: number
+  private readonly masked: boolean
   private readonly u: number
   private readonly D: number
   private readonly epc: number
@@ -53,6 +56,8 @@ export class ReductionInst extends Inst {
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
     super(ctx, op, 'arith', KIND.reduction)
+    this.vl = op.vl
+    this.masked = op.masked
     this.st.waitReason = REASON.ring
     const unit = execUnitOf(op)
     this.u = UNIT_INDEX[unit]
@@ -101,7 +106,7 @@ export class ReductionInst extends Inst {
       const vs2 = this.vs2
       // Integer word counts (upto x bits stays far below 2^31).
       if (vs2 && (vs2.readCnt[lane] ?? 0) < (upto * vs2.bits + 63) >> 6) return
-      const mask = this.op.masked ? this.st.srcs[this.st.srcs.length - 1] : undefined
+      const mask = this.masked ? this.st.srcs[this.st.srcs.length - 1] : undefined
       if (mask && (mask.readCnt[lane] ?? 0) < (upto + 63) >> 6) return
       const a = lane * this.A + (j % this.A)
       if ((this.acc[a] ?? -1) > c) {
@@ -197,7 +202,7 @@ export class ReductionInst extends Inst {
   }
 
   private activeLanes(): number {
-    return Math.min(this.op.vl, this.st.L)
+    return Math.min(this.vl, this.st.L)
   }
 
   private maybeStartRing(): void {
@@ -226,7 +231,7 @@ export class ReductionInst extends Inst {
   /** Tree: a lane whose value is ready sends it 2^k lanes down, over 2^k links, hop after hop. */
   private treeSend(c: number): void {
     const ctx = this.st.ctx
-    const hop = ctx.m.ringHopLatency
+    const hop = ctx.ringHopLatency
     const top = this.activeLanes()
     for (let l = 1; l < top; l++) {
       const k = this.tLevel[l] ?? 0
@@ -277,7 +282,7 @@ export class ReductionInst extends Inst {
     this.st.setTime(from, F_WRITE_END, c)
     this.st.finishLane(from, c)
     this.pos = from - 1
-    this.valueAt = c + this.st.ctx.m.ringHopLatency
+    this.valueAt = c + this.st.ctx.ringHopLatency
     this.stage = STAGE_ADD
   }
 
@@ -308,6 +313,10 @@ export class ReductionInst extends Inst {
 
 /** vfredosum: the running sum visits element 0, 1, 2, ... in their lanes. */
 export class OrderedReductionInst extends Inst {
+  // Copied from the op once (see ReductionInst).
+  private readonly vl: number
+  private readonly sew: number
+  private readonly masked: boolean
   private readonly u: number
   private readonly D: number
   private next = 0
@@ -321,6 +330,9 @@ export class OrderedReductionInst extends Inst {
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
     super(ctx, op, 'arith', KIND.orderedReduction)
+    this.vl = op.vl
+    this.sew = op.sew
+    this.masked = op.masked
     this.st.waitReason = REASON.ring
     const unit = execUnitOf(op)
     this.u = UNIT_INDEX[unit]
@@ -344,7 +356,7 @@ export class OrderedReductionInst extends Inst {
   }
 
   exec(lane: number, c: number): void {
-    if (this.st.started[lane] !== 1 || this.adding || this.next >= this.op.vl) return
+    if (this.st.started[lane] !== 1 || this.adding || this.next >= this.vl) return
     const L = this.st.L
     if (lane !== this.next % L || this.at !== lane) return
     const vs1 = this.st.srcs[1]
@@ -359,9 +371,9 @@ export class OrderedReductionInst extends Inst {
     }
     const vs2 = this.st.srcs[0]
     const local = Math.floor(this.next / L)
-    const word = Math.floor((local * this.op.sew) / 64)
+    const word = Math.floor((local * this.sew) / 64)
     if (vs2 && (vs2.readCnt[lane] ?? 0) < word + 1) return
-    const mask = this.op.masked ? this.st.srcs[this.st.srcs.length - 1] : undefined
+    const mask = this.masked ? this.st.srcs[this.st.srcs.length - 1] : undefined
     if (mask && (mask.readCnt[lane] ?? 0) < Math.floor(local / 64) + 1) return
     const uk = lane * UNIT_COUNT + this.u
     const ctx = this.st.ctx
@@ -372,13 +384,13 @@ export class OrderedReductionInst extends Inst {
     if ((this.beatDone[lane] ?? 0) === 0) this.st.setTime(lane, F_EXEC_START, c)
     this.beatDone[lane] = (this.beatDone[lane] ?? 0) + 1
     const lastLocal = (this.st.n[lane] ?? 0) - 1
-    if (vs2) vs2.cons[lane] = local === lastLocal ? (vs2.words[lane] ?? 0) : Math.floor(((local + 1) * this.op.sew) / 64)
+    if (vs2) vs2.cons[lane] = local === lastLocal ? (vs2.words[lane] ?? 0) : Math.floor(((local + 1) * this.sew) / 64)
     if (mask) mask.cons[lane] = local === lastLocal ? (mask.words[lane] ?? 0) : Math.floor((local + 1) / 64)
     if (vs1 && lane === 0) vs1.cons[0] = 1
     this.valueAt = c + this.D
     this.next++
-    this.target = this.next < this.op.vl ? this.next % L : 0
-    if (this.target === lane && this.next >= this.op.vl) this.st.resultReady(0, 0, this.valueAt)
+    this.target = this.next < this.vl ? this.next % L : 0
+    if (this.target === lane && this.next >= this.vl) this.st.resultReady(0, 0, this.valueAt)
   }
 
 
@@ -399,27 +411,27 @@ export class OrderedReductionInst extends Inst {
       }
     }
     this.at = (from + 1) % this.st.L
-    this.valueAt = c + this.st.ctx.m.ringHopLatency
-    if (this.at === this.target && this.next >= this.op.vl) this.st.resultReady(0, 0, this.valueAt)
+    this.valueAt = c + this.st.ctx.ringHopLatency
+    if (this.at === this.target && this.next >= this.vl) this.st.resultReady(0, 0, this.valueAt)
   }
 
   write(lane: number, c: number): void {
     if (lane !== 0) return
-    if (this.next < this.op.vl || this.at !== 0) return
+    if (this.next < this.vl || this.at !== 0) return
     this.st.write(lane, c)
   }
 
   override lanePhasesDone(lane: number): boolean {
-    return lane !== 0 || (this.next >= this.op.vl && this.at === 0)
+    return lane !== 0 || (this.next >= this.vl && this.at === 0)
   }
 
   /** A lane done with its elements still waits on the ring while the running value has yet to pass through it. */
-  override pending(lane: number): boolean {
+  pending(lane: number): boolean {
     if (this.st.laneDone[lane] !== 1) return true
-    if (this.st.complete >= 0 || this.op.vl === 0) return false
+    if (this.st.complete >= 0 || this.vl === 0) return false
     // The value moves up the ring one lane a hop: to each remaining element's lane in turn, then home to lane 0.
     const L = this.st.L
-    const vl = this.op.vl
+    const vl = this.vl
     const toLast = this.next < vl ? ((this.next - this.at) % L + L) % L + (vl - 1 - this.next) : 0
     const lastLane = (this.at + toLast) % L
     const hops = toLast + ((L - lastLane) % L)

@@ -3,13 +3,15 @@
  * most one reason a lane-cycle, and per instruction every refusal counted.
  */
 import { REASON } from '../trace/types'
-import type { Inst, InstState } from './inst'
+import type { InstState } from './inst'
+import { pendingStep as pendingStepOf } from './phases'
 import { STALL_COUNT as STRIDE, type TimingState } from './state'
 
 const NONE = 0x7fffffff
 // Imported bindings copied once: under tsx's module transform (Node: the CLIs, the server, the bench) each use of an imported binding is a getter call.
 const R_FRONTEND = REASON.frontend
 const STALL_COUNT: number = STRIDE
+const pendingStep = pendingStepOf
 
 /**
  * The lane's instruction on the critical path this cycle: the oldest one in
@@ -31,7 +33,7 @@ function critical(s: TimingState, lane: number): InstState | null {
  */
 function starved(s: TimingState, l: number, c: number): boolean {
   const next = s.arith.at(s.laneArithNext[l] ?? 0)
-  if (next && next.st.dispatch < c) return false
+  if (next && next.dispatch < c) return false
   const mem = s.mem.at(s.memNext)
   return !mem || mem.st.dispatch >= c
 }
@@ -89,10 +91,10 @@ export function classify(s: TimingState, l: number, c: number, feWaiting: boolea
     } else {
       const fl = s.inflight
       for (let i = 0; i < fl.length; i++) {
-        const inst = fl[i] as Inst
-        if (inst.st.dispatch < c && inst.pending(l)) {
-          reason = inst.st.waitReason
-          seq = inst.st.seq
+        const inst = fl[i] as InstState
+        if (inst.dispatch < c && pendingStep(inst, l)) {
+          reason = inst.waitReason
+          seq = inst.seq
           break
         }
       }

@@ -8,7 +8,7 @@ import type { SimulateOptions, TimingError } from '../trace/types'
 import { DEFAULT_CYCLE_LIMIT, DEFAULT_TRACE_LIMIT, LANE_FIELD_COUNT, NO_CYCLE, REASON, STALL_REASONS } from '../trace/types'
 import { derive } from './config'
 import { Ctx } from './context'
-import type { Inst, InstState } from './inst'
+import type { InstState } from './inst'
 import type { MemInst } from './memory'
 import { ProgramOrderList } from './program-order-list'
 import { RegFile } from './regfile'
@@ -28,6 +28,17 @@ export interface TimingState {
   readonly sourceMachine: Machine
   /** The classes of alike lanes the timed lanes stand for (symmetry.ts); null: every lane is timed. */
   readonly plan: Pick<LanePlan, 'first' | 'size'> | null
+  /**
+   * What the per-cycle code reads of the stream and machine, copied once: the
+   * one-lane plan's stream and machine are objects of other shapes than the
+   * caller's, and a property read that has seen both shapes is slower.
+   */
+  readonly ops: readonly VectorOp[]
+  readonly laneSlots: number
+  readonly dispatchWidth: number
+  /** Issue policy `lockstep` or `serial` (every lane starts an instruction at once), and `serial`. */
+  readonly together: boolean
+  readonly serial: boolean
   readonly ctx: Ctx
   readonly options: Required<SimulateOptions>
   cycle: number
@@ -49,12 +60,12 @@ export interface TimingState {
   feReason: number
   /** The first op the front end dispatched (or executed, a vset) this cycle; -1: none. */
   feDispatched: number
-  // Instructions in flight, in program order
-  inflight: Inst[]
+  /** Instructions in flight, in program order. */
+  inflight: InstState[]
   /** The instructions in flight with a phase outside the lanes (hasGlobalStep, phases.ts), in program order. */
   globalInsts: InstState[]
   /** Program-order lists of the arithmetic and memory instructions, by absolute position. */
-  readonly arith: ProgramOrderList<Inst>
+  readonly arith: ProgramOrderList<InstState>
   readonly mem: ProgramOrderList<MemInst>
   /** No memory instruction before this position is still incomplete. */
   memLive: number
@@ -93,6 +104,11 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
     source,
     sourceMachine,
     plan,
+    ops,
+    laneSlots: machine.laneSlots,
+    dispatchWidth: machine.dispatchWidth,
+    together: machine.issue !== 'staggered',
+    serial: machine.issue === 'serial',
     ctx,
     options: {
       cycleLimit: options.cycleLimit ?? DEFAULT_CYCLE_LIMIT,
@@ -117,7 +133,7 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
     feDispatched: -1,
     inflight: [],
     globalInsts: [],
-    arith: new ProgramOrderList<Inst>(),
+    arith: new ProgramOrderList<InstState>(),
     mem: new ProgramOrderList<MemInst>(),
     memLive: 0,
     laneArithNext: new Int32Array(L),
