@@ -18,33 +18,38 @@ export class Arena {
   private buffer = new ArrayBuffer(0)
   private at = 0
 
-  /** `bytes` at an offset that is a multiple of `align` (a power of two): the buffer and the offset. */
-  private take(bytes: number, align: number): [ArrayBuffer, number] {
-    if (bytes > OWN_BUFFER_BYTES) return [new ArrayBuffer(bytes), 0]
+  /**
+   * Reserves `bytes` at an offset that is a multiple of `align` (a power of
+   * two) in `buffer` and returns the offset; -1: the request takes a buffer of
+   * its own. (An offset, not a [buffer, offset] pair: a pair is an allocation
+   * per typed array, thousands per run.)
+   */
+  private take(bytes: number, align: number): number {
+    if (bytes > OWN_BUFFER_BYTES) return -1
     let at = (this.at + align - 1) & -align
     if (at + bytes > this.buffer.byteLength) {
       this.buffer = new ArrayBuffer(CHUNK_BYTES)
       at = 0
     }
     this.at = at + bytes
-    return [this.buffer, at]
+    return at
   }
 
   /** A zeroed Int32Array of n elements. */
   i32(n: number): Int32Array {
-    const [buffer, at] = this.take(n * 4, 4)
-    return new Int32Array(buffer, at, n)
+    const at = this.take(n * 4, 4)
+    return at < 0 ? new Int32Array(n) : new Int32Array(this.buffer, at, n)
   }
 
   /** A zeroed Uint8Array of n elements. */
   u8(n: number): Uint8Array {
-    const [buffer, at] = this.take(n, 1)
-    return new Uint8Array(buffer, at, n)
+    const at = this.take(n, 1)
+    return at < 0 ? new Uint8Array(n) : new Uint8Array(this.buffer, at, n)
   }
 
   /** A zeroed Int8Array of n elements. */
   i8(n: number): Int8Array {
-    const [buffer, at] = this.take(n, 1)
-    return new Int8Array(buffer, at, n)
+    const at = this.take(n, 1)
+    return at < 0 ? new Int8Array(n) : new Int8Array(this.buffer, at, n)
   }
 }

@@ -33,20 +33,33 @@ function makeInst(ctx: Ctx, op: VectorOp, src: Int32Array[], mask: Int32Array | 
   return new UnitInst(ctx, op, src, mask)
 }
 
-function isMem(op: VectorOp): boolean {
-  return !!op.memory || op.unit === 'load' || op.unit === 'store'
+/** Which queue an op goes to, or that it is a vset the front end executes itself. */
+export const ROUTE = { arith: 0, mem: 1, config: 2 } as const
+
+export function routeOf(op: VectorOp): number {
+  if (op.isConfig) return ROUTE.config
+  return op.memory || op.unit === 'load' || op.unit === 'store' ? ROUTE.mem : ROUTE.arith
 }
 
-/** Tries to dispatch op in cycle c; returns false (and sets the front-end reason) when it must wait. */
-function dispatch(s: TimingState, op: VectorOp, c: number): boolean {
-  const m = s.machine
+// Copied once (see above).
+const TO_MEM: number = ROUTE.mem
+const CONFIG: number = ROUTE.config
+
+/**
+ * Tries to dispatch op `seq` in cycle c; returns false (and sets the
+ * front-end reason) when it must wait. The front end asks every cycle while a
+ * queue is full, so the checks before dispatch read per-op facts copied once
+ * (TimingState.opRoute, opDstRegs), not the op record itself.
+ */
+function dispatch(s: TimingState, seq: number, c: number): boolean {
   const ctx = s.ctx
-  const mem = isMem(op)
-  if (mem ? s.memQueued >= m.memQueueDepth : s.arithQueued >= m.arithQueueDepth) {
+  const mem = s.opRoute[seq] === TO_MEM
+  if (mem ? s.memQueued >= s.memQueueDepth : s.arithQueued >= s.arithQueueDepth) {
     s.feReason = R_QUEUE
     return false
   }
-  if (ctx.ren.freeCount < op.dstRegs.length) {
+  const op = s.ops[seq] as VectorOp
+  if (ctx.ren.freeCount < (s.opDstRegs[seq] ?? 0)) {
     s.feReason = R_RENAME
     return false
   }
@@ -108,21 +121,22 @@ export function frontEnd(s: TimingState, c: number): boolean {
       s.scalarLeft--
       return true
     }
-    const op = ops[s.opIdx] as VectorOp
-    if (op.isConfig) {
+    // An op's seq is its index in the stream (createTimingState checks).
+    const seq = s.opIdx
+    if (s.opRoute[seq] === CONFIG) {
       if (dispatched > 0) return true
-      s.dispatchAt[op.seq] = c
-      s.completeAt[op.seq] = c
-      s.feDispatched = op.seq
+      s.dispatchAt[seq] = c
+      s.completeAt[seq] = c
+      s.feDispatched = seq
       advance(s)
       return true
     }
-    if (!dispatch(s, op, c)) return dispatched > 0
-    if (dispatched === 0) s.feDispatched = op.seq
+    if (!dispatch(s, seq, c)) return dispatched > 0
+    if (dispatched === 0) s.feDispatched = seq
     dispatched++
     advance(s)
-    if (op.scalarResult) {
-      s.hold = op.seq
+    if ((ops[seq] as VectorOp).scalarResult) {
+      s.hold = seq
       return true
     }
     if (dispatched >= s.dispatchWidth) return true

@@ -7,6 +7,7 @@ import type { DynamicStream, VectorOp } from '../exec/stream'
 import type { SimulateOptions, TimingError } from '../trace/types'
 import { DEFAULT_CYCLE_LIMIT, DEFAULT_TRACE_LIMIT, LANE_FIELD_COUNT, NO_CYCLE, REASON, STALL_REASONS } from '../trace/types'
 import { derive } from './config'
+import { routeOf } from './dispatch'
 import { Ctx } from './context'
 import type { InstState } from './inst'
 import type { MemInst } from './memory'
@@ -34,6 +35,11 @@ export interface TimingState {
    * caller's, and a property read that has seen both shapes is slower.
    */
   readonly ops: readonly VectorOp[]
+  /** Per op: its queue or a vset (dispatch.ts ROUTE), and the registers it renames. */
+  readonly opRoute: Uint8Array
+  readonly opDstRegs: Int32Array
+  readonly arithQueueDepth: number
+  readonly memQueueDepth: number
   readonly laneSlots: number
   readonly dispatchWidth: number
   /** Issue policy `lockstep` or `serial` (every lane starts an instruction at once), and `serial`. */
@@ -105,6 +111,10 @@ export function createTimingState(source: DynamicStream, sourceMachine: Machine,
     sourceMachine,
     plan,
     ops,
+    opRoute: Uint8Array.from(ops, routeOf),
+    opDstRegs: Int32Array.from(ops, (op) => op.dstRegs.length),
+    arithQueueDepth: machine.arithQueueDepth,
+    memQueueDepth: machine.memQueueDepth,
     laneSlots: machine.laneSlots,
     dispatchWidth: machine.dispatchWidth,
     together: machine.issue !== 'staggered',
