@@ -21,8 +21,8 @@ const R_FRONTEND = REASON.frontend
 const R_QUEUE = REASON.queue
 const R_RENAME = REASON.rename
 
-function makeInst(ctx: Ctx, op: VectorOp, src: Int32Array[], mask: Int32Array | null): Inst {
-  if (op.memory || op.unit === 'load' || op.unit === 'store') {
+function makeInst(ctx: Ctx, op: VectorOp, mem: boolean, src: Int32Array[], mask: Int32Array | null): Inst {
+  if (mem) {
     return op.memory?.isStore || op.unit === 'store' ? new StoreInst(ctx, op, src, mask) : new LoadInst(ctx, op, src, mask)
   }
   if (op.shape === 'ordered-reduction') return new OrderedReductionInst(ctx, op, src, mask)
@@ -33,17 +33,15 @@ function makeInst(ctx: Ctx, op: VectorOp, src: Int32Array[], mask: Int32Array | 
   return new UnitInst(ctx, op, src, mask)
 }
 
-/** Which queue an op goes to, or that it is a vset the front end executes itself. */
-export const ROUTE = { arith: 0, mem: 1, config: 2 } as const
+// Which queue an op goes to, or that it is a vset the front end executes itself (TimingState.opRoute).
+const TO_ARITH = 0
+const TO_MEM = 1
+const CONFIG = 2
 
 export function routeOf(op: VectorOp): number {
-  if (op.isConfig) return ROUTE.config
-  return op.memory || op.unit === 'load' || op.unit === 'store' ? ROUTE.mem : ROUTE.arith
+  if (op.isConfig) return CONFIG
+  return op.memory || op.unit === 'load' || op.unit === 'store' ? TO_MEM : TO_ARITH
 }
-
-// Copied once (see above).
-const TO_MEM: number = ROUTE.mem
-const CONFIG: number = ROUTE.config
 
 /**
  * Tries to dispatch op `seq` in cycle c; returns false (and sets the
@@ -76,7 +74,7 @@ function dispatch(s: TimingState, seq: number, c: number): boolean {
   }
   const mask = op.masked ? Int32Array.of(ren.lookup(0)) : null
   if (mask) ren.addReader(mask[0] ?? 0)
-  const inst = makeInst(ctx, op, src, mask)
+  const inst = makeInst(ctx, op, mem, src, mask)
   inst.st.fillWork()
   const n = op.dstRegs.length
   const dst = ctx.arena.i32(n)

@@ -35,7 +35,7 @@ export interface TimingState {
    * caller's, and a property read that has seen both shapes is slower.
    */
   readonly ops: readonly VectorOp[]
-  /** Per op: its queue or a vset (dispatch.ts ROUTE), and the registers it renames. */
+  /** Per op: its queue or a vset (dispatch.ts routeOf), and the registers it renames. */
   readonly opRoute: Uint8Array
   readonly opDstRegs: Int32Array
   readonly arithQueueDepth: number
