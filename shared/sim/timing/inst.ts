@@ -50,8 +50,6 @@ export class Operand {
   }
 }
 
-type Queue = 'arith' | 'mem'
-
 /** The instruction classes (phases.ts calls each one's steps through a switch on its kind). */
 export const KIND = { unit: 0, load: 1, store: 2, reduction: 3, orderedReduction: 4, permutation: 5 } as const
 export type Kind = (typeof KIND)[keyof typeof KIND]
@@ -381,7 +379,6 @@ export abstract class Inst {
   constructor(
     ctx: Ctx,
     readonly op: VectorOp,
-    readonly queue: Queue,
     kind: Kind,
   ) {
     this.st = new InstState(ctx, op, this, kind)

@@ -50,7 +50,7 @@ export abstract class MemInst extends Inst {
   protected readonly memLatency: number
 
   constructor(ctx: Ctx, op: VectorOp, kind: Kind) {
-    super(ctx, op, 'mem', kind)
+    super(ctx, op, kind)
     this.st.waitReason = REASON.memory
     const L = this.st.L
     this.nf = op.nf ?? 1
@@ -61,7 +61,7 @@ export abstract class MemInst extends Inst {
     this.indexed = mem?.pattern === 'indexed'
     this.active = op.active ?? null
     this.memLatency = ctx.m.memLatency
-    const bus = mem?.isStore ? ctx.m.storeBusBits : ctx.m.loadBusBits
+    const bus = this.isStore ? ctx.m.storeBusBits : ctx.m.loadBusBits
     const unit = (this.unitStride = !mem || mem.pattern === 'unit' || mem.pattern === 'mask')
     // Values of EEW bits a cycle: a segment's fields each take their place on the bus like elements.
     this.perCycle = unit ? Math.max(1, bus / this.eew) : Math.max(1, Math.min(ctx.m.gatherElementsPerCycle, bus / this.eew))

@@ -9,7 +9,7 @@ import type { VectorOp } from '../exec/stream'
 import { REASON } from '../trace/types'
 import { wordsFor } from './config'
 import type { Ctx } from './context'
-import { F_BEATS, F_EXEC_START, F_READ_START, fillLaneElements, Inst, KIND } from './inst'
+import { F_BEATS, F_EXEC_START, F_READ_END, F_READ_START, fillLaneElements, Inst, KIND } from './inst'
 
 export class PermutationInst extends Inst {
   /** Per source lane, packets in source-word order: source word, destination lane, destination word. */
@@ -23,7 +23,7 @@ export class PermutationInst extends Inst {
   private readonly sent: Int32Array
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op, 'arith', KIND.permutation)
+    super(ctx, op, KIND.permutation)
     this.st.waitReason = REASON.ring
     const L = this.st.L
     const sew = op.sew
@@ -151,7 +151,7 @@ export class PermutationInst extends Inst {
     const total = this.st.dstWords[lane] ?? 0
     // The last word is written once the lane has read and sent all its own source words,
     // so that a lane's phases stay in order: read, then exchange, then write.
-    if (w === total - 1 && (this.st.readDone[lane] !== 1 || !this.lanePhasesDone(lane) || this.st.time(lane, 3) >= c)) return
+    if (w === total - 1 && (this.st.readDone[lane] !== 1 || !this.lanePhasesDone(lane) || this.st.time(lane, F_READ_END) >= c)) return
     if (this.st.started[lane] === 1 && this.st.laneDone[lane] !== 1 && w < total) {
       const at = this.st.readyAt[lane * this.st.maxDstWords + w] ?? -1
       if (at < 0) this.st.ctx.wait(lane, this.st.seq, REASON.ring) // waiting for packets from other lanes

@@ -55,7 +55,7 @@ export class ReductionInst extends Inst {
   private readonly tIn: Int32Array
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op, 'arith', KIND.reduction)
+    super(ctx, op, KIND.reduction)
     this.vl = op.vl
     this.masked = op.masked
     this.st.waitReason = REASON.ring
@@ -329,7 +329,7 @@ export class OrderedReductionInst extends Inst {
   private readonly beatDone: Int32Array
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op, 'arith', KIND.orderedReduction)
+    super(ctx, op, KIND.orderedReduction)
     this.vl = op.vl
     this.sew = op.sew
     this.masked = op.masked

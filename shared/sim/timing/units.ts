@@ -37,7 +37,7 @@ export class UnitInst extends Inst {
   protected readonly dstBits: number
 
   constructor(ctx: Ctx, op: VectorOp, srcPhys: Int32Array[], maskPhys: Int32Array | null) {
-    super(ctx, op, 'arith', KIND.unit)
+    super(ctx, op, KIND.unit)
     const m = ctx.m
     this.unit = execUnitOf(op)
     this.u = UNIT_INDEX[this.unit]
