@@ -26,6 +26,7 @@ import { parseMachine, type Machine, type MachineInput } from '../../shared/sche
 import { prepareRun, timePrepared, timePreparedMetrics, type PreparedRun } from '../../shared/sim/run'
 import { simulate } from '../../shared/sim/timing/simulate'
 import { bareLoop } from './bare-loop'
+import { budgetRow, timedLanes } from './budget'
 import { bankBound, examplePrograms, longStream, longStreamAt, memoryBound, reductionHeavy } from './programs'
 import { median } from './median'
 
@@ -78,6 +79,11 @@ interface PairedRow extends Row {
   pairedRatio: number
   /** The same workload timed as a Sweeps point (metrics only): its best rate over the loop's best. */
   pointRatio: number
+  /** Lanes its run times (one per class of alike lanes), and medians of pairs: the loop's milliseconds, the run's, and the run's without usage spans. */
+  timed: number
+  bareMedianMs: number
+  medianMs: number
+  noUsageMs: number
 }
 
 function workloadRow(w: Workload, lanes: number): PairedRow {
@@ -88,6 +94,7 @@ function workloadRow(w: Workload, lanes: number): PairedRow {
   const bareMs: number[] = []
   const ms: number[] = []
   const pointMs: number[] = []
+  const noUsageMs: number[] = []
   for (let i = 0; i < WORKLOAD_RUNS + WORKLOAD_WARMUP; i++) {
     const t0 = performance.now()
     sink += bareLoop(lanes, BARE_CYCLES)
@@ -97,6 +104,10 @@ function workloadRow(w: Workload, lanes: number): PairedRow {
     // What runPoint (shared/sweep/runPoint.ts) times for one point of a sweep.
     const point = timePreparedMetrics(p, machine, { recordUsage: false })
     const t3 = performance.now()
+    // The same run without usage spans: what recording them costs in place (budget.ts).
+    const bare = simulate(p.stream, machine, { recordUsage: false })
+    const t4 = performance.now()
+    if (bare.error) throw new Error(`${w.name} without usage spans: ${bare.error.message}`)
     if (r.error) throw new Error(`${w.name}: ${r.error.message}`)
     if (!point.ok) throw new Error(`${w.name} as a sweep point: ${point.error.message}`)
     cycles = r.trace.cycles
@@ -104,6 +115,7 @@ function workloadRow(w: Workload, lanes: number): PairedRow {
       bareMs.push(t1 - t0)
       ms.push(t2 - t1)
       pointMs.push(t3 - t2)
+      noUsageMs.push(t4 - t3)
     }
   }
   if (sink < 0) throw new Error('unreachable: keeps the loop alive')
@@ -114,7 +126,10 @@ function workloadRow(w: Workload, lanes: number): PairedRow {
   const rate = laneCycles / (best / 1000)
   const pairs = ms.map((m, i) => laneCycles / m / (bareLaneCycles / (bareMs[i] as number)))
   const pointRate = laneCycles / (Math.min(...pointMs) / 1000)
-  return { name: w.name, cycles, laneCycles, ms: best, rate, bareRate, ratio: rate / bareRate, pairedRatio: median(pairs), pointRatio: pointRate / bareRate }
+  return {
+    name: w.name, cycles, laneCycles, ms: best, rate, bareRate, ratio: rate / bareRate, pairedRatio: median(pairs), pointRatio: pointRate / bareRate,
+    timed: timedLanes(p.stream, machine), bareMedianMs: median(bareMs), medianMs: median(ms), noUsageMs: median(noUsageMs),
+  }
 }
 
 function bareRow(lanes: number, cycles: number): Row {
@@ -172,6 +187,16 @@ table([
   [`workload (timing stage alone, best of ${WORKLOAD_RUNS})`, 'cycles', 'time', 'lane-cycles/s', 'bare loop beside it', 'ratio', 'paired ratio (median)', `>= ${TARGET_RATIO}`, 'sweep point ratio'],
   [`${bare.name}, alone (median of ${RUNS})`, fmt(bare.cycles, 0), `${fmt(bare.ms)} ms`, `${fmt(bare.rate / 1e6)} M`, '', '', '', '', ''],
   ...rows.map((r) => [r.name, fmt(r.cycles, 0), `${fmt(r.ms)} ms`, `${fmt(r.rate / 1e6)} M`, `${fmt(r.bareRate / 1e6)} M`, fmt(r.ratio, 2), fmt(r.pairedRatio, 2), r.ratio >= TARGET_RATIO ? 'yes' : 'no', fmt(r.pointRatio, 2)]),
+])
+
+// How a run at the target would have to spend its time (budget.ts).
+table([
+  ['budget at the target (medians of the pairs)', 'timed lanes', 'run', 'at 0.5', 'usage spans in the run', "the loop's work for the timed lanes", 'left at 0.5 for the rest', 'the rest now'],
+  ...rows.map((r) => {
+    const b = budgetRow({ lanes: defaults.lanes, timed: r.timed, cycles: r.cycles, bareMs: r.bareMedianMs, bareLaneCycles: defaults.lanes * BARE_CYCLES, runMs: r.medianMs, noUsageMs: r.noUsageMs, target: TARGET_RATIO })
+    const ms = (x: number) => `${fmt(x)} ms`
+    return [r.name, String(r.timed), ms(r.medianMs), ms(b.atTarget), ms(b.usage), ms(b.loopWork), ms(b.left), ms(b.restNow)]
+  }),
 ])
 
 // The sweep API on the long stream: one set-up, then one timing per point.
