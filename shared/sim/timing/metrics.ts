@@ -1,6 +1,6 @@
 /** The run's figures (handbook section 10), computed from the recorder's totals. */
 import type { FpWidth, Metrics } from '../trace/types'
-import { FP_WIDTHS, STALL_REASONS, emptyStallCounts } from '../trace/types'
+import { FP_WIDTHS, stallCountsAt } from '../trace/types'
 import { UNIT_COUNT } from './config'
 import type { Ctx } from './context'
 
@@ -49,8 +49,7 @@ export function computeMetrics(ctx: Ctx, cycles: number, flopsBySew: Record<FpWi
     for (let l = 0; l < L; l++) s += tot[ctx.bankRes[l * ctx.d.banks + b] ?? 0] ?? 0
     bankUtilization.push(s / (cyc * L * ctx.d.ports))
   }
-  const stallCycles = emptyStallCounts()
-  STALL_REASONS.forEach((r, i) => (stallCycles[r] = ctx.rec.stallTotals[i] ?? 0))
+  const stallCycles = stallCountsAt(ctx.rec.stallTotals, 0)
   const links = ctx.linkUpRes.length
   return {
     cycles,

@@ -9,7 +9,7 @@
 import type { Machine } from '../../schemas/machine'
 import type { DynamicStream, VectorOp } from '../exec/stream'
 import type { FpWidth, InstructionTrace, Metrics, SimulateOptions, TimingError, TimingResult } from '../trace/types'
-import { STALL_REASONS, emptyStallCounts } from '../trace/types'
+import { stallCountsAt } from '../trace/types'
 import type { TimingState } from './engine'
 import { STALL_COUNT, createTimingState, step } from './engine'
 import { opFlops } from './inst'
@@ -103,8 +103,7 @@ export function finish(s: TimingState, stopped?: TimingError): TimingResult {
   const instructions: InstructionTrace[] = ops.map((op, i) => {
     const f = doneFlops(s, op, i)
     addFlops(flopsBySew, op, f)
-    const stalls = emptyStallCounts()
-    STALL_REASONS.forEach((r, j) => (stalls[r] = s.opStalls[i * STALL_COUNT + j] ?? 0))
+    const stalls = stallCountsAt(s.opStalls, i * STALL_COUNT)
     const dispatch = (s.dispatchAt[i] ?? -1) >= 0 ? (s.dispatchAt[i] ?? 0) : null
     const complete = (s.completeAt[i] ?? -1) >= 0 ? (s.completeAt[i] ?? 0) : null
     return {

@@ -216,12 +216,16 @@ export function replicate(
   const t1 = one.laneTimes
   const ops = t1.length / (K * LANE_FIELD_COUNT)
   const laneTimes = new Int32Array(ops * L * LANE_FIELD_COUNT)
+  const F = LANE_FIELD_COUNT
+  // Element by element: a subarray per row and class was a typed-array object each, thousands per run.
   for (let k = 0; k < ops; k++) {
     for (let j = 0; j < K; j++) {
-      const at = (k * K + j) * LANE_FIELD_COUNT
-      const row = t1.subarray(at, at + LANE_FIELD_COUNT)
+      const at = (k * K + j) * F
       const f = first[j] ?? 0
-      for (let l = f; l < f + (size[j] ?? 0); l++) laneTimes.set(row, (k * L + l) * LANE_FIELD_COUNT)
+      for (let l = f; l < f + (size[j] ?? 0); l++) {
+        const to = (k * L + l) * F
+        for (let x = 0; x < F; x++) laneTimes[to + x] = t1[at + x] as number
+      }
     }
   }
   return { stalls, usage, laneTimes }

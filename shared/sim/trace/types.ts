@@ -312,3 +312,26 @@ export function expandUsage(usage: UsageSpans): UsageSpans {
 export function emptyStallCounts(): StallCounts {
   return { raw: 0, bank: 0, queue: 0, slot: 0, barrier: 0, rename: 0, memory: 0, ring: 0, frontend: 0 }
 }
+
+// Each reason's index, for stallCountsAt.
+const { raw: I_RAW, bank: I_BANK, queue: I_QUEUE, slot: I_SLOT, barrier: I_BARRIER, rename: I_RENAME, memory: I_MEMORY, ring: I_RING, frontend: I_FRONTEND } = REASON
+
+/**
+ * The counts at `counts[at + REASON[r]]` for each reason r (the engine keeps
+ * them by reason index). One literal, not a store per reason by name: a run
+ * builds one per instruction, and stores by a computed name are slow.
+ */
+export function stallCountsAt(counts: ArrayLike<number>, at: number): StallCounts {
+  const c = counts
+  return {
+    raw: c[at + I_RAW] ?? 0,
+    bank: c[at + I_BANK] ?? 0,
+    queue: c[at + I_QUEUE] ?? 0,
+    slot: c[at + I_SLOT] ?? 0,
+    barrier: c[at + I_BARRIER] ?? 0,
+    rename: c[at + I_RENAME] ?? 0,
+    memory: c[at + I_MEMORY] ?? 0,
+    ring: c[at + I_RING] ?? 0,
+    frontend: c[at + I_FRONTEND] ?? 0,
+  }
+}

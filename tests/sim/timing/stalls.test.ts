@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest'
 import { parseMachine } from '../../../shared/schemas/machine'
 import { simulate } from '../../../shared/sim/timing/simulate'
 import type { TimingTrace } from '../../../shared/sim/trace/types'
-import { STALL_REASONS, laneStallAt } from '../../../shared/sim/trace/types'
+import { STALL_REASONS, laneStallAt, stallCountsAt } from '../../../shared/sim/trace/types'
 import { caseArb, machineOf } from './arbitraries'
 import { buildOp, buildStream } from './factories'
 
@@ -106,5 +106,15 @@ describe('stall accounting on random streams (fast-check; model properties, comm
       }),
       { numRuns: 150 },
     )
+  })
+})
+
+describe('stallCountsAt', () => {
+  it('names the count at offset + k after the k-th reason of STALL_REASONS, for a per-instruction row and the run totals', () => {
+    const counts = Float64Array.from({ length: 3 * STALL_REASONS.length }, (_, i) => 100 + i)
+    const at = STALL_REASONS.length
+    const named = stallCountsAt(counts, at)
+    expect(Object.keys(named).sort()).toEqual([...STALL_REASONS].sort())
+    STALL_REASONS.forEach((r, k) => expect(named[r]).toBe(100 + at + k))
   })
 })
