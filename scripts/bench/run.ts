@@ -11,7 +11,11 @@
  *      median of the ratios of adjacent pairs, over WORKLOAD_RUNS pairs after
  *      WORKLOAD_WARMUP (the engine needs more warm-up than the loop). Each
  *      pair also times the workload as one Sweeps point does
- *      (timePreparedMetrics: no usage spans, no trace): "sweep point ratio".
+ *      (timePreparedMetrics: no usage spans, no trace): "sweep point ratio",
+ *      and the whole run without usage spans, for the "budget at the
+ *      target" table (budget.ts): what a run may take at the target, and how
+ *      its usage spans, the loop's work for the lanes it times and the rest of
+ *      the model share it, beside the least usage trace of its own uses.
  *   2. The sweep API: set-up (prepareRun: assemble + execute) and one point
  *      (timePrepared) of the long stream, timed apart.
  *   3. Peak heap of a 100,000-instruction strip-mined run; target <= 256 MiB.
@@ -26,7 +30,7 @@ import { parseMachine, type Machine, type MachineInput } from '../../shared/sche
 import { prepareRun, timePrepared, timePreparedMetrics, type PreparedRun } from '../../shared/sim/run'
 import { simulate } from '../../shared/sim/timing/simulate'
 import { bareLoop } from './bare-loop'
-import { budgetRow, leastTraceMs, timedLanes, usesOf } from './budget'
+import { budgetRow, leastTraceMs, timedLanes, type Uses, usesOf } from './budget'
 import { bankBound, examplePrograms, longStream, longStreamAt, memoryBound, reductionHeavy } from './programs'
 import { median } from './median'
 
@@ -95,7 +99,7 @@ function workloadRow(w: Workload, lanes: number): PairedRow {
   const machine = parseMachine(w.machine)
   const p = prepare(w.name, w.text, machine)
   let cycles = 0
-  let uses: ReturnType<typeof usesOf> | null = null
+  let uses: Uses | null = null
   let sink = 0
   const bareMs: number[] = []
   const ms: number[] = []
@@ -111,9 +115,9 @@ function workloadRow(w: Workload, lanes: number): PairedRow {
     const point = timePreparedMetrics(p, machine, { recordUsage: false })
     const t3 = performance.now()
     // The same run without usage spans: what recording them costs in place (budget.ts).
-    const bare = simulate(p.stream, machine, { recordUsage: false })
+    const noUsage = simulate(p.stream, machine, { recordUsage: false })
     const t4 = performance.now()
-    if (bare.error) throw new Error(`${w.name} without usage spans: ${bare.error.message}`)
+    if (noUsage.error) throw new Error(`${w.name} without usage spans: ${noUsage.error.message}`)
     if (r.error) throw new Error(`${w.name}: ${r.error.message}`)
     if (!point.ok) throw new Error(`${w.name} as a sweep point: ${point.error.message}`)
     cycles = r.trace.cycles
@@ -136,7 +140,7 @@ function workloadRow(w: Workload, lanes: number): PairedRow {
   return {
     name: w.name, cycles, laneCycles, ms: best, rate, bareRate, ratio: rate / bareRate, pairedRatio: median(pairs), pointRatio: pointRate / bareRate,
     timed: timedLanes(p.stream, machine), bareMedianMs: median(bareMs), medianMs: median(ms), noUsageMs: median(noUsageMs),
-    leastUsageMs: leastTraceMs(uses as ReturnType<typeof usesOf>, LEAST_TRACE_RUNS, LEAST_TRACE_WARMUP),
+    leastUsageMs: leastTraceMs(uses as Uses, LEAST_TRACE_RUNS, LEAST_TRACE_WARMUP),
   }
 }
 
