@@ -13,7 +13,6 @@ import type { SpanRecorder } from './recorder'
 import type { RegFile } from './regfile'
 import type { Renamer } from './rename'
 
-
 /** Called by an instruction when it is finished everywhere. */
 export interface CompletionSink {
   completed(seq: number, c: number): void

@@ -9,7 +9,7 @@ import { REASON } from '../trace/types'
 import type { Ctx } from './context'
 import type { Inst } from './inst'
 import { LoadInst, MemInst, StoreInst } from './memory'
-import { opClass } from './op-class'
+import { isMemoryOp, opClass } from './op-class'
 import { PermutationInst } from './permutation'
 import { hasGlobalStep } from './phases'
 import { OrderedReductionInst, ReductionInst } from './reduction'
@@ -40,7 +40,7 @@ const CONFIG = 2
 
 export function routeOf(op: VectorOp): number {
   if (op.isConfig) return CONFIG
-  return op.memory || op.unit === 'load' || op.unit === 'store' ? TO_MEM : TO_ARITH
+  return isMemoryOp(op) ? TO_MEM : TO_ARITH
 }
 
 /**

@@ -33,7 +33,7 @@ export function memoryStart(s: TimingState, c: number): void {
       s.mem.dropBefore(s.memLive)
       for (let k = s.memLive; k < s.memNext && ok; k++) {
         const o = s.mem.at(k) as MemInst
-        if (o.st.complete >= 0 && o.st.complete < c) continue
+        if (isDone(o, c)) continue
         if ((o.isStore || inst.isStore) && o.overlaps(inst)) ok = false
       }
     }

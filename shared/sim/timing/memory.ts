@@ -124,7 +124,6 @@ export abstract class MemInst extends Inst {
   override globalDone(): boolean {
     return this.busDone
   }
-
 }
 
 export class LoadInst extends MemInst {
@@ -147,7 +146,6 @@ export class LoadInst extends MemInst {
     this.st.allocResults()
     this.st.writeCounts()
   }
-
 
   /** Issues this cycle's requests on the load bus. */
   global(c: number): void {
@@ -224,7 +222,6 @@ export class StoreInst extends MemInst {
     this.st.writeCounts()
   }
 
-
   /** Sends this cycle's elements on the store bus, in element order, once their data words are queued. */
   global(c: number): void {
     if (this.port < 0 || this.busDone) return
@@ -282,5 +279,4 @@ export class StoreInst extends MemInst {
       if (this.st.laneDone[l] !== 1 && this.st.started[l] === 1 && (this.sentCount[l] ?? 0) >= (this.st.n[l] ?? 0)) this.st.finishLane(l, c)
     }
   }
-
 }

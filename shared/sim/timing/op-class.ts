@@ -7,6 +7,7 @@
  * (vcpop.m, vfirst.m: folded like a reduction). Memoized per mnemonic, since
  * it is asked once per dispatched instruction.
  */
+import type { VectorOp } from '../exec/stream'
 import { opInfo } from '../isa/table'
 
 export interface OpClass {
@@ -40,4 +41,9 @@ export function opClass(op: string): OpClass {
   }
   classes.set(op, c)
   return c
+}
+
+/** Whether the memory unit times the op (a load or store: it carries addresses, or its unit says so). */
+export function isMemoryOp(op: VectorOp): boolean {
+  return !!op.memory || op.unit === 'load' || op.unit === 'store'
 }

@@ -97,8 +97,6 @@ export class PermutationInst extends Inst {
     if (this.st.time(lane, F_READ_START) === c) this.engage(lane, c)
   }
 
-
-
   /** Each source lane injects its next packet when its word is queued and the whole path is free. */
   global(c: number): void {
     const ctx = this.st.ctx

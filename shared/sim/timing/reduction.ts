@@ -265,7 +265,6 @@ export class ReductionInst extends Inst {
     this.st.resultReady(0, 0, this.valueAt)
   }
 
-
   global(c: number): void {
     if (this.tree) {
       if (this.stage === STAGE_LANES) this.treeSend(c)
@@ -392,7 +391,6 @@ export class OrderedReductionInst extends Inst {
     this.target = this.next < this.vl ? this.next % L : 0
     if (this.target === lane && this.next >= this.vl) this.st.resultReady(0, 0, this.valueAt)
   }
-
 
   global(c: number): void {
     if (this.at === this.target || this.valueAt < 0 || c < this.valueAt) return

@@ -28,6 +28,7 @@ import type { StallSpans, UsageSpans } from '../trace/types'
 import { LANE_FIELD_COUNT } from '../trace/types'
 import { UNIT_COUNT } from './config'
 import type { Ctx } from './context'
+import { isMemoryOp } from './op-class'
 
 export interface LanePlan {
   /** Timed lane j stands for the lanes first[j] .. first[j] + size[j] - 1 of the machine. */
@@ -37,14 +38,10 @@ export interface LanePlan {
   machine: Machine
 }
 
-function isMemory(op: VectorOp): boolean {
-  return !!op.memory || op.unit === 'load' || op.unit === 'store'
-}
-
 function groupableOp(op: VectorOp, m: Machine, L: number): boolean {
   if (op.isConfig) return true
   if (op.masked || op.active || op.scalarResult) return false
-  if (isMemory(op)) {
+  if (isMemoryOp(op)) {
     const mem = op.memory
     if (!mem || (mem.pattern !== 'unit' && mem.pattern !== 'mask')) return false
     // A segment's fields share the bus rows, so lanes get their elements in different cycles.
@@ -69,7 +66,7 @@ export function lanePlan(stream: DynamicStream, m: Machine): LanePlan | null {
     if (op.isConfig) continue
     const r = op.vl % L
     cut[r] = 1
-    if (isMemory(op)) {
+    if (isMemoryOp(op)) {
       eews.add(op.eew)
       if (r !== 0) raggedMemory = true
     }

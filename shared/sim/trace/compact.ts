@@ -16,10 +16,10 @@
 import type { Lmul, Sew, UnitClass, VectorShape } from '../isa/types'
 import {
   STALL_REASONS,
+  stallCountsAt,
   type InstructionTrace,
   type Metrics,
   type ResourceInfo,
-  type StallCounts,
   type StallSpans,
   type TimingTrace,
   type UsageSpans,
@@ -189,10 +189,7 @@ export function decodeTrace(c: CompactTrace): TimingTrace {
   }
   const instructions: InstructionTrace[] = new Array(k.count)
   for (let i = 0; i < k.count; i++) {
-    const stalls = {} as StallCounts
-    STALL_REASONS.forEach((r, j) => {
-      stalls[r] = k.stalls[i * STALL_REASONS.length + j] ?? 0
-    })
+    const stalls = stallCountsAt(k.stalls, i * STALL_REASONS.length)
     const flags = k.flags[i] ?? 0
     instructions[i] = {
       index: k.index[i] ?? i,

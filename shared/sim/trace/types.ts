@@ -322,16 +322,15 @@ const { raw: I_RAW, bank: I_BANK, queue: I_QUEUE, slot: I_SLOT, barrier: I_BARRI
  * builds one per instruction, and stores by a computed name are slow.
  */
 export function stallCountsAt(counts: ArrayLike<number>, at: number): StallCounts {
-  const c = counts
   return {
-    raw: c[at + I_RAW] ?? 0,
-    bank: c[at + I_BANK] ?? 0,
-    queue: c[at + I_QUEUE] ?? 0,
-    slot: c[at + I_SLOT] ?? 0,
-    barrier: c[at + I_BARRIER] ?? 0,
-    rename: c[at + I_RENAME] ?? 0,
-    memory: c[at + I_MEMORY] ?? 0,
-    ring: c[at + I_RING] ?? 0,
-    frontend: c[at + I_FRONTEND] ?? 0,
+    raw: counts[at + I_RAW] ?? 0,
+    bank: counts[at + I_BANK] ?? 0,
+    queue: counts[at + I_QUEUE] ?? 0,
+    slot: counts[at + I_SLOT] ?? 0,
+    barrier: counts[at + I_BARRIER] ?? 0,
+    rename: counts[at + I_RENAME] ?? 0,
+    memory: counts[at + I_MEMORY] ?? 0,
+    ring: counts[at + I_RING] ?? 0,
+    frontend: counts[at + I_FRONTEND] ?? 0,
   }
 }
