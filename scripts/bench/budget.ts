@@ -81,19 +81,24 @@ export function usesOf(trace: TimingTrace): Uses {
   const u = trace.usage
   const isBus = trace.resources.map((r) => r.kind === 'bus')
   const perCycle = (i: number) => (isBus[u.resource[i] as number] ? 1 : (u.amount[i] as number))
+  // Rows may reach past the run's last cycle (a divider holds its unit for its latency).
+  let end = trace.cycles
+  for (let i = 0; i < u.count; i++) end = Math.max(end, (u.start[i] as number) + (u.length[i] as number))
   // Counting sort by cycle: rows are sorted by start, but a long row's later cycles come after other rows.
-  const at = new Int32Array(trace.cycles + 1)
+  const at = new Int32Array(end + 1)
   for (let i = 0; i < u.count; i++) {
     const s = u.start[i] as number
-    for (let c = s; c < s + (u.length[i] as number); c++) at[c + 1]! += perCycle(i)
+    const n = perCycle(i)
+    for (let c = s; c < s + (u.length[i] as number); c++) at[c + 1]! += n
   }
-  for (let c = 1; c <= trace.cycles; c++) at[c]! += at[c - 1]!
-  const count = at[trace.cycles] as number
+  for (let c = 1; c <= end; c++) at[c]! += at[c - 1]!
+  const count = at[end] as number
   const uses: Uses = { count, cycle: new Int32Array(count), resource: new Int32Array(count), inst: new Int32Array(count), resources: trace.resources.length }
   for (let i = 0; i < u.count; i++) {
     const s = u.start[i] as number
+    const n = perCycle(i)
     for (let c = s; c < s + (u.length[i] as number); c++) {
-      for (let k = 0; k < perCycle(i); k++) {
+      for (let k = 0; k < n; k++) {
         const j = at[c]!++
         uses.cycle[j] = c
         uses.resource[j] = u.resource[i] as number

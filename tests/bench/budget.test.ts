@@ -35,6 +35,13 @@ describe('usesOf: the uses behind usage rows (scripts/bench/budget.ts)', () => {
     expect(Array.from(u.inst)).toEqual([3, 3, 4, 4, 4, 4, 5, 4, 4])
     expect(u.resources).toBe(3)
   })
+
+  it('keeps the uses of a row that reaches past the last cycle of the run', () => {
+    // A divider's beat at cycle 4 holds its unit for 3 cycles (one row of length 3) in a run of 5 cycles.
+    const u = usesOf(traceOf(['unit'], [{ resource: 0, start: 4, length: 3, amount: 1, instruction: 1 }], 5))
+    expect(u.count).toBe(3)
+    expect(Array.from(u.cycle)).toEqual([4, 5, 6])
+  })
 })
 
 describe('budgetRow: how a run must spend its time at the target (scripts/bench/budget.ts)', () => {
