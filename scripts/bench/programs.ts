@@ -61,10 +61,13 @@ ${body.map((l) => `    ${l}`).join('\n')}
 `
 }
 
+/** The reductions reductionHeavy runs (and reduction-floor.ts times): 125 rounds of 8. */
+export const REDUCTIONS = 1000
+
 /** Unordered FP reductions, each of 256 elements, into 8 independent destinations: lanes meet over the ring every time. */
 export function reductionHeavy(): string {
   const body = [8, 10, 12, 14, 16, 18, 20, 22].map((d) => `vfredusum.vs v${d}, v2, v4`)
-  return loop('1,000 unordered FP64 sums of 256 elements', body, 125)
+  return loop('1,000 unordered FP64 sums of 256 elements', body, REDUCTIONS / body.length)
 }
 
 /** Unit-stride loads and stores of 256 doubles, nothing between them: bound by the load and store buses. */

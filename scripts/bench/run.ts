@@ -16,6 +16,10 @@
  *      target" table (budget.ts): what a run may take at the target, and how
  *      its usage spans, the loop's work for the lanes it times and the rest of
  *      the model share it, beside the least usage trace of its own uses.
+ *      Then the least model of the reductions (reduction-floor.ts: the same
+ *      rules, written for that stream alone in typed arrays), timed the same
+ *      way beside the loop, with the least usage recorder and without usage
+ *      spans: how close any cycle-stepped model of those lanes gets to 0.5.
  *   2. The sweep API: set-up (prepareRun: assemble + execute) and one point
  *      (timePrepared) of the long stream, timed apart.
  *   3. Peak heap of a 100,000-instruction strip-mined run; target <= 256 MiB.
@@ -31,8 +35,9 @@ import { prepareRun, timePrepared, timePreparedMetrics, type PreparedRun } from 
 import { simulate } from '../../shared/sim/timing/simulate'
 import { bareLoop } from './bare-loop'
 import { budgetRow, leastTraceMs, timedLanes, type Uses, usesOf } from './budget'
-import { bankBound, examplePrograms, longStream, longStreamAt, memoryBound, reductionHeavy } from './programs'
+import { bankBound, examplePrograms, longStream, longStreamAt, memoryBound, REDUCTIONS, reductionHeavy } from './programs'
 import { median } from './median'
+import { reductionFloor } from './reduction-floor'
 
 const RUNS = 7
 const WARMUP = 2
@@ -144,6 +149,29 @@ function workloadRow(w: Workload, lanes: number): PairedRow {
   }
 }
 
+/** The least model of the reductions beside the loop, as workloadRow times a workload: best over best, and the median pair. */
+function floorRow(lanes: number, recordUsage: boolean): { cycles: number; ms: number; ratio: number; pairedRatio: number } {
+  let sink = 0
+  let cycles = 0
+  const bareMs: number[] = []
+  const ms: number[] = []
+  for (let i = 0; i < WORKLOAD_RUNS + WORKLOAD_WARMUP; i++) {
+    const t0 = performance.now()
+    sink += bareLoop(lanes, BARE_CYCLES)
+    const t1 = performance.now()
+    cycles = reductionFloor(defaults, REDUCTIONS, recordUsage).cycles
+    const t2 = performance.now()
+    if (i >= WORKLOAD_WARMUP) {
+      bareMs.push(t1 - t0)
+      ms.push(t2 - t1)
+    }
+  }
+  if (sink < 0) throw new Error('unreachable: keeps the loop alive')
+  const rate = (m: number) => (cycles * defaults.lanes) / m
+  const bareRate = (m: number) => (lanes * BARE_CYCLES) / m
+  return { cycles, ms: Math.min(...ms), ratio: rate(Math.min(...ms)) / bareRate(Math.min(...bareMs)), pairedRatio: median(ms.map((m, i) => rate(m) / bareRate(bareMs[i] as number))) }
+}
+
 function bareRow(lanes: number, cycles: number): Row {
   let sink = 0
   const ms = timeIt(() => (sink += bareLoop(lanes, cycles)))
@@ -208,6 +236,18 @@ table([
     const b = budgetRow({ lanes: defaults.lanes, timed: r.timed, cycles: r.cycles, bareMs: r.bareMedianMs, bareLaneCycles: defaults.lanes * BARE_CYCLES, runMs: r.medianMs, noUsageMs: r.noUsageMs, leastUsageMs: r.leastUsageMs, target: TARGET_RATIO })
     const ms = (x: number) => `${fmt(x)} ms`
     return [r.name, String(r.timed), ms(r.medianMs), ms(b.atTarget), ms(b.usage), ms(r.leastUsageMs), ms(b.loopWork), ms(b.left), ms(b.leftLeast), ms(b.restNow)]
+  }),
+])
+
+// The least model of the reductions (reduction-floor.ts) beside the engine's row.
+const engineReductions = rows.find((r) => r.name.startsWith('reduction-heavy')) as PairedRow
+table([
+  [`1,000 vfredusum.vs, vl 256 (best of ${WORKLOAD_RUNS} beside the loop)`, 'cycles', 'time', 'ratio', 'paired ratio (median)', `>= ${TARGET_RATIO}`],
+  ['the engine, usage spans recorded', fmt(engineReductions.cycles, 0), `${fmt(engineReductions.ms)} ms`, fmt(engineReductions.ratio, 2), fmt(engineReductions.pairedRatio, 2), engineReductions.ratio >= TARGET_RATIO ? 'yes' : 'no'],
+  ...([true, false] as const).map((recordUsage) => {
+    const f = floorRow(defaults.lanes, recordUsage)
+    const label = recordUsage ? 'the least model, least usage recorder' : 'the least model, no usage spans'
+    return [label, fmt(f.cycles, 0), `${fmt(f.ms)} ms`, fmt(f.ratio, 2), fmt(f.pairedRatio, 2), f.ratio >= TARGET_RATIO ? 'yes' : 'no']
   }),
 ])
 
