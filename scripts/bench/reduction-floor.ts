@@ -16,9 +16,7 @@
  * vd[0] written through a bank port. Every lane-cycle is classified busy or
  * stalled with one reason, and every refusal counted per instruction. With
  * `recordUsage` it records each use of a unit, bank or link into the least
- * span table there can be (per resource one open span, extended by the same
- * instruction's use in the next cycle, else closed into a row; the engine
- * also keeps amounts and write marks), and stall spans the same way.
+ * span table there can be (`spanTable`), and stall spans the same way.
  *
  * All state lives in typed arrays made once per run, instructions in a ring
  * of slots; nothing is allocated per cycle, no object stands for an
@@ -67,6 +65,53 @@ const REASONS = STALL_REASONS.length
 const RANK: Int8Array = STALL_RANK
 const NONE = -1
 const PENDING = 0x7fffffff
+
+/**
+ * The least span recorder: per key (a resource, a lane) one open span,
+ * extended by a use of the same instruction and tag in the cycle after its
+ * end, else closed into a row of start, length, instruction, tag and key.
+ * The engine's SpanRecorder also keeps amounts and write marks.
+ */
+function spanTable(keys: number) {
+  const inst = new Int32Array(keys).fill(NONE)
+  const tag = new Int32Array(keys)
+  const start = new Int32Array(keys)
+  const end = new Int32Array(keys)
+  let table = new Int32Array(5 * 1024)
+  let closed = 0
+  return {
+    add(key: number, c: number, i: number, t: number): void {
+      if (inst[key] === i && tag[key] === t && end[key] === c) {
+        end[key] = c + 1
+        return
+      }
+      if ((inst[key] as number) >= 0) {
+        if ((closed + 1) * 5 > table.length) {
+          const grown = new Int32Array(table.length * 2)
+          grown.set(table)
+          table = grown
+        }
+        const o = closed * 5
+        table[o] = start[key] as number
+        table[o + 1] = (end[key] as number) - (start[key] as number)
+        table[o + 2] = inst[key] as number
+        table[o + 3] = tag[key] as number
+        table[o + 4] = key
+        closed++
+      }
+      inst[key] = i
+      tag[key] = t
+      start[key] = c
+      end[key] = c + 1
+    },
+    /** Rows, counting the spans still open (the engine closes them when it builds the trace). */
+    rows(): number {
+      let open = 0
+      for (let k = 0; k < keys; k++) if ((inst[k] as number) >= 0) open++
+      return closed + open
+    },
+  }
+}
 
 /** Throws unless the machine is one the floor is written for (the defaults in these respects). */
 function check(m: Machine): void {
@@ -164,70 +209,19 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
   const opStalls = new Int32Array(count * REASONS)
   const stallTotals = new Float64Array(REASONS)
 
-  // Usage spans: per resource one open span; rows of start, length, instruction, resource.
+  // Usage spans per resource and stall spans per lane, each use or stall also counted in the totals.
   const resources = L * (UNITS + banks) + L
   const linkBase = L * (UNITS + banks)
   const totals = new Float64Array(resources)
-  const uInst = new Int32Array(resources).fill(NONE)
-  const uStart = new Int32Array(resources)
-  const uEnd = new Int32Array(resources)
-  let uRows = new Int32Array(4 * 4096)
-  let usageRows = 0
+  const usage = spanTable(resources)
+  const stalls = spanTable(L)
   const use = (r: number, c: number, inst: number): void => {
     totals[r] = (totals[r] as number) + 1
-    if (!recordUsage) return
-    if (uInst[r] === inst && uEnd[r] === c) {
-      uEnd[r] = c + 1
-      return
-    }
-    if ((uInst[r] as number) >= 0) {
-      if ((usageRows + 1) * 4 > uRows.length) {
-        const grown = new Int32Array(uRows.length * 2)
-        grown.set(uRows)
-        uRows = grown
-      }
-      const o = usageRows * 4
-      uRows[o] = uStart[r] as number
-      uRows[o + 1] = (uEnd[r] as number) - (uStart[r] as number)
-      uRows[o + 2] = uInst[r] as number
-      uRows[o + 3] = r
-      usageRows++
-    }
-    uInst[r] = inst
-    uStart[r] = c
-    uEnd[r] = c + 1
+    if (recordUsage) usage.add(r, c, inst, 0)
   }
-  // Stall spans: per lane one open span; rows of start, length, instruction, reason, lane.
-  const stReason = new Int32Array(L).fill(NONE)
-  const stInst = new Int32Array(L)
-  const stStart = new Int32Array(L)
-  const stEnd = new Int32Array(L)
-  let stRows = new Int32Array(5 * 1024)
-  let stallRows = 0
   const stall = (l: number, c: number, reason: number, inst: number): void => {
     stallTotals[reason] = (stallTotals[reason] as number) + 1
-    if (stReason[l] === reason && stInst[l] === inst && stEnd[l] === c) {
-      stEnd[l] = c + 1
-      return
-    }
-    if ((stReason[l] as number) >= 0) {
-      if ((stallRows + 1) * 5 > stRows.length) {
-        const grown = new Int32Array(stRows.length * 2)
-        grown.set(stRows)
-        stRows = grown
-      }
-      const o = stallRows * 5
-      stRows[o] = stStart[l] as number
-      stRows[o + 1] = (stEnd[l] as number) - (stStart[l] as number)
-      stRows[o + 2] = stInst[l] as number
-      stRows[o + 3] = stReason[l] as number
-      stRows[o + 4] = l
-      stallRows++
-    }
-    stReason[l] = reason
-    stInst[l] = inst
-    stStart[l] = c
-    stEnd[l] = c + 1
+    stalls.add(l, c, inst, reason)
   }
 
   let c = 0
@@ -558,8 +552,5 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
     }
     c++
   }
-  // The spans still open at the end are rows too (the engine closes them when it builds the trace).
-  for (let r = 0; r < resources; r++) if ((uInst[r] as number) >= 0) usageRows++
-  for (let l = 0; l < L; l++) if ((stReason[l] as number) >= 0) stallRows++
-  return { cycles: c, busy, usageRows, stallRows, stallCycles: stallTotals }
+  return { cycles: c, busy, usageRows: usage.rows(), stallRows: stalls.rows(), stallCycles: stallTotals }
 }
