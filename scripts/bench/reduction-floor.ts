@@ -65,6 +65,12 @@ const REASONS = STALL_REASONS.length
 const RANK: Int8Array = STALL_RANK
 const NONE = -1
 const PENDING = 0x7fffffff
+/** Where an instruction's running value is (as the engine's ReductionInst stages). */
+const FOLDING = 0 // lanes fold their beats and combine their accumulators
+const SEND = 1 // the value waits in lane sPos to be sent down the ring
+const ADD = 2 // the value is on its way to lane sPos, added there on arrival
+const FINAL = 3 // lane 0 adds vs1[0]
+const WRITE = 4 // lane 0 writes vd[0]
 
 /**
  * The least span recorder: per key (a resource, a lane) one open span,
@@ -164,7 +170,7 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
   const sDispatch = new Int32Array(SLOTS)
   const sVd = new Int32Array(SLOTS)
   const sOldVd = new Int32Array(SLOTS)
-  /** 0: lanes folding, 1: value waits in lane sPos to be sent down, 2: on its way to sPos, 3: lane 0 adds vs1[0], 4: vd[0] written. */
+  /** FOLDING, SEND, ADD, FINAL or WRITE. */
   const sStage = new Int32Array(SLOTS)
   const sPos = new Int32Array(SLOTS)
   const sValueAt = new Int32Array(SLOTS)
@@ -277,7 +283,7 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
     while (first < dispatched && sSeq[first % SLOTS] !== first) first++
     for (let seq = first; seq < dispatched; seq++) {
       const k = seq % SLOTS
-      if (sStage[k] !== 1 || sSeq[k] !== seq || c < (sValueAt[k] as number)) continue
+      if (sStage[k] !== SEND || sSeq[k] !== seq || c < (sValueAt[k] as number)) continue
       const from = sPos[k] as number
       if (downBooked[from - 1] === c) {
         deny(from, k, R_RING)
@@ -289,14 +295,14 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
       finishLane(k, from)
       sPos[k] = from - 1
       sValueAt[k] = c + hop
-      sStage[k] = 2
+      sStage[k] = ADD
     }
     for (let l = 0; l < L; l++) {
       const b = l * SLOTS
-      // Writes: lane 0 writes vd[0]; other lanes done with their own work wait on the ring.
+      // Writes: lane 0 writes vd[0] once the last add is done (a lane waiting on the ring is found when classified).
       for (let i = 0; i < (nActive[l] as number); i++) {
         const k = active[b + i] as number
-        if (l !== 0 || sStage[k] !== 4) continue
+        if (l !== 0 || sStage[k] !== WRITE) continue
         if ((sValueAt[k] as number) > c) {
           progress[l] = 1
           continue
@@ -357,10 +363,10 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
           if ((partials[j] as number) <= 1) {
             if (!pending && i1 >= 0) laneValue[j] = acc[base + i1] as number
             else progress[l] = 1
-            if (l === L - 1 && (laneValue[j] as number) >= 0 && sStage[k] === 0) {
+            if (l === L - 1 && (laneValue[j] as number) >= 0 && sStage[k] === FOLDING) {
               sPos[k] = l
               sValueAt[k] = laneValue[j] as number
-              sStage[k] = 1
+              sStage[k] = SEND
             }
             continue
           }
@@ -376,20 +382,20 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
           partials[j] = (partials[j] as number) - 1
           continue
         }
-        if (sStage[k] === 2 && sPos[k] === l && c >= (sValueAt[k] as number) && (laneValue[j] as number) <= c) {
+        if (sStage[k] === ADD && sPos[k] === l && c >= (sValueAt[k] as number) && (laneValue[j] as number) <= c) {
           fpuFree[l] = c + 1
           use(fpu, c, seq)
           progress[l] = 1
           sValueAt[k] = c + D
-          sStage[k] = l === 0 ? 3 : 1
+          sStage[k] = l === 0 ? FINAL : SEND
           continue
         }
-        if (sStage[k] === 3 && l === 0 && c >= (sValueAt[k] as number) && sVs1Read[k] === 1) {
+        if (sStage[k] === FINAL && l === 0 && c >= (sValueAt[k] as number) && sVs1Read[k] === 1) {
           fpuFree[l] = c + 1
           use(fpu, c, seq)
           progress[l] = 1
           sValueAt[k] = c + D
-          sStage[k] = 4
+          sStage[k] = WRITE
         }
       }
       // Issue (staggered): the next instruction starts the cycle after the lane finished reading the previous one.
@@ -464,7 +470,7 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
       else {
         sSeq[k] = dispatched
         sDispatch[k] = c
-        sStage[k] = 0
+        sStage[k] = FOLDING
         sStarted[k] = 0
         sDone[k] = 0
         sVs1Read[k] = 0
