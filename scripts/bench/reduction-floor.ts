@@ -180,7 +180,6 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
   const sWritten = new Uint8Array(SLOTS)
   // Per slot and lane ([slot * L + lane]).
   const readCnt = new Int32Array(SLOTS * L)
-  const consumed = new Int32Array(SLOTS * L)
   const beats = new Int32Array(SLOTS * L)
   const partials = new Int32Array(SLOTS * L)
   const laneValue = new Int32Array(SLOTS * L)
@@ -241,6 +240,12 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
     noteReason[j] = reason
     denied[l * SLOTS + (nDenied[l] as number)] = k
     nDenied[l] = (nDenied[l] as number) + 1
+  }
+  /** The lane's FPU takes an operation of instruction `seq` this cycle (a beat, a combine or an add). */
+  const beat = (l: number, fpu: number, seq: number): void => {
+    fpuFree[l] = c + 1
+    use(fpu, c, seq)
+    progress[l] = 1
   }
   const grant = (l: number, bank: number): boolean => {
     const k = l * banks + bank
@@ -308,11 +313,12 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
           continue
         }
         const p = sVd[k] as number
-        if (!grant(0, p % banks)) {
+        const bank = p % banks
+        if (!grant(0, bank)) {
           deny(0, k, R_BANK)
           continue
         }
-        use(UNITS + (p % banks), c, sSeq[k] as number)
+        use(UNITS + bank, c, sSeq[k] as number)
         ready[p * L * wpr] = c + 1
         progress[0] = 1
         sWritten[k] = 1
@@ -334,11 +340,8 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
             progress[l] = 1 // the accumulator's previous add is in the pipeline
             continue
           }
-          fpuFree[l] = c + 1
-          use(fpu, c, seq)
-          progress[l] = 1
+          beat(l, fpu, seq)
           acc[a] = c + D
-          consumed[j] = done + 1
           beats[j] = done + 1
           if (done + 1 === words) partials[j] = combines + 1
           continue
@@ -374,26 +377,20 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
             progress[l] = 1
             continue
           }
-          fpuFree[l] = c + 1
-          use(fpu, c, seq)
-          progress[l] = 1
+          beat(l, fpu, seq)
           acc[base + i1] = c + D
           acc[base + i2] = NONE
           partials[j] = (partials[j] as number) - 1
           continue
         }
         if (sStage[k] === ADD && sPos[k] === l && c >= (sValueAt[k] as number) && (laneValue[j] as number) <= c) {
-          fpuFree[l] = c + 1
-          use(fpu, c, seq)
-          progress[l] = 1
+          beat(l, fpu, seq)
           sValueAt[k] = c + D
           sStage[k] = l === 0 ? FINAL : SEND
           continue
         }
         if (sStage[k] === FINAL && l === 0 && c >= (sValueAt[k] as number) && sVs1Read[k] === 1) {
-          fpuFree[l] = c + 1
-          use(fpu, c, seq)
-          progress[l] = 1
+          beat(l, fpu, seq)
           sValueAt[k] = c + D
           sStage[k] = WRITE
         }
@@ -430,7 +427,8 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
         let readAny = false
         let full = false
         if (w < words) {
-          if (w - (consumed[j] as number) >= depth) full = true
+          // A beat takes one element, one word: the queue holds the words read and not yet beaten.
+          if (w - (beats[j] as number) >= depth) full = true
           else {
             const bank = vs2Bank[w] as number
             if ((ready[(vs2Word[w] as number) + l * wpr] as number) > c) deny(l, k, R_RAW)
@@ -478,7 +476,6 @@ export function reductionFloor(m: Machine, count: number, recordUsage: boolean, 
         for (let l = 0; l < L; l++) {
           const j = k * L + l
           readCnt[j] = 0
-          consumed[j] = 0
           beats[j] = 0
           partials[j] = 0
           laneValue[j] = NONE

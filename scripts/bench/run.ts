@@ -33,8 +33,9 @@ import { fileURLToPath } from 'node:url'
 import { parseMachine, type Machine, type MachineInput } from '../../shared/schemas/machine'
 import { prepareRun, timePrepared, timePreparedMetrics, type PreparedRun } from '../../shared/sim/run'
 import { simulate } from '../../shared/sim/timing/simulate'
+import type { TimingTrace } from '../../shared/sim/trace/types'
 import { bareLoop } from './bare-loop'
-import { budgetRow, leastTraceMs, timedLanes, type Uses, usesOf } from './budget'
+import { budgetRow, leastTraceMs, timedLanes, usesOf } from './budget'
 import { bankBound, examplePrograms, longStream, longStreamAt, memoryBound, REDUCTIONS, reductionHeavy } from './programs'
 import { median } from './median'
 import { reductionFloor } from './reduction-floor'
@@ -100,76 +101,83 @@ interface PairedRow extends Row {
   leastUsageMs: number
 }
 
-function workloadRow(w: Workload, lanes: number): PairedRow {
-  const machine = parseMachine(w.machine)
-  const p = prepare(w.name, w.text, machine)
-  let cycles = 0
-  let uses: Uses | null = null
+/**
+ * Alternates the bare loop with `parts`, timed one after another (loop,
+ * parts, loop, parts, ...), over WORKLOAD_RUNS pairs after WORKLOAD_WARMUP,
+ * so that the loop and the parts see the same load: the loop's milliseconds
+ * and each part's, after the warm-ups.
+ */
+function besideLoop(lanes: number, parts: (() => void)[]): { bareMs: number[]; partMs: number[][] } {
   let sink = 0
   const bareMs: number[] = []
-  const ms: number[] = []
-  const pointMs: number[] = []
-  const noUsageMs: number[] = []
+  const partMs = parts.map((): number[] => [])
   for (let i = 0; i < WORKLOAD_RUNS + WORKLOAD_WARMUP; i++) {
     const t0 = performance.now()
     sink += bareLoop(lanes, BARE_CYCLES)
-    const t1 = performance.now()
-    const r = simulate(p.stream, machine)
-    const t2 = performance.now()
-    // What runPoint (shared/sweep/runPoint.ts) times for one point of a sweep.
-    const point = timePreparedMetrics(p, machine, { recordUsage: false })
-    const t3 = performance.now()
-    // The same run without usage spans: what recording them costs in place (budget.ts).
-    const noUsage = simulate(p.stream, machine, { recordUsage: false })
-    const t4 = performance.now()
-    if (noUsage.error) throw new Error(`${w.name} without usage spans: ${noUsage.error.message}`)
-    if (r.error) throw new Error(`${w.name}: ${r.error.message}`)
-    if (!point.ok) throw new Error(`${w.name} as a sweep point: ${point.error.message}`)
-    cycles = r.trace.cycles
-    uses ??= usesOf(r.trace)
-    if (i >= WORKLOAD_WARMUP) {
-      bareMs.push(t1 - t0)
-      ms.push(t2 - t1)
-      pointMs.push(t3 - t2)
-      noUsageMs.push(t4 - t3)
+    let t = performance.now()
+    const kept = i >= WORKLOAD_WARMUP
+    if (kept) bareMs.push(t - t0)
+    for (let k = 0; k < parts.length; k++) {
+      ;(parts[k] as () => void)()
+      const now = performance.now()
+      if (kept) (partMs[k] as number[]).push(now - t)
+      t = now
     }
   }
   if (sink < 0) throw new Error('unreachable: keeps the loop alive')
+  return { bareMs, partMs }
+}
+
+/** A part's rate over the loop's, for `laneCycles` of it against the loop's: best over best, and the median of adjacent pairs. */
+function ratioToLoop(laneCycles: number, ms: number[], bareLaneCycles: number, bareMs: number[]): { ratio: number; pairedRatio: number } {
+  const ratio = (m: number, bare: number) => laneCycles / m / (bareLaneCycles / bare)
+  return { ratio: ratio(Math.min(...ms), Math.min(...bareMs)), pairedRatio: median(ms.map((m, i) => ratio(m, bareMs[i] as number))) }
+}
+
+function workloadRow(w: Workload, lanes: number): PairedRow {
+  const machine = parseMachine(w.machine)
+  const p = prepare(w.name, w.text, machine)
+  // The last run's trace: its cycles, and the uses for the least usage trace (read after the timing).
+  const last: { trace?: TimingTrace } = {}
+  const { bareMs, partMs } = besideLoop(lanes, [
+    () => {
+      const r = simulate(p.stream, machine)
+      if (r.error) throw new Error(`${w.name}: ${r.error.message}`)
+      last.trace = r.trace
+    },
+    () => {
+      // What runPoint (shared/sweep/runPoint.ts) times for one point of a sweep.
+      const point = timePreparedMetrics(p, machine, { recordUsage: false })
+      if (!point.ok) throw new Error(`${w.name} as a sweep point: ${point.error.message}`)
+    },
+    () => {
+      // The same run without usage spans: what recording them costs in place (budget.ts).
+      const noUsage = simulate(p.stream, machine, { recordUsage: false })
+      if (noUsage.error) throw new Error(`${w.name} without usage spans: ${noUsage.error.message}`)
+    },
+  ])
+  const [ms, pointMs, noUsageMs] = partMs as [number[], number[], number[]]
+  const trace = last.trace as TimingTrace
+  const cycles = trace.cycles
   const laneCycles = cycles * machine.lanes
   const bareLaneCycles = lanes * BARE_CYCLES
   const best = Math.min(...ms)
   const bareRate = bareLaneCycles / (Math.min(...bareMs) / 1000)
-  const rate = laneCycles / (best / 1000)
-  const pairs = ms.map((m, i) => laneCycles / m / (bareLaneCycles / (bareMs[i] as number)))
-  const pointRate = laneCycles / (Math.min(...pointMs) / 1000)
+  const { ratio, pairedRatio } = ratioToLoop(laneCycles, ms, bareLaneCycles, bareMs)
   return {
-    name: w.name, cycles, laneCycles, ms: best, rate, bareRate, ratio: rate / bareRate, pairedRatio: median(pairs), pointRatio: pointRate / bareRate,
+    name: w.name, cycles, laneCycles, ms: best, rate: laneCycles / (best / 1000), bareRate, ratio, pairedRatio,
+    pointRatio: ratioToLoop(laneCycles, pointMs, bareLaneCycles, bareMs).ratio,
     timed: timedLanes(p.stream, machine), bareMedianMs: median(bareMs), medianMs: median(ms), noUsageMs: median(noUsageMs),
-    leastUsageMs: leastTraceMs(uses as Uses, LEAST_TRACE_RUNS, LEAST_TRACE_WARMUP),
+    leastUsageMs: leastTraceMs(usesOf(trace), LEAST_TRACE_RUNS, LEAST_TRACE_WARMUP),
   }
 }
 
-/** The least model of the reductions beside the loop, as workloadRow times a workload: best over best, and the median pair. */
+/** The least model of the reductions beside the loop, timed and judged as workloadRow times a workload. */
 function floorRow(lanes: number, recordUsage: boolean): { cycles: number; ms: number; ratio: number; pairedRatio: number } {
-  let sink = 0
   let cycles = 0
-  const bareMs: number[] = []
-  const ms: number[] = []
-  for (let i = 0; i < WORKLOAD_RUNS + WORKLOAD_WARMUP; i++) {
-    const t0 = performance.now()
-    sink += bareLoop(lanes, BARE_CYCLES)
-    const t1 = performance.now()
-    cycles = reductionFloor(defaults, REDUCTIONS, recordUsage).cycles
-    const t2 = performance.now()
-    if (i >= WORKLOAD_WARMUP) {
-      bareMs.push(t1 - t0)
-      ms.push(t2 - t1)
-    }
-  }
-  if (sink < 0) throw new Error('unreachable: keeps the loop alive')
-  const rate = (m: number) => (cycles * defaults.lanes) / m
-  const bareRate = (m: number) => (lanes * BARE_CYCLES) / m
-  return { cycles, ms: Math.min(...ms), ratio: rate(Math.min(...ms)) / bareRate(Math.min(...bareMs)), pairedRatio: median(ms.map((m, i) => rate(m) / bareRate(bareMs[i] as number))) }
+  const { bareMs, partMs } = besideLoop(lanes, [() => (cycles = reductionFloor(defaults, REDUCTIONS, recordUsage).cycles)])
+  const ms = partMs[0] as number[]
+  return { cycles, ms: Math.min(...ms), ...ratioToLoop(cycles * defaults.lanes, ms, lanes * BARE_CYCLES, bareMs) }
 }
 
 function bareRow(lanes: number, cycles: number): Row {
